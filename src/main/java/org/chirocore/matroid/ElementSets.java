@@ -61,6 +61,11 @@ public final class ElementSets {
         return Arrays.binarySearch(set, e) >= 0;
     }
 
+    /** The mask of the elements {@code 0..n-1}, for n ≤ 64. */
+    public static long allMask(int n) {
+        return n == 64 ? -1L : (1L << n) - 1;
+    }
+
     /** The elements {@code 0..n-1}. */
     public static int[] range(int n) {
         int[] out = new int[n];

@@ -1,0 +1,115 @@
+package org.chirocore.orient;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The clauses of a 3-term Grassmann–Plücker relation under the certificate encoding: variable v
+ * true means χ(basis v) = +1; no auxiliary variables. A term s·χ(B1)·χ(B2) is +1 exactly when the
+ * parity of "B1 is negative" and "B2 is negative" equals [s = −1]. With two non-zero terms the
+ * relation says they are opposite: a parity constraint on 4 variables, 8 clauses of 4 literals.
+ * With three it forbids "all +1" and "all −1": 8 clauses of 6 literals each, 16 in all.
+ *
+ * <p>Canonical clause order (part of the certificate format): the non-zero terms in the order
+ * (a,b)(c,d), (a,c)(b,d), (a,d)(b,c); within a term its two bases in that order. For two terms,
+ * the 16 assignments of the four "negative" bits are run through in binary order, first basis
+ * most significant, and each one of wrong parity yields the clause excluding it. For three terms,
+ * the pattern all-(+1) comes first, then all-(−1); within a pattern, the three free bits (the
+ * first basis of each term) are run through in binary order, and the second basis of each term
+ * is determined by the pattern. A clause excluding an assignment lists, per basis in order, the
+ * literal +v if the basis was negative in it and −v if positive.
+ */
+public final class ClauseEncoding {
+    private ClauseEncoding() {
+    }
+
+    /**
+     * The clauses of {@code relation}, in canonical order; empty when all its terms vanish.
+     *
+     * @throws IllegalArgumentException when exactly one term is non-zero, which no matroid allows
+     *     (basis exchange) and so shows that the basis list is not a matroid's
+     */
+    public static List<int[]> clauses(BasisIndex index, GpRelation relation) {
+        long x = relation.x();
+        int[][] pairs = {
+            {relation.a(), relation.b()}, {relation.c(), relation.d()},
+            {relation.a(), relation.c()}, {relation.b(), relation.d()},
+            {relation.a(), relation.d()}, {relation.b(), relation.c()},
+        };
+        int[] termSign = {1, -1, 1};
+        List<int[]> vars = new ArrayList<>();
+        List<Integer> negated = new ArrayList<>();
+        for (int t = 0; t < 3; t++) {
+            int[] p = pairs[2 * t];
+            int[] q = pairs[2 * t + 1];
+            int v1 = index.variable(x | (1L << p[0]) | (1L << p[1]));
+            int v2 = index.variable(x | (1L << q[0]) | (1L << q[1]));
+            if (v1 != 0 && v2 != 0) {
+                int s = termSign[t] * permutationSign(x, p[0], p[1]) * permutationSign(x, q[0], q[1]);
+                vars.add(new int[] {v1, v2});
+                negated.add(s < 0 ? 1 : 0);
+            }
+        }
+        List<int[]> out = new ArrayList<>();
+        switch (vars.size()) {
+            case 0 -> {
+                return out;
+            }
+            case 2 -> {
+                int[] v = {vars.get(0)[0], vars.get(0)[1], vars.get(1)[0], vars.get(1)[1]};
+                int required = 1 ^ negated.get(0) ^ negated.get(1);
+                for (int bits = 0; bits < 16; bits++) {
+                    if ((Integer.bitCount(bits) & 1) != required) {
+                        out.add(excluding(v, bits));
+                    }
+                }
+            }
+            case 3 -> {
+                int[] v = new int[6];
+                for (int t = 0; t < 3; t++) {
+                    v[2 * t] = vars.get(t)[0];
+                    v[2 * t + 1] = vars.get(t)[1];
+                }
+                for (int pattern = 0; pattern < 2; pattern++) {
+                    for (int free = 0; free < 8; free++) {
+                        int bits = 0;
+                        for (int t = 0; t < 3; t++) {
+                            int first = (free >> (2 - t)) & 1;
+                            // the term is +1 iff first ^ second == negated; pattern 1 wants −1
+                            int second = first ^ negated.get(t) ^ pattern;
+                            bits |= first << (5 - 2 * t);
+                            bits |= second << (4 - 2 * t);
+                        }
+                        out.add(excluding(v, bits));
+                    }
+                }
+            }
+            default -> throw new IllegalArgumentException("Relation " + relation
+                    + " has exactly one non-zero term, which basis exchange rules out: the support is not a matroid.");
+        }
+        return out;
+    }
+
+    /** The clause false exactly under the assignment whose "negative" bits are {@code bits} (first variable highest). */
+    private static int[] excluding(int[] vars, int bits) {
+        int[] clause = new int[vars.length];
+        for (int i = 0; i < vars.length; i++) {
+            boolean negative = ((bits >> (vars.length - 1 - i)) & 1) == 1;
+            clause[i] = negative ? vars[i] : -vars[i];
+        }
+        return clause;
+    }
+
+    /**
+     * The sign of the permutation sorting the tuple (x, p, q), x the sorted tuple of X and p < q
+     * outside X: moving p, then q, into place passes every element of X above each of them.
+     */
+    static int permutationSign(long x, int p, int q) {
+        return ((above(x, p) + above(x, q)) & 1) == 0 ? 1 : -1;
+    }
+
+    /** The number of elements of X greater than {@code e}. */
+    static int above(long x, int e) {
+        return Long.bitCount(x >>> e >>> 1);
+    }
+}

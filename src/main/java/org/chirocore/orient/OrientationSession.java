@@ -1,0 +1,194 @@
+package org.chirocore.orient;
+
+import java.util.Arrays;
+import java.util.List;
+
+import org.chirocore.matroid.ElementSets;
+
+import org.sat4j.core.VecInt;
+import org.sat4j.minisat.SolverFactory;
+import org.sat4j.specs.ContradictionException;
+import org.sat4j.specs.ISolver;
+import org.sat4j.specs.IVecInt;
+import org.sat4j.specs.TimeoutException;
+
+/**
+ * An incremental search for a chirotope on the bases of one matroid, with relations added
+ * lazily: solve on the relations known so far, check the model against every relation among
+ * the active elements, add the violated ones, repeat. With element selectors, each relation's
+ * clauses are guarded by "all its elements are kept", so one session answers for every
+ * restriction M|S of full rank (a relation of M lies in M|S iff it mentions no element outside
+ * S), and an unsatisfiable answer comes with the elements the solver needed.
+ *
+ * <p>This class is the only one that talks to sat4j; it turns sat4j's exceptions into answers:
+ * a contradiction while adding clauses is unsatisfiability, a time-out is "unknown".
+ */
+public final class OrientationSession {
+    /** Violated relations added per round; bounds the memory one round may take. */
+    private static final int RELATIONS_PER_ROUND = 20_000;
+
+    /** The result of one {@link #solve}. */
+    public sealed interface Outcome {
+    }
+
+    /** A sign per variable satisfying every relation among the active elements. */
+    public record Satisfiable(byte[] signs) implements Outcome {
+    }
+
+    /**
+     * No chirotope: the active elements in {@code needed} already admit none (with selectors;
+     * without, {@code needed} is the whole active set).
+     */
+    public record Unsatisfiable(long needed) implements Outcome {
+    }
+
+    /** The budget ran out. */
+    public record OutOfBudget(String reason) implements Outcome {
+    }
+
+    private final BasisIndex index;
+    private final boolean selectors;
+    private final Budget budget;
+    private final ISolver solver;
+    private final RelationScan scan;
+    private final long started;
+    private boolean contradiction;
+    private long relations;
+    private long clauses;
+    private int rounds;
+    private long conflicts;
+
+    /**
+     * @param selectors whether relations are guarded by element selectors (needed for {@link #solve}
+     *     on a proper subset and for the elements an unsatisfiable answer needed)
+     */
+    public OrientationSession(BasisIndex index, boolean selectors, Budget budget) {
+        this.index = index;
+        this.selectors = selectors;
+        this.budget = budget;
+        this.solver = SolverFactory.newDefault();
+        this.scan = new RelationScan(index);
+        this.started = System.currentTimeMillis();
+        solver.newVar(index.basisCount() + (selectors ? index.size() : 0));
+        if (budget.conflictsPerCall() > 0) {
+            solver.setTimeoutOnConflicts(budget.conflictsPerCall());
+        }
+        for (int v : Normalisation.fixedVariables(index)) {
+            addClause(new int[] {v});
+        }
+    }
+
+    private int selector(int element) {
+        return index.basisCount() + 1 + element;
+    }
+
+    private void addClause(int[] clause) {
+        if (contradiction) {
+            return;
+        }
+        try {
+            solver.addClause(new VecInt(clause));
+            clauses++;
+        } catch (ContradictionException e) {
+            contradiction = true;
+        }
+    }
+
+    private void add(GpRelation relation) {
+        relations++;
+        int[] guard = selectors ? ElementSets.elements(relation.support()) : new int[0];
+        for (int[] c : ClauseEncoding.clauses(index, relation)) {
+            int[] clause = Arrays.copyOf(c, c.length + guard.length);
+            for (int i = 0; i < guard.length; i++) {
+                clause[c.length + i] = -selector(guard[i]);
+            }
+            addClause(clause);
+        }
+    }
+
+    /**
+     * Looks for a chirotope of the restriction to {@code active}, which must have full rank (all
+     * elements when the session has no selectors).
+     */
+    public Outcome solve(long active) {
+        long all = ElementSets.allMask(index.size());
+        if (!selectors && active != all) {
+            throw new IllegalArgumentException("A session without selectors decides the whole matroid only.");
+        }
+        IVecInt assumptions = new VecInt();
+        if (selectors) {
+            for (int e : ElementSets.elements(active)) {
+                assumptions.push(selector(e));
+            }
+        }
+        while (true) {
+            if (contradiction) {
+                return new Unsatisfiable(active);
+            }
+            long remaining = budget.millis() == 0 ? 0 : budget.millis() - (System.currentTimeMillis() - started);
+            if (budget.millis() > 0) {
+                if (remaining <= 0) {
+                    return new OutOfBudget("the time limit of " + budget.millis() + " ms ran out");
+                }
+                if (budget.conflictsPerCall() == 0) {
+                    solver.setTimeoutMs(remaining);
+                }
+            }
+            rounds++;
+            boolean sat;
+            try {
+                sat = solver.isSatisfiable(assumptions);
+            } catch (TimeoutException e) {
+                return new OutOfBudget(budget.conflictsPerCall() > 0
+                        ? "a solver call exceeded " + budget.conflictsPerCall() + " conflicts"
+                        : "the time limit of " + budget.millis() + " ms ran out");
+            } finally {
+                conflicts += conflictCount();
+            }
+            if (!sat) {
+                return new Unsatisfiable(selectors ? neededElements() : active);
+            }
+            byte[] signs = signsOfModel();
+            List<GpRelation> violated = scan.violated(signs, active, RELATIONS_PER_ROUND);
+            if (violated.isEmpty()) {
+                return new Satisfiable(signs);
+            }
+            violated.forEach(this::add);
+        }
+    }
+
+    private long conflictCount() {
+        Object c = solver.getStat().get("conflicts");
+        return c instanceof Number n ? n.longValue() : 0;
+    }
+
+    private long neededElements() {
+        IVecInt explanation = solver.unsatExplanation();
+        long needed = 0;
+        if (explanation != null) {
+            for (int i = 0; i < explanation.size(); i++) {
+                needed |= 1L << (Math.abs(explanation.get(i)) - index.basisCount() - 1);
+            }
+        }
+        return needed;
+    }
+
+    private byte[] signsOfModel() {
+        byte[] signs = new byte[index.basisCount()];
+        for (int v = 1; v <= signs.length; v++) {
+            signs[v - 1] = (byte) (solver.model(v) ? 1 : -1);
+        }
+        return signs;
+    }
+
+    /** Figures so far. */
+    public SolveStats stats() {
+        return new SolveStats(index.basisCount(), relations, clauses, rounds, conflicts,
+                System.currentTimeMillis() - started);
+    }
+
+    /** The basis index this session works on. */
+    public BasisIndex index() {
+        return index;
+    }
+}

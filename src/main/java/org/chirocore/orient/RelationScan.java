@@ -1,0 +1,138 @@
+package org.chirocore.orient;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.chirocore.matroid.ElementSets;
+
+/**
+ * Finds the 3-term Grassmann–Plücker relations that a sign assignment on the bases violates.
+ * For each (r−2)-set X the values χ(x, p, q) are tabulated once, so a full scan costs
+ * C(n, r−2)·C(n−r+2, 2) index lookups plus C(n, r−2)·C(n−r+2, 4) term evaluations, with no
+ * clause ever built: this is what keeps the lazy loop's memory bounded. Not thread-safe (it
+ * reuses its tables); create one per thread.
+ */
+final class RelationScan {
+    private final BasisIndex index;
+    private final int rank;
+    private int[][] table = new int[0][0];
+    private int[] rest = new int[0];
+
+    RelationScan(BasisIndex index) {
+        this.index = index;
+        this.rank = index.rank();
+    }
+
+    /**
+     * The relations among the elements of {@code active} that {@code signs} violates, at most
+     * {@code limit} of them, in scan order (X lexicographic, then a, b, c, d lexicographic).
+     *
+     * @param signs one sign per variable, index v − 1
+     */
+    List<GpRelation> violated(byte[] signs, long active, int limit) {
+        List<GpRelation> out = new ArrayList<>();
+        int[] elements = ElementSets.elements(active);
+        int n = elements.length;
+        int k = rank - 2;
+        if (k < 0 || n < rank + 2) {
+            return out;
+        }
+        if (table.length < n) {
+            table = new int[n][n];
+            rest = new int[n];
+        }
+        int[] comb = ElementSets.range(k);
+        do {
+            long x = 0;
+            for (int i : comb) {
+                x |= 1L << elements[i];
+            }
+            int m = tabulate(signs, x, elements);
+            if (m >= 4 && scan(x, m, out, limit)) {
+                return out;
+            }
+        } while (ElementSets.nextCombination(comb, n));
+        return out;
+    }
+
+    /**
+     * Fills {@code table[i][j]} = χ(x, rest[i], rest[j]) for the elements outside X that are not
+     * loops of M/X, and returns how many there are.
+     */
+    private int tabulate(byte[] signs, long x, int[] elements) {
+        int m = 0;
+        for (int e : elements) {
+            if ((x & (1L << e)) == 0) {
+                rest[m++] = e;
+            }
+        }
+        // parity[i]: parity of the number of elements of X above rest[i]; moving p then q behind
+        // the sorted x costs that many transpositions each.
+        int[] parity = new int[m];
+        for (int i = 0; i < m; i++) {
+            parity[i] = ClauseEncoding.above(x, rest[i]) & 1;
+        }
+        for (int i = 0; i < m; i++) {
+            table[i][i] = 0;
+            for (int j = i + 1; j < m; j++) {
+                int v = index.variable(x | (1L << rest[i]) | (1L << rest[j]));
+                int value = v == 0 ? 0 : ((parity[i] ^ parity[j]) == 0 ? signs[v - 1] : -signs[v - 1]);
+                table[i][j] = value;
+                table[j][i] = -value;
+            }
+        }
+        // Drop loops of M/X (all-zero rows): they take part in no non-trivial relation. Rows and
+        // columns are compacted in place; a row moves only to a position already read.
+        int[] keep = new int[m];
+        int kept = 0;
+        for (int i = 0; i < m; i++) {
+            boolean zero = true;
+            for (int j = 0; j < m && zero; j++) {
+                zero = table[i][j] == 0;
+            }
+            if (!zero) {
+                keep[kept++] = i;
+            }
+        }
+        for (int i = 0; i < kept; i++) {
+            int[] from = table[keep[i]];
+            int[] to = table[i];
+            for (int j = 0; j < kept; j++) {
+                to[j] = from[keep[j]];
+            }
+            rest[i] = rest[keep[i]];
+        }
+        return kept;
+    }
+
+    /** Scans the 4-subsets of rest[0..m); returns true when the limit was reached. */
+    private boolean scan(long x, int m, List<GpRelation> out, int limit) {
+        int[][] t = table;
+        for (int a = 0; a < m; a++) {
+            int[] ta = t[a];
+            for (int b = a + 1; b < m; b++) {
+                int[] tb = t[b];
+                int ab = ta[b];
+                for (int c = b + 1; c < m; c++) {
+                    int ac = ta[c];
+                    int bc = tb[c];
+                    int[] tc = t[c];
+                    for (int d = c + 1; d < m; d++) {
+                        int t1 = ab * tc[d];
+                        int t2 = -ac * tb[d];
+                        int t3 = ta[d] * bc;
+                        int pos = (t1 > 0 ? 1 : 0) + (t2 > 0 ? 1 : 0) + (t3 > 0 ? 1 : 0);
+                        int neg = (t1 < 0 ? 1 : 0) + (t2 < 0 ? 1 : 0) + (t3 < 0 ? 1 : 0);
+                        if ((pos == 0) != (neg == 0)) {
+                            out.add(new GpRelation(x, rest[a], rest[b], rest[c], rest[d]));
+                            if (out.size() >= limit) {
+                                return true;
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return false;
+    }
+}
