@@ -121,9 +121,12 @@ public final class OrientationSession {
                 assumptions.push(selector(e));
             }
         }
-        while (true) {
+        for (int round = 1;; round++) {
             if (contradiction) {
                 return new Unsatisfiable(active);
+            }
+            if (budget.rounds() > 0 && round > budget.rounds()) {
+                return new OutOfBudget("the limit of " + budget.rounds() + " solve-and-check rounds was reached");
             }
             long remaining = budget.millis() == 0 ? 0 : budget.millis() - (System.currentTimeMillis() - started);
             if (budget.millis() > 0) {

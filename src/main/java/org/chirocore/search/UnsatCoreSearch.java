@@ -1,0 +1,217 @@
+package org.chirocore.search;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Random;
+
+import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Matroid;
+import org.chirocore.matroid.Minor;
+import org.chirocore.orient.BasisIndex;
+import org.chirocore.orient.Chirotope;
+import org.chirocore.orient.LazySatDecider;
+import org.chirocore.orient.Orientability;
+import org.chirocore.orient.OrientationSession;
+import org.chirocore.orient.WitnessCheck;
+
+/**
+ * Reduces a non-orientable matroid to a minor-minimal non-orientable minor. Deletions go through
+ * one selector session per minor: an unsatisfiable answer names the elements the solver needed,
+ * and all others are deleted at once (a relation survives the deletion of D iff it mentions no
+ * element of D). Contractions are decided on the contracted minor itself. When no single-element
+ * deletion or contraction is non-orientable, the orientation witnesses of all of them, each
+ * re-checked, are the proof of minimality.
+ *
+ * <p>Ground sets whose C(n, r) exceeds {@link #DIRECT_LIMIT} are first cut down to a small
+ * non-orientable restriction by {@link RestrictionGrowth}, so their r-subsets are never all
+ * enumerated. The element order of each pass is a permutation drawn from the seed.
+ */
+public final class UnsatCoreSearch implements CoreSearch {
+    /** Largest C(n, r) that is enumerated directly; larger inputs are grown from a small restriction. */
+    public static final long DIRECT_LIMIT = 20_000;
+
+    private final SearchSettings settings;
+    private final Progress progress;
+
+    public UnsatCoreSearch(SearchSettings settings, Progress progress) {
+        this.settings = settings;
+        this.progress = progress;
+    }
+
+    /** One pass over the single-element minors: it either shrinks the matroid or proves it minimal. */
+    private sealed interface Pass {
+    }
+
+    private record Shrunk(ExplicitMatroid next) implements Pass {
+    }
+
+    private record Minimal(List<MinorWitness> witnesses) implements Pass {
+    }
+
+    private record NoAnswer(String reason) implements Pass {
+    }
+
+    /** Mutable state of one reduction. */
+    private final class Run {
+        final Random random = new Random(settings.seed());
+        final List<String> contracted = new ArrayList<>();
+        final List<String> deleted = new ArrayList<>();
+        final long started = System.currentTimeMillis();
+        int decisions;
+        int grownTo;
+    }
+
+    @Override
+    public SearchResult reduce(Matroid input) {
+        Run run = new Run();
+        run.grownTo = input.size();
+        ExplicitMatroid current;
+        if (input.size() > ExplicitMatroid.MAX_ELEMENTS || ElementSets.binomial(input.size(), input.rank()) > DIRECT_LIMIT) {
+            progress.report("growing a non-orientable restriction", input.size(), input.rank(), 0);
+            RestrictionGrowth.Grown grown = new RestrictionGrowth(input, settings, progress).grow();
+            run.decisions += grown.decisions();
+            if (grown.elements() == null) {
+                return new SearchResult.Unknown("no non-orientable restriction was found before the restriction grew "
+                        + "too large to enumerate; the input has " + input.size() + " elements of rank " + input.rank());
+            }
+            current = ExplicitMatroid.of(Minor.restriction(input, grown.elements()));
+            for (int e = 0, k = 0; e < input.size(); e++) {
+                if (k < grown.elements().length && grown.elements()[k] == e) {
+                    k++;
+                } else {
+                    run.deleted.add(input.labels().get(e));
+                }
+            }
+            run.grownTo = current.size();
+        } else {
+            current = ExplicitMatroid.of(input);
+        }
+        boolean first = true;
+        while (true) {
+            progress.report("minimising", current.size(), current.rank(), run.decisions);
+            OrientationSession session = new OrientationSession(BasisIndex.of(current), true, settings.budget());
+            long all = ElementSets.allMask(current.size());
+            OrientationSession.Outcome outcome = session.solve(all);
+            run.decisions++;
+            if (outcome instanceof OrientationSession.OutOfBudget o) {
+                return new SearchResult.Unknown(o.reason());
+            }
+            if (outcome instanceof OrientationSession.Satisfiable s) {
+                if (!first) {
+                    throw new IllegalStateException("A minor found non-orientable was later found orientable.");
+                }
+                Chirotope witness = session.index().chirotope(s.signs(), all);
+                return new SearchResult.Orientable(WitnessCheck.checked(current, witness));
+            }
+            first = false;
+            long needed = ((OrientationSession.Unsatisfiable) outcome).needed();
+            if (needed != all) {
+                current = restrict(current, needed, run);
+                continue;
+            }
+            Pass pass = minimalityPass(current, session, run);
+            if (pass instanceof NoAnswer n) {
+                return new SearchResult.Unknown(n.reason());
+            }
+            if (pass instanceof Shrunk s) {
+                current = s.next();
+                continue;
+            }
+            List<MinorWitness> witnesses = ((Minimal) pass).witnesses();
+            checkPath(input, current, run);
+            SearchStats stats = new SearchStats(run.decisions, run.grownTo, System.currentTimeMillis() - run.started);
+            return new SearchResult.Found(new MinimalCore(current, run.contracted, run.deleted, witnesses, settings, stats));
+        }
+    }
+
+    /** The restriction of {@code m} to the elements of {@code kept}, recording the deleted labels. */
+    private static ExplicitMatroid restrict(ExplicitMatroid m, long kept, Run run) {
+        for (int e = 0; e < m.size(); e++) {
+            if ((kept & (1L << e)) == 0) {
+                run.deleted.add(m.labels().get(e));
+            }
+        }
+        ExplicitMatroid next = ExplicitMatroid.of(Minor.restriction(m, ElementSets.elements(kept)));
+        if (next.rank() != m.rank()) {
+            throw new IllegalStateException("Deleting the elements no relation needed lowered the rank.");
+        }
+        return next;
+    }
+
+    private Pass minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
+        List<Integer> order = new ArrayList<>();
+        for (int e = 0; e < m.size(); e++) {
+            order.add(e);
+        }
+        Collections.shuffle(order, run.random);
+        Chirotope[] deletion = new Chirotope[m.size()];
+        Chirotope[] contraction = new Chirotope[m.size()];
+        List<Operation> phases = settings.strategy() == Strategy.CONTRACT_FIRST
+                ? List.of(Operation.CONTRACTION, Operation.DELETION)
+                : List.of(Operation.DELETION, Operation.CONTRACTION);
+        long all = ElementSets.allMask(m.size());
+        for (Operation op : phases) {
+            for (int e : order) {
+                int[] single = {e};
+                int[] rest = ElementSets.elements(all & ~(1L << e));
+                boolean loop = m.rank(single) == 0;
+                boolean coloop = m.rank(rest) < m.rank();
+                progress.report((op == Operation.DELETION ? "deleting " : "contracting ") + m.labels().get(e),
+                        m.size(), m.rank(), run.decisions);
+                if (op == Operation.DELETION && !coloop) {
+                    OrientationSession.Outcome o = session.solve(all & ~(1L << e));
+                    run.decisions++;
+                    if (o instanceof OrientationSession.OutOfBudget b) {
+                        return new NoAnswer(b.reason());
+                    }
+                    if (o instanceof OrientationSession.Unsatisfiable u) {
+                        return new Shrunk(restrict(m, u.needed(), run));
+                    }
+                    Chirotope w = session.index().chirotope(((OrientationSession.Satisfiable) o).signs(), all & ~(1L << e));
+                    deletion[e] = WitnessCheck.checked(new Minor(m, new int[0], single), w);
+                } else if (op == Operation.CONTRACTION && !loop) {
+                    ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, single, new int[0]));
+                    Orientability answer = new LazySatDecider(settings.budget()).decide(minor);
+                    run.decisions++;
+                    if (answer instanceof Orientability.Unknown u) {
+                        return new NoAnswer(u.reason());
+                    }
+                    if (answer instanceof Orientability.NonOrientable) {
+                        run.contracted.add(m.labels().get(e));
+                        return new Shrunk(minor);
+                    }
+                    contraction[e] = ((Orientability.Orientable) answer).witness();
+                }
+            }
+        }
+        List<MinorWitness> witnesses = new ArrayList<>();
+        for (int e = 0; e < m.size(); e++) {
+            // For a loop or a coloop, M\e = M/e, so one witness serves both ([Ox, §3.1]).
+            Chirotope del = deletion[e] != null ? deletion[e] : contraction[e];
+            Chirotope con = contraction[e] != null ? contraction[e] : deletion[e];
+            witnesses.add(new MinorWitness(m.labels().get(e), Operation.DELETION, del));
+            witnesses.add(new MinorWitness(m.labels().get(e), Operation.CONTRACTION, con));
+        }
+        return new Minimal(witnesses);
+    }
+
+    /** Re-derives the core as M/C\D from the input and the recorded path, and insists it is the same. */
+    private static void checkPath(Matroid input, ExplicitMatroid core, Run run) {
+        int[] c = indices(input, run.contracted);
+        int[] d = indices(input, run.deleted);
+        ExplicitMatroid rebuilt = ExplicitMatroid.of(new Minor(input, c, d));
+        if (!rebuilt.equals(core)) {
+            throw new IllegalStateException("The recorded path does not rebuild the core from the input.");
+        }
+    }
+
+    private static int[] indices(Matroid m, List<String> labels) {
+        int[] out = labels.stream().mapToInt(l -> m.labels().indexOf(l)).sorted().toArray();
+        if (out.length > 0 && out[0] < 0) {
+            throw new IllegalStateException("A recorded label is not an element of the input.");
+        }
+        return out;
+    }
+}
