@@ -67,8 +67,8 @@ public final class PulledMatroid implements Matroid {
             int point) {
         checkInput(m, hyperplane, point);
         int k = m.rank() - 2;
-        if (k < 0 || k > hyperplane.length) {
-            // Rank 1 (a hyperline would have rank −1), or H too small to hold a hyperline.
+        if (k < 0) {
+            // Rank 1: a hyperline would have rank −1, so there is nothing to check.
             return Optional.empty();
         }
         // Only elements y outside H ∪ {O} can violate. For y in H − L: L is a flat of rank r − 2
