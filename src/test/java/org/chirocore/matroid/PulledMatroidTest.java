@@ -6,9 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.Random;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -100,6 +102,83 @@ class PulledMatroidTest {
         assertEquals("The point 100 and the hyperplane {000, 001, 010, 011} are not in general position: "
                 + "the closure of the hyperline {000, 001} together with 100 also contains 101.", e.getMessage());
         assertEquals(v, e.violation());
+    }
+
+    /**
+     * Every (hyperplane, outside vertex) pair of the real 3-cube: in general position the pulled
+     * bases pass basis exchange (re-checked by fromBases); otherwise the witness really lies in
+     * the closure of the hyperline with the point. Counts computed here, not from a source.
+     */
+    @Test
+    void everyPairOfTheThreeCubeEitherPullsToAMatroidOrHasACheckedWitness() {
+        AffineCube cube = AffineCube.real(3);
+        int inPosition = 0;
+        int violated = 0;
+        for (CubeHyperplane h : CubeGeometry.realHyperplanes(3)) {
+            for (int o = 0; o < cube.size(); o++) {
+                if (!h.vertices().contains(o)) {
+                    if (checkPullOrWitness(cube, h.elements(), o)) {
+                        inPosition++;
+                    } else {
+                        violated++;
+                    }
+                }
+            }
+        }
+        // 8 triangles × 5 outside vertices + 12 four-point planes × 4 = 88 pairs, of which the
+        // computation finds 8 in general position.
+        assertEquals(8, inPosition);
+        assertEquals(80, violated);
+    }
+
+    /**
+     * The real 4-cube has 80 pairs in general position among its 1520 (hyperplane, outside
+     * vertex) pairs (computed here, not from a source); a fixed-seed sample of both kinds is
+     * checked as above.
+     */
+    @Test
+    void sampledPairsOfTheFourCubeEitherPullToAMatroidOrHaveACheckedWitness() {
+        AffineCube cube = AffineCube.real(4);
+        List<Pair> inPosition = new ArrayList<>();
+        List<Pair> violated = new ArrayList<>();
+        for (CubeHyperplane h : CubeGeometry.realHyperplanes(4)) {
+            for (int o = 0; o < cube.size(); o++) {
+                if (!h.vertices().contains(o)) {
+                    boolean ok = PulledMatroid.generalPositionViolation(cube, h.elements(), o).isEmpty();
+                    (ok ? inPosition : violated).add(new Pair(h.elements(), o));
+                }
+            }
+        }
+        assertEquals(80, inPosition.size());
+        assertEquals(1440, violated.size());
+        Random random = new Random(20240601L);
+        for (List<Pair> kind : List.of(inPosition, violated)) {
+            for (int trial = 0; trial < 3; trial++) {
+                Pair pair = kind.get(random.nextInt(kind.size()));
+                assertEquals(kind == inPosition, checkPullOrWitness(cube, pair.hyperplane(), pair.point()));
+            }
+        }
+    }
+
+    /** A hyperplane (element indices) and a point outside it. */
+    private record Pair(int[] hyperplane, int point) {
+    }
+
+    /** Checks the pull or the violation; returns whether the pair was in general position. */
+    private static boolean checkPullOrWitness(Matroid m, int[] hyperplane, int o) {
+        Optional<GeneralPositionViolation> violation = PulledMatroid.generalPositionViolation(m, hyperplane, o);
+        if (violation.isPresent()) {
+            GeneralPositionViolation v = violation.get();
+            int[] hyperline = v.hyperline().stream().mapToInt(Integer::intValue).toArray();
+            assertEquals(m.rank() - 2, m.rank(hyperline), v.message());
+            assertTrue(Flats.isFlat(m, hyperline), v.message());
+            int[] lineWithPoint = ElementSets.with(hyperline, o);
+            assertEquals(m.rank() - 1, m.rank(ElementSets.with(lineWithPoint, v.witness())), v.message());
+            return false;
+        }
+        ExplicitMatroid pulled = ExplicitMatroid.of(PulledMatroid.pull(m, hyperplane, o));
+        assertDoesNotThrow(() -> ExplicitMatroid.fromBases(pulled.labels(), pulled.rank(), pulled.bases()));
+        return true;
     }
 
     @Test
