@@ -47,8 +47,7 @@ public final class CubeGeometry {
         for (List<int[]> pairs : pairsBySum.values()) {
             for (int i = 0; i < pairs.size(); i++) {
                 for (int j = i + 1; j < pairs.size(); j++) {
-                    int[] r = ElementSets.union(pairs.get(i), pairs.get(j));
-                    out.add(r);
+                    out.add(ElementSets.union(pairs.get(i), pairs.get(j)));
                 }
             }
         }
