@@ -1,6 +1,8 @@
 package org.chirocore.matroid;
 
 import java.util.Arrays;
+import java.util.List;
+import java.util.StringJoiner;
 
 /**
  * Small helpers for subsets of a ground set written as strictly increasing index arrays, and
@@ -64,6 +66,15 @@ public final class ElementSets {
     /** The mask of the elements {@code 0..n-1}, for n ≤ 64. */
     public static long allMask(int n) {
         return n == 64 ? -1L : (1L << n) - 1;
+    }
+
+    /** The set written with its elements' labels for messages, e.g. "{100, 010, 001}". */
+    public static String format(List<String> labels, int[] set) {
+        StringJoiner out = new StringJoiner(", ", "{", "}");
+        for (int e : set) {
+            out.add(labels.get(e));
+        }
+        return out.toString();
     }
 
     /** The elements {@code 0..n-1}. */
