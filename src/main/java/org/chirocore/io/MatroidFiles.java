@@ -174,7 +174,8 @@ public final class MatroidFiles {
         }
     }
 
-    private static List<String> labels(Json json) {
+    /** Distinct non-empty labels, as in the file format; shared with the chirotope reader. */
+    static List<String> labels(Json json) {
         Json.Arr a = json.asArray(Json.Obj.describe("labels"));
         Map<String, Integer> firstIndex = new HashMap<>();
         List<String> out = new ArrayList<>(a.size());
