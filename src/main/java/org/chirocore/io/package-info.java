@@ -1,0 +1,2 @@
+/** File formats: a strict JSON model, parser and writer, matroid and result files; depends only on the JDK, {@code matroid} and {@code orient}. */
+package org.chirocore.io;
