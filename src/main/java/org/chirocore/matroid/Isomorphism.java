@@ -45,6 +45,8 @@ public record Isomorphism(List<Integer> image) {
      * mapped to a basis of {@code second} (an injective map between families of the same size
      * is onto). Costs the materialisation of both matroids (C(n, r) rank queries each, none for
      * explicit matroids) plus O(|bases| · r).
+     *
+     * @throws InvalidMatroidException when a matroid has more than 64 elements
      */
     public boolean isIsomorphism(Matroid first, Matroid second) {
         if (first.size() != image.size() || second.size() != image.size() || first.rank() != second.rank()) {

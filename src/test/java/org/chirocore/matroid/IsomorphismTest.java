@@ -92,6 +92,8 @@ class IsomorphismTest {
         assertNotEquals(ExplicitMatroid.of(fano).relabel(labels), ExplicitMatroid.of(reordered),
                 "The reordering changes the basis list, so the search has work to do.");
         assertTrue(isomorphic(fano, reordered));
+        assertTrue(isomorphic(Duality.dual(ExplicitMatroid.of(reordered)), NamedMatroids.fanoDual()),
+                "F7* is dual(F7) up to isomorphism, whatever the column order [Ox, §2.1].");
     }
 
     static Stream<Supplier<Matroid>> fixtures() {
@@ -159,7 +161,7 @@ class IsomorphismTest {
         assertFalse(isomorphic(empty, loops));
     }
 
-    /** A loop and a parallel pair are respected: U(1,2) plus a loop is not U(2,3) minus ... of the same size. */
+    /** Loops and parallel classes are matched: a loop goes to a loop, and U(1,3) has no loop. */
     @Test
     void loopsAndParallelElementsAreMatched() {
         List<String> labels = MatrixMatroid.indexLabels(3);
