@@ -32,6 +32,9 @@ public final class UnsatCoreSearch implements CoreSearch {
     /** Largest C(n, r) that is enumerated directly; larger inputs are grown from a small restriction. */
     public static final long DIRECT_LIMIT = 20_000;
 
+    /** Largest number of relation index combinations C(n, r−2)·C(n−r+2, 4) scanned directly. */
+    public static final long SCAN_LIMIT = 50_000_000;
+
     private final SearchSettings settings;
     private final Progress progress;
 
@@ -67,26 +70,10 @@ public final class UnsatCoreSearch implements CoreSearch {
     public SearchResult reduce(Matroid input) {
         Run run = new Run();
         run.grownTo = input.size();
-        ExplicitMatroid current;
-        if (input.size() > ExplicitMatroid.MAX_ELEMENTS || ElementSets.binomial(input.size(), input.rank()) > DIRECT_LIMIT) {
-            progress.report("growing a non-orientable restriction", input.size(), input.rank(), 0);
-            RestrictionGrowth.Grown grown = new RestrictionGrowth(input, settings, progress).grow();
-            run.decisions += grown.decisions();
-            if (grown.elements() == null) {
-                return new SearchResult.Unknown("no non-orientable restriction was found before the restriction grew "
-                        + "too large to enumerate; the input has " + input.size() + " elements of rank " + input.rank());
-            }
-            current = ExplicitMatroid.of(Minor.restriction(input, grown.elements()));
-            for (int e = 0, k = 0; e < input.size(); e++) {
-                if (k < grown.elements().length && grown.elements()[k] == e) {
-                    k++;
-                } else {
-                    run.deleted.add(input.labels().get(e));
-                }
-            }
-            run.grownTo = current.size();
-        } else {
-            current = ExplicitMatroid.of(input);
+        ExplicitMatroid current = enumerable(input) ? ExplicitMatroid.of(input) : startingMinor(input, run);
+        if (current == null) {
+            return new SearchResult.Unknown("no non-orientable minor small enough to enumerate was found; the input has "
+                    + input.size() + " elements of rank " + input.rank());
         }
         boolean first = true;
         while (true) {
@@ -124,6 +111,77 @@ public final class UnsatCoreSearch implements CoreSearch {
             SearchStats stats = new SearchStats(run.decisions, run.grownTo, System.currentTimeMillis() - run.started);
             return new SearchResult.Found(new MinimalCore(current, run.contracted, run.deleted, witnesses, settings, stats));
         }
+    }
+
+    /**
+     * Whether all r-subsets of {@code m} and one scan of its relations are cheap enough to do
+     * directly: at most 64 elements, {@link #DIRECT_LIMIT} r-subsets or a rank of at most 3, and
+     * at most {@link #SCAN_LIMIT} relation index combinations.
+     */
+    static boolean enumerable(Matroid m) {
+        int n = m.size();
+        int r = m.rank();
+        long subsets = ElementSets.binomial(n, r);
+        long scan = r < 2 ? 0 : ElementSets.binomial(n, r - 2) * ElementSets.binomial(n - r + 2, 4);
+        return n <= ExplicitMatroid.MAX_ELEMENTS && (subsets <= DIRECT_LIMIT || r <= 3) && scan <= SCAN_LIMIT
+                && subsets <= BasisIndex.MAX_SUBSETS;
+    }
+
+    /**
+     * A non-orientable minor of a large input small enough to enumerate, with its path recorded in
+     * {@code run}; null when none was found. First the focus elements are contracted (rank ≥ 3 is
+     * kept: every matroid of rank at most 2 is orientable) and the result is decided or grown from;
+     * failing that, a restriction of the input itself is grown.
+     */
+    private ExplicitMatroid startingMinor(Matroid input, Run run) {
+        Matroid m = input;
+        List<String> focusContracted = new ArrayList<>();
+        for (String label : settings.focus()) {
+            int e = m.labels().indexOf(label);
+            if (enumerable(m) || m.rank() <= 3 || e < 0 || m.rank(new int[] {e}) == 0) {
+                continue;
+            }
+            m = new Minor(m, new int[] {e}, new int[0]);
+            focusContracted.add(label);
+        }
+        if (!focusContracted.isEmpty()) {
+            progress.report("contracted the focus " + focusContracted, m.size(), m.rank(), run.decisions);
+            ExplicitMatroid found = nonOrientablePart(m, run);
+            if (found != null) {
+                run.contracted.addAll(focusContracted);
+                return found;
+            }
+        }
+        return nonOrientablePart(input, run);
+    }
+
+    /**
+     * {@code m} itself when it is enumerable and non-orientable within the budget, else a grown
+     * non-orientable restriction of it (deletions recorded in {@code run}), or null.
+     */
+    private ExplicitMatroid nonOrientablePart(Matroid m, Run run) {
+        if (enumerable(m)) {
+            ExplicitMatroid explicit = ExplicitMatroid.of(m);
+            Orientability answer = new LazySatDecider(settings.budget()).decide(explicit);
+            run.decisions++;
+            return answer instanceof Orientability.NonOrientable ? explicit : null;
+        }
+        progress.report("growing a non-orientable restriction", m.size(), m.rank(), run.decisions);
+        RestrictionGrowth.Grown grown = new RestrictionGrowth(m, settings, progress).grow();
+        run.decisions += grown.decisions();
+        if (grown.elements() == null) {
+            return null;
+        }
+        for (int e = 0, k = 0; e < m.size(); e++) {
+            if (k < grown.elements().length && grown.elements()[k] == e) {
+                k++;
+            } else {
+                run.deleted.add(m.labels().get(e));
+            }
+        }
+        ExplicitMatroid restriction = ExplicitMatroid.of(Minor.restriction(m, grown.elements()));
+        run.grownTo = restriction.size();
+        return restriction;
     }
 
     /** The restriction of {@code m} to the elements of {@code kept}, recording the deleted labels. */
