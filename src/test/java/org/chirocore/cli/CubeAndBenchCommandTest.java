@@ -3,6 +3,8 @@ package org.chirocore.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Arrays;
+
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -95,7 +97,7 @@ class CubeAndBenchCommandTest {
     }
 
     private static String[] concat(String[] prefix, String last) {
-        String[] out = java.util.Arrays.copyOf(prefix, prefix.length + 1);
+        String[] out = Arrays.copyOf(prefix, prefix.length + 1);
         out[prefix.length] = last;
         return out;
     }

@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 
@@ -125,7 +126,7 @@ class ReduceCommandTest {
             "--cube 3 --hyperplane 1,x=0 --pull 111 --out OUT|is neither \"a1,...,an=b\""})
     void badUsageAndInputExitTwo(String args, String message) throws IOException {
         Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
-        List<String> argv = new java.util.ArrayList<>(List.of("reduce"));
+        List<String> argv = new ArrayList<>(List.of("reduce"));
         for (String a : args.split(" ")) {
             argv.add(a.equals("OUT") ? out("o.json") : a.equals("FILE") ? f7.toString() : a);
         }
