@@ -1,6 +1,7 @@
 package org.chirocore.cli;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.chirocore.io.AtomicFiles;
@@ -48,6 +49,18 @@ final class Inputs {
             // hyperplane, general position) as an IllegalArgumentException with a full sentence.
             throw new BadInputException("cannot build the " + construction.n() + "-cube construction: " + e.getMessage(),
                     e);
+        }
+    }
+
+    /**
+     * Fails early when {@code file}'s directory does not exist, so a long search is not wasted on
+     * an output that cannot be written.
+     */
+    static void requireDirectoryOf(Path file) {
+        Path parent = file.toAbsolutePath().getParent();
+        if (parent == null || !Files.isDirectory(parent)) {
+            throw new BadInputException(file + ": cannot write the file: the directory " + parent + " does not exist",
+                    null);
         }
     }
 

@@ -69,6 +69,7 @@ final class ReduceCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Inputs.Input input = input();
+        Inputs.requireDirectoryOf(out);
         SearchSettings settings = new SearchSettings(seed, strategy, budget.budget());
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());

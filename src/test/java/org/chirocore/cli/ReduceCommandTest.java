@@ -123,12 +123,18 @@ class ReduceCommandTest {
             "--cube 3 --hyperplane 100,010,001 --pull 111 --strategy sideways --out OUT|Unknown strategy \"sideways\"",
             "--cube 3 --hyperplane 100,010,001 --pull 1111 --out OUT|The vertex \"1111\" is not a 0/1 string of "
                     + "length 3",
-            "--cube 3 --hyperplane 1,x=0 --pull 111 --out OUT|is neither \"a1,...,an=b\""})
+            "--cube 3 --hyperplane 1,x=0 --pull 111 --out OUT|is neither \"a1,...,an=b\"",
+            "--cube 3 --hyperplane 100,010,001 --pull 111 --out MISSING|does not exist"})
     void badUsageAndInputExitTwo(String args, String message) throws IOException {
         Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
         List<String> argv = new ArrayList<>(List.of("reduce"));
         for (String a : args.split(" ")) {
-            argv.add(a.equals("OUT") ? out("o.json") : a.equals("FILE") ? f7.toString() : a);
+            argv.add(switch (a) {
+                case "OUT" -> out("o.json");
+                case "MISSING" -> out("absent/o.json");
+                case "FILE" -> f7.toString();
+                default -> a;
+            });
         }
         CliRun run = CliRun.of(argv.toArray(String[]::new));
         assertEquals(2, run.exit(), run.out() + run.err());
