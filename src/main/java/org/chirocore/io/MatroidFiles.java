@@ -3,9 +3,12 @@ package org.chirocore.io;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -44,6 +47,26 @@ public final class MatroidFiles {
      *     matroid file
      */
     public static Matroid read(Path file) throws MatroidFileException {
+        return readHashed(file).matroid();
+    }
+
+    /**
+     * A matroid read from a file together with the SHA-256 of the file's bytes, which identifies
+     * the input in result files.
+     *
+     * @param matroid the matroid
+     * @param sha256 the digest of the bytes read, 64 lower-case hex digits
+     */
+    public record Hashed(Matroid matroid, String sha256) {
+    }
+
+    /**
+     * Reads a matroid file as {@link #read(Path)} and digests the same bytes, so the digest is
+     * that of exactly the content interpreted.
+     *
+     * @throws MatroidFileException as {@link #read(Path)}
+     */
+    public static Hashed readHashed(Path file) throws MatroidFileException {
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
@@ -56,7 +79,16 @@ public final class MatroidFiles {
         } catch (JsonFormatException e) {
             throw notJson(file.toString(), e);
         }
-        return fromJson(json, file.toString());
+        return new Hashed(fromJson(json, file.toString()), sha256(bytes));
+    }
+
+    private static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            // Every Java platform must provide SHA-256 (MessageDigest's specification).
+            throw new IllegalStateException(e);
+        }
     }
 
     /**

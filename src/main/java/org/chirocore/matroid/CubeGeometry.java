@@ -141,7 +141,7 @@ public final class CubeGeometry {
     }
 
     /** The row (1, v_1, …, v_n) of vertex {@code v}. */
-    private static long[] homogeneous(int n, int v) {
+    static long[] homogeneous(int n, int v) {
         long[] row = new long[n + 1];
         row[0] = 1;
         for (int k = 1; k <= n; k++) {
@@ -190,7 +190,7 @@ public final class CubeGeometry {
     }
 
     /** Bareiss fraction-free determinant; destroys {@code a}. Every division is exact. */
-    private static long determinant(long[][] a) {
+    static long determinant(long[][] a) {
         int n = a.length;
         if (n == 0) {
             return 1;

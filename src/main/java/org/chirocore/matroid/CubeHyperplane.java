@@ -3,6 +3,7 @@ package org.chirocore.matroid;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * An affine hyperplane a·x = b of R^n with integer normal, together with the vertices of the
@@ -44,6 +45,51 @@ public record CubeHyperplane(List<Integer> normal, int offset, List<Integer> ver
         int[] a = form.subList(0, n).stream().mapToInt(Integer::intValue).toArray();
         int b = form.get(n);
         return new CubeHyperplane(form.subList(0, n), b, solutions(a, b));
+    }
+
+    /**
+     * The real hyperplane whose vertices in the n-cube are exactly {@code vertices}, if there is
+     * one. Method: n affinely independent vertices are picked greedily; the cofactors
+     * c_k = (−1)^k·det(their rows (1, v) without column k) are orthogonal to every row, which
+     * gives a·x = −c_0 with a = (c_1, …, c_n); the answer stands when that equation's vertex set
+     * is the given one. Costs |vertices| rank queries of the real cube, n + 1 determinants of
+     * size n and O(n·2^n).
+     *
+     * @param vertices strictly increasing element indices of {@link AffineCube} for dimension n
+     */
+    public static Optional<CubeHyperplane> withVertices(int n, int[] vertices) {
+        checkLength(n);
+        AffineCube cube = AffineCube.real(n);
+        int[] chosen = new int[0];
+        for (int v : vertices) {
+            int[] t = ElementSets.with(chosen, v);
+            if (chosen.length < n && cube.rank(t) == t.length) {
+                chosen = t;
+            }
+        }
+        if (chosen.length < n) {
+            return Optional.empty();
+        }
+        long[] cofactors = new long[n + 1];
+        for (int k = 0; k <= n; k++) {
+            long[][] minor = new long[n][n];
+            for (int i = 0; i < n; i++) {
+                long[] row = CubeGeometry.homogeneous(n, chosen[i]);
+                for (int c = 0, col = 0; c <= n; c++) {
+                    if (c != k) {
+                        minor[i][col++] = row[c];
+                    }
+                }
+            }
+            long d = CubeGeometry.determinant(minor);
+            cofactors[k] = k % 2 == 0 ? d : -d;
+        }
+        int[] normal = new int[n];
+        for (int k = 1; k <= n; k++) {
+            normal[k - 1] = Math.toIntExact(cofactors[k]);
+        }
+        CubeHyperplane h = of(normal, Math.toIntExact(-cofactors[0]));
+        return Arrays.equals(h.elements(), vertices) ? Optional.of(h) : Optional.empty();
     }
 
     private static void checkLength(int n) {

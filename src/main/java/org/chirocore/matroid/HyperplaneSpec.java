@@ -2,6 +2,7 @@ package org.chirocore.matroid;
 
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A user's description of a hyperplane H of an affine cube — by an integer equation a·x = b
@@ -21,6 +22,25 @@ public sealed interface HyperplaneSpec {
      */
     int[] resolve(AffineCube cube);
 
+    /**
+     * The described vertex set as strictly increasing element indices of {@code cube}, without
+     * asking whether it is a hyperplane. Costs O(n·2^n).
+     *
+     * @throws InvalidHyperplaneException when the description does not fit the cube (wrong
+     *     number of coefficients, a malformed or repeated label)
+     */
+    int[] vertices(AffineCube cube);
+
+    /**
+     * The real affine hyperplane a·x = b described, normalised: the given equation, or for a
+     * vertex list the hyperplane whose cube vertices are exactly the listed ones; empty when the
+     * listed vertices are not the vertex set of any real hyperplane (possible over GF(p), or
+     * for a set that is not a flat). Costs O(n³ + n·2^n).
+     *
+     * @throws InvalidHyperplaneException as {@link #vertices}
+     */
+    Optional<CubeHyperplane> equation(AffineCube cube);
+
     /** H = the vertices v with a·v = b (integer arithmetic, whatever the cube's field). */
     record ByEquation(List<Integer> normal, int offset) implements HyperplaneSpec {
         public ByEquation {
@@ -33,14 +53,28 @@ public sealed interface HyperplaneSpec {
 
         @Override
         public int[] resolve(AffineCube cube) {
+            CubeHyperplane h = hyperplane(cube);
+            int[] set = h.elements();
+            return requireHyperplane(cube, set, "The vertex set " + ElementSets.format(cube.labels(), set)
+                    + " of the equation " + h.equation());
+        }
+
+        @Override
+        public int[] vertices(AffineCube cube) {
+            return hyperplane(cube).elements();
+        }
+
+        @Override
+        public Optional<CubeHyperplane> equation(AffineCube cube) {
+            return Optional.of(hyperplane(cube));
+        }
+
+        private CubeHyperplane hyperplane(AffineCube cube) {
             if (normal.size() != cube.dimension()) {
                 throw new InvalidHyperplaneException("The normal vector " + normal + " has " + normal.size()
                         + " coefficients, but the cube has dimension " + cube.dimension() + ".");
             }
-            CubeHyperplane h = CubeHyperplane.of(normal.stream().mapToInt(Integer::intValue).toArray(), offset);
-            int[] set = h.elements();
-            return requireHyperplane(cube, set, "The vertex set " + ElementSets.format(cube.labels(), set)
-                    + " of the equation " + h.equation());
+            return CubeHyperplane.of(normal.stream().mapToInt(Integer::intValue).toArray(), offset);
         }
     }
 
@@ -52,13 +86,22 @@ public sealed interface HyperplaneSpec {
 
         @Override
         public int[] resolve(AffineCube cube) {
-            int[] set;
+            int[] set = vertices(cube);
+            return requireHyperplane(cube, set, "The vertex set " + ElementSets.format(cube.labels(), set));
+        }
+
+        @Override
+        public int[] vertices(AffineCube cube) {
             try {
-                set = cube.indicesOf(vertices);
+                return cube.indicesOf(vertices);
             } catch (IllegalArgumentException badLabel) {
                 throw new InvalidHyperplaneException(badLabel.getMessage());
             }
-            return requireHyperplane(cube, set, "The vertex set " + ElementSets.format(cube.labels(), set));
+        }
+
+        @Override
+        public Optional<CubeHyperplane> equation(AffineCube cube) {
+            return CubeHyperplane.withVertices(cube.dimension(), vertices(cube));
         }
     }
 

@@ -1,0 +1,63 @@
+package org.chirocore.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+
+import org.chirocore.search.Benchmark;
+import org.chirocore.search.MinimalCore;
+import org.chirocore.search.SearchResult;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.Strategy;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/** {@code chirocore bench}: times the corner construction for n = 3..N. */
+@Command(name = "bench", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = {"Time the corner construction for n = 3..N: H spanned by the unit vectors, the all-ones "
+                + "vertex pulled to it and contracted, then decided (n <= " + Benchmark.MAX_DECIDED_DIMENSION
+                + ") and reduced with seed 0, contract-first.",
+                "Prints figures only; nothing is asserted."})
+final class BenchCommand implements Callable<Integer> {
+    private static final String ROW = "%2s %9s %5s %10s %10s %14s %10s %11s %10s%n";
+
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = "--max-n", paramLabel = "N", defaultValue = "5",
+            description = "Largest dimension to run (default: ${DEFAULT-VALUE}).")
+    private int maxN;
+
+    @Mixin
+    private BudgetOptions budget;
+
+    @Override
+    public Integer call() {
+        if (maxN < 3) {
+            throw new ParameterException(spec.commandLine(), "--max-n must be at least 3, not " + maxN + ".");
+        }
+        SearchSettings settings = new SearchSettings(0, Strategy.CONTRACT_FIRST, budget.budget());
+        PrintWriter out = spec.commandLine().getOut();
+        out.printf(ROW, "n", "elements", "rank", "decide ms", "reduce ms", "core elements", "core rank", "core bases",
+                "decisions");
+        for (int n = 3; n <= maxN; n++) {
+            Benchmark.Row r = Benchmark.corner(n, settings);
+            String decide = r.decision().map(d -> d.verdict().equals("unknown") ? "unknown"
+                    : String.valueOf(d.stats().millis())).orElse("-");
+            if (r.reduction() instanceof SearchResult.Found f) {
+                MinimalCore c = f.core();
+                out.printf(ROW, n, r.elements(), r.rank(), decide, r.reduceMillis(), c.core().size(), c.core().rank(),
+                        c.core().basisCount(), c.stats().decisions());
+            } else {
+                String verdict = r.reduction() instanceof SearchResult.Orientable ? "orientable" : "unknown";
+                out.printf(ROW, n, r.elements(), r.rank(), decide, r.reduceMillis(), verdict, "-", "-", "-");
+            }
+            out.flush();
+        }
+        return ExitCodes.OK;
+    }
+}

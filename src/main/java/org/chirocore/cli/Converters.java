@@ -1,0 +1,63 @@
+package org.chirocore.cli;
+
+import java.util.ArrayList;
+import java.util.function.Function;
+
+import org.chirocore.matroid.Field;
+import org.chirocore.matroid.HyperplaneSpec;
+import org.chirocore.search.Strategy;
+
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
+
+/**
+ * Option value converters. Each delegates to the library's parser and passes its message on as
+ * picocli's conversion error, so a bad value is reported like any other usage error.
+ */
+final class Converters {
+    private Converters() {
+    }
+
+    /** A field: "Q", "GF(p)", or just the prime p. */
+    static final class FieldConverter implements ITypeConverter<Field> {
+        @Override
+        public Field convert(String text) {
+            return library(text, t -> t.matches("\\d+") ? Field.gf(Integer.parseInt(t)) : Field.parse(t));
+        }
+    }
+
+    /** A hyperplane description as {@link HyperplaneSpec#parse}. */
+    static final class HyperplaneConverter implements ITypeConverter<HyperplaneSpec> {
+        @Override
+        public HyperplaneSpec convert(String text) {
+            return library(text, HyperplaneSpec::parse);
+        }
+    }
+
+    /** A strategy as {@link Strategy#fromId}. */
+    static final class StrategyConverter implements ITypeConverter<Strategy> {
+        @Override
+        public Strategy convert(String text) {
+            return library(text, Strategy::fromId);
+        }
+    }
+
+    /** The names of the strategies, for help and completion. */
+    static final class StrategyNames extends ArrayList<String> {
+        private static final long serialVersionUID = 1L;
+
+        StrategyNames() {
+            for (Strategy s : Strategy.values()) {
+                add(s.id());
+            }
+        }
+    }
+
+    private static <T> T library(String text, Function<String, T> parser) {
+        try {
+            return parser.apply(text);
+        } catch (IllegalArgumentException e) {
+            throw new TypeConversionException(e.getMessage());
+        }
+    }
+}

@@ -1,0 +1,56 @@
+package org.chirocore.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+
+import org.chirocore.matroid.CubeGeometry;
+import org.chirocore.matroid.CubeReport;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code chirocore cube N}: facts about the affine N-cube and, optionally, a hyperplane and a vertex to pull. */
+@Command(name = "cube", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = {"Print facts about the affine N-cube: elements, rank, facets, skew facets, rectangles and "
+                + "hyperplanes.",
+                "With --hyperplane: its equation, its vertices and whether it is a hyperplane; with --pull too: "
+                        + "whether H and the vertex are in general position."})
+final class CubeCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(paramLabel = "N", description = "The dimension of the cube.")
+    private int n;
+
+    @Mixin
+    private ConstructionOptions construction;
+
+    @Override
+    public Integer call() {
+        CubeReport r;
+        try {
+            r = CubeReport.of(n, construction.field(), construction.hyperplane(), construction.pull());
+        } catch (IllegalArgumentException e) {
+            // A dimension out of range, or a hyperplane description that does not fit the cube at all.
+            throw new BadInputException(e.getMessage(), e);
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        out.println(r.n() + "-cube over " + r.field() + ": " + r.elements() + " elements, rank " + r.rank());
+        out.println("facets: " + r.facets());
+        out.println("skew facets: " + r.skewFacets());
+        out.println("rectangles: " + r.rectangles());
+        out.println("hyperplanes: " + (r.hyperplanes().isPresent() ? String.valueOf(r.hyperplanes().getAsInt())
+                : "not enumerated (only for the real cube with n <= " + CubeGeometry.MAX_ENUMERATED_DIMENSION + ")"));
+        r.hyperplane().ifPresent(h -> {
+            out.println("H: " + h.equation().orElse("(not the vertex set of a real hyperplane)"));
+            out.println("H vertices: " + Format.labels(h.vertices()));
+            out.println("H is a hyperplane: " + h.problem().map(p -> "no: " + p).orElse("yes"));
+        });
+        r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
+                + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,30 @@
+package org.chirocore.cli;
+
+import org.chirocore.orient.Orientability;
+import org.chirocore.search.SearchResult;
+
+/**
+ * The exit codes of every command. A proved verdict, whichever it is, is success; an answer
+ * cut short by the budget is not, so scripts can tell "no" from "don't know".
+ */
+final class ExitCodes {
+    /** A proved answer (orientable, non-orientable, a minimal core) or facts printed. */
+    static final int OK = 0;
+    /** A bug: an unexpected exception, printed with its stack trace by picocli. */
+    static final int INTERNAL_ERROR = 1;
+    /** Bad usage or bad input: unknown option, missing argument, unreadable or invalid file, invalid construction. */
+    static final int BAD_INPUT = 2;
+    /** No answer: a budget ran out. */
+    static final int UNKNOWN = 3;
+
+    private ExitCodes() {
+    }
+
+    static int of(Orientability result) {
+        return result instanceof Orientability.Unknown ? UNKNOWN : OK;
+    }
+
+    static int of(SearchResult result) {
+        return result instanceof SearchResult.Unknown ? UNKNOWN : OK;
+    }
+}

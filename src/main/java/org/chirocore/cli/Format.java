@@ -1,0 +1,24 @@
+package org.chirocore.cli;
+
+import java.util.List;
+
+/** Wording shared by the commands' summaries. */
+final class Format {
+    private Format() {
+    }
+
+    /** "rank 3 on 7 elements". */
+    static String shape(int rank, int elements) {
+        return "rank " + rank + " on " + elements + " element" + (elements == 1 ? "" : "s");
+    }
+
+    /** "rank 3 on 7 elements, 28 bases". */
+    static String shape(int rank, int elements, long bases) {
+        return shape(rank, elements) + ", " + bases + " bas" + (bases == 1 ? "is" : "es");
+    }
+
+    /** The labels separated by spaces, or "none". */
+    static String labels(List<String> labels) {
+        return labels.isEmpty() ? "none" : String.join(" ", labels);
+    }
+}

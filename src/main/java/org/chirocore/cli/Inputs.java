@@ -1,0 +1,75 @@
+package org.chirocore.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.chirocore.io.AtomicFiles;
+import org.chirocore.io.Json;
+import org.chirocore.io.MatroidFileException;
+import org.chirocore.io.MatroidFiles;
+import org.chirocore.io.ReductionJson;
+import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.Matroid;
+
+/**
+ * Reading and building inputs, and writing outputs, for the commands: each turns the library's
+ * rejection of the input into a {@link BadInputException}, so every command reports bad input
+ * the same way.
+ */
+final class Inputs {
+    private Inputs() {
+    }
+
+    /**
+     * A matroid to work on and where it came from.
+     *
+     * @param matroid the matroid
+     * @param source its description in result files
+     */
+    record Input(Matroid matroid, ReductionJson.Source source) {
+    }
+
+    /** The matroid in {@code file}, with the digest of its bytes. */
+    static Input read(Path file) {
+        try {
+            MatroidFiles.Hashed read = MatroidFiles.readHashed(file);
+            return new Input(read.matroid(), new ReductionJson.FromFile(file.toString(), read.sha256()));
+        } catch (MatroidFileException e) {
+            throw new BadInputException(e.getMessage(), e);
+        }
+    }
+
+    /** The matroid {@code construction} builds. */
+    static Input build(CubeConstruction construction) {
+        try {
+            return new Input(construction.build(), new ReductionJson.Constructed(construction));
+        } catch (IllegalArgumentException e) {
+            // CubeConstruction.build reports every invalid part (dimension, vertex label,
+            // hyperplane, general position) as an IllegalArgumentException with a full sentence.
+            throw new BadInputException("cannot build the " + construction.n() + "-cube construction: " + e.getMessage(),
+                    e);
+        }
+    }
+
+    /**
+     * Fails early when {@code file}'s directory does not exist, so a long search is not wasted on
+     * an output that cannot be written.
+     */
+    static void requireDirectoryOf(Path file) {
+        Path parent = file.toAbsolutePath().getParent();
+        if (parent == null || !Files.isDirectory(parent)) {
+            throw new BadInputException(file + ": cannot write the file: the directory " + parent + " does not exist",
+                    null);
+        }
+    }
+
+    /** Writes {@code json} to {@code file} atomically. */
+    static void write(Path file, Json json) {
+        try {
+            AtomicFiles.writeJson(file, json);
+        } catch (IOException e) {
+            throw new BadInputException(file + ": cannot write the file: " + e, e);
+        }
+    }
+}

@@ -1,0 +1,82 @@
+package org.chirocore.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.chirocore.io.Json;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class OrientCommandTest {
+    /** The 7 nonzero vectors of GF(2)^3 as columns: over GF(2) the Fano plane, over Q the non-Fano matroid. */
+    static final String SEVEN_VECTORS = "[[1,0,0],[0,1,0],[0,0,1],[1,1,0],[1,0,1],[0,1,1],[1,1,1]]";
+
+    @TempDir
+    Path dir;
+
+    static Path matrixFile(Path dir, String name, String field) throws IOException {
+        return Files.writeString(dir.resolve(name),
+                "{\"rank\": 3, \"matrix\": {\"field\": \"" + field + "\", \"columns\": " + SEVEN_VECTORS + "}}");
+    }
+
+    /**
+     * F7 is binary and not regular, hence non-orientable; the non-Fano matroid is
+     * real-representable, hence orientable ([Ox, §6.6]; F7 has 28 bases, the non-Fano 29).
+     */
+    @ParameterizedTest
+    @CsvSource({"GF(2), non-orientable, 28", "Q, orientable, 29"})
+    void decidesTheSevenVectors(String field, String verdict, int bases) throws IOException {
+        Path file = matrixFile(dir, "m.json", field);
+        CliRun run = CliRun.of("orient", file.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().startsWith(verdict + ": rank 3 on 7 elements, " + bases + " bases ("), run.out());
+        assertEquals("", run.err());
+    }
+
+    @Test
+    void jsonHasVerdictAndFigures() throws IOException {
+        CliRun run = CliRun.of("orient", matrixFile(dir, "f7.json", "GF(2)").toString(), "--json");
+        assertEquals(0, run.exit(), run.err());
+        Json.Obj o = Json.parse(run.out()).asObject("output");
+        assertEquals("non-orientable", o.requireString("verdict"));
+        assertEquals(7, o.requireInt("elements"));
+        assertEquals(3, o.requireInt("rank"));
+        assertEquals(28, o.requireInt("bases"));
+    }
+
+    @Test
+    void exhaustedBudgetIsUnknown() throws IOException {
+        CliRun run = CliRun.of("orient", matrixFile(dir, "f7.json", "GF(2)").toString(), "--conflicts", "1");
+        assertEquals(3, run.exit(), run.out() + run.err());
+        assertTrue(run.out().startsWith("unknown: "), run.out());
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+            // Basis exchange fails: {0,1} and {2,3} have no exchange of 0 into {2,3}.
+            "{\"rank\": 2, \"elements\": 4, \"bases\": [[0, 1], [2, 3]]}|bad.json: the bases do not form a matroid",
+            "{\"rank\": 3,|bad.json: not valid JSON: line 1",
+            "{\"rank\": 2, \"elements\": 3, \"bases\": [[0, 9]]}|bad.json: bases[0] names element 9, but there are "
+                    + "only 3 elements"})
+    void badFilesExitTwoNamingTheProblem(String content, String message) throws IOException {
+        Path file = Files.writeString(dir.resolve("bad.json"), content);
+        CliRun run = CliRun.of("orient", file.toString());
+        assertEquals(2, run.exit());
+        assertTrue(run.err().contains(message), run.err());
+        assertEquals(1, run.err().strip().lines().count(), "one line, no stack trace: " + run.err());
+        assertEquals("", run.out());
+    }
+
+    @Test
+    void missingFileExitsTwo() {
+        CliRun run = CliRun.of("orient", dir.resolve("absent.json").toString());
+        assertEquals(2, run.exit());
+        assertTrue(run.err().contains("absent.json: cannot read the file"), run.err());
+    }
+}

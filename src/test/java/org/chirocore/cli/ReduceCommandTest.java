@@ -1,0 +1,145 @@
+package org.chirocore.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+
+import org.chirocore.io.Json;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class ReduceCommandTest {
+    @TempDir
+    Path dir;
+
+    private String out(String name) {
+        return dir.resolve(name).toString();
+    }
+
+    private static Json.Obj read(Path file) throws IOException {
+        return Json.parse(Files.readString(file)).asObject("reduction");
+    }
+
+    /**
+     * The corner construction of the 3-cube, pulled and contracted, is the Fano plane
+     * (math-notes §3): already minimal, so the core is all 7 elements, rank 3, 28 bases, with a
+     * deletion and a contraction witness per element.
+     */
+    @Test
+    void cornerOfTheThreeCubeIsAFanoCore() throws IOException {
+        CliRun run = CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out",
+                out("x.json"));
+        assertEquals(0, run.exit(), run.err());
+        assertEquals("", run.err());
+        assertTrue(run.out().startsWith("non-orientable core: rank 3 on 7 elements, 28 bases"), run.out());
+        assertTrue(run.out().contains("witnesses: 14"), run.out());
+
+        Json.Obj r = read(dir.resolve("x.json"));
+        assertEquals(List.of("format", "version", "source", "settings", "verdict", "core", "path", "witnesses",
+                "stats"), List.copyOf(r.members().keySet()));
+        assertEquals("chirocore-reduction", r.requireString("format"));
+        assertEquals("non-orientable-core", r.requireString("verdict"));
+        Json.Obj core = r.requireObject("core");
+        assertEquals(3, core.requireInt("rank"));
+        assertEquals(7, core.requireArray("labels").size());
+        assertEquals(28, core.requireArray("bases").size());
+        Json.Arr witnesses = r.requireArray("witnesses");
+        assertEquals(14, witnesses.size());
+        Json.Obj first = witnesses.get(0).asObject("witness");
+        assertEquals("deletion", first.requireString("operation"));
+        assertTrue(first.requireString("signs").matches("[+-]+"));
+        Json.Obj construction = r.requireObject("source").requireObject("construction");
+        assertEquals("x1 + x2 + x3 = 1", construction.requireObject("hyperplane").requireString("equation"));
+        assertTrue(construction.requireBoolean("contracted"));
+        assertEquals("contract-first", r.requireObject("settings").requireString("strategy"));
+    }
+
+    @Test
+    void sameRunWritesTheSameFileApartFromTime() throws IOException {
+        String[] args = {"reduce", "--cube", "3", "--hyperplane", "1,1,1=1", "--pull", "111", "--seed", "7",
+            "--strategy", "delete-first", "--out", out("a.json")};
+        assertEquals(0, CliRun.of(args).exit());
+        Json.Obj a = read(dir.resolve("a.json"));
+        args[args.length - 1] = out("b.json");
+        assertEquals(0, CliRun.of(args).exit());
+        Json.Obj b = read(dir.resolve("b.json"));
+        for (String key : List.of("source", "settings", "verdict", "core", "path", "witnesses")) {
+            assertEquals(a.require(key), b.require(key), key);
+        }
+    }
+
+    @Test
+    void fileSourceNamesTheFileAndItsDigest() throws IOException, NoSuchAlgorithmException {
+        Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
+        CliRun run = CliRun.of("reduce", f7.toString(), "--out", out("r.json"));
+        assertEquals(0, run.exit(), run.err());
+        Json.Obj source = read(dir.resolve("r.json")).requireObject("source");
+        assertEquals(f7.toString(), source.requireString("file"));
+        String digest = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(f7)));
+        assertEquals(digest, source.requireString("sha256"));
+    }
+
+    @Test
+    void orientableInputHasItsWitness() throws IOException {
+        Path nonFano = OrientCommandTest.matrixFile(dir, "nf.json", "Q");
+        CliRun run = CliRun.of("reduce", nonFano.toString(), "--out", out("r.json"));
+        assertEquals(0, run.exit(), run.err());
+        Json.Obj r = read(dir.resolve("r.json"));
+        assertEquals("orientable", r.requireString("verdict"));
+        assertEquals(29, r.requireString("signs").length());
+    }
+
+    @Test
+    void exhaustedBudgetIsUnknownAndStillWritesTheFile() throws IOException {
+        Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
+        CliRun run = CliRun.of("reduce", f7.toString(), "--conflicts", "1", "--out", out("r.json"));
+        assertEquals(3, run.exit(), run.err());
+        Json.Obj r = read(dir.resolve("r.json"));
+        assertEquals("unknown", r.requireString("verdict"));
+        assertFalse(r.requireString("reason").isEmpty());
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+            "--cube 3 --hyperplane 000,100,010 --pull 111 --out OUT|is not a flat: 110 lies in its closure",
+            "--cube 3 --hyperplane 1,0,0=0 --pull 100 --out OUT|are not in general position: the closure of the "
+                    + "hyperline {000, 001} together with 100 also contains 101",
+            "--cube 3 --hyperplane 100,010,001 --pull 111|Missing required option: '--out=FILE'",
+            "FILE --cube 3 --hyperplane 100,010,001 --pull 111 --out OUT|exactly one of FILE or --cube N; both",
+            "--out OUT|exactly one of FILE or --cube N; neither",
+            "--cube 3 --pull 111 --out OUT|--cube needs both --hyperplane and --pull",
+            "FILE --pull 111 --out OUT|only go with --cube",
+            "--cube 3 --hyperplane 100,010,001 --pull 111 --strategy sideways --out OUT|Unknown strategy \"sideways\"",
+            "--cube 3 --hyperplane 100,010,001 --pull 1111 --out OUT|The vertex \"1111\" is not a 0/1 string of "
+                    + "length 3",
+            "--cube 3 --hyperplane 1,x=0 --pull 111 --out OUT|is neither \"a1,...,an=b\"",
+            "--cube 3 --hyperplane 100,010,001 --pull 111 --out MISSING|does not exist"})
+    void badUsageAndInputExitTwo(String args, String message) throws IOException {
+        Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
+        List<String> argv = new ArrayList<>(List.of("reduce"));
+        for (String a : args.split(" ")) {
+            argv.add(switch (a) {
+                case "OUT" -> out("o.json");
+                case "MISSING" -> out("absent/o.json");
+                case "FILE" -> f7.toString();
+                default -> a;
+            });
+        }
+        CliRun run = CliRun.of(argv.toArray(String[]::new));
+        assertEquals(2, run.exit(), run.out() + run.err());
+        assertTrue(run.err().contains(message), run.err());
+        assertFalse(run.err().contains("\tat "), "no stack trace: " + run.err());
+        assertFalse(Files.exists(dir.resolve("o.json")));
+    }
+}
