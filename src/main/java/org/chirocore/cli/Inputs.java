@@ -3,6 +3,7 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
@@ -27,14 +28,14 @@ final class Inputs {
      * @param matroid the matroid
      * @param source its description in result files
      */
-    record Input(Matroid matroid, ReductionJson.Source source) {
+    record Input(Matroid matroid, ReductionJson.Source source, List<String> focus) {
     }
 
     /** The matroid in {@code file}, with the digest of its bytes. */
     static Input read(Path file) {
         try {
             MatroidFiles.Hashed read = MatroidFiles.readHashed(file);
-            return new Input(read.matroid(), new ReductionJson.FromFile(file.toString(), read.sha256()));
+            return new Input(read.matroid(), new ReductionJson.FromFile(file.toString(), read.sha256()), List.of());
         } catch (MatroidFileException e) {
             throw new BadInputException(e.getMessage(), e);
         }
@@ -43,7 +44,9 @@ final class Inputs {
     /** The matroid {@code construction} builds. */
     static Input build(CubeConstruction construction) {
         try {
-            return new Input(construction.build(), new ReductionJson.Constructed(construction));
+            // The pulled hyperplane is where the obstruction sits: its elements are contracted first.
+            return new Input(construction.build(), new ReductionJson.Constructed(construction),
+                    construction.hyperplaneVertices());
         } catch (IllegalArgumentException e) {
             // CubeConstruction.build reports every invalid part (dimension, vertex label,
             // hyperplane, general position) as an IllegalArgumentException with a full sentence.

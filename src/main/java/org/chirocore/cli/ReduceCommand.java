@@ -2,6 +2,7 @@ package org.chirocore.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.io.Json;
@@ -56,6 +57,11 @@ final class ReduceCommand implements Callable<Integer> {
                     + "(default: ${DEFAULT-VALUE}).")
     private Strategy strategy;
 
+    @Option(names = "--focus", negatable = true, defaultValue = "true", fallbackValue = "true",
+            description = "For a construction too large to enumerate, contract the elements of the pulled hyperplane "
+                    + "first (default: yes).")
+    private boolean focus;
+
     @Mixin
     private BudgetOptions budget;
 
@@ -70,7 +76,8 @@ final class ReduceCommand implements Callable<Integer> {
     public Integer call() {
         Inputs.Input input = input();
         Inputs.requireDirectoryOf(out);
-        SearchSettings settings = new SearchSettings(seed, strategy, budget.budget());
+        SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
+                focus ? input.focus() : List.of());
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
         progress.finish();

@@ -25,11 +25,13 @@ final class RelationScan {
 
     /**
      * The relations among the elements of {@code active} that {@code signs} violates, at most
-     * {@code limit} of them, in scan order (X lexicographic, then a, b, c, d lexicographic).
+     * {@code limit} of them and at most {@code perX} for one X, in scan order (X lexicographic,
+     * then a, b, c, d lexicographic). A cap per X spreads one round's relations over many
+     * contractions M/X, which the solver needs far fewer rounds to refute than one crowded corner.
      *
      * @param signs one sign per variable, index v − 1
      */
-    List<GpRelation> violated(byte[] signs, long active, int limit) {
+    List<GpRelation> violated(byte[] signs, long active, int limit, int perX) {
         List<GpRelation> out = new ArrayList<>();
         int[] elements = ElementSets.elements(active);
         int n = elements.length;
@@ -48,13 +50,15 @@ final class RelationScan {
                 x |= 1L << elements[i];
             }
             int m = tabulate(signs, x, elements);
-            if (m >= 4 && scan(x, m, out, limit)) {
-                return out;
+            if (m >= 4) {
+                scan(x, m, out, Math.min(limit, out.size() + perX));
+                if (out.size() >= limit) {
+                    return out;
+                }
             }
         } while (ElementSets.nextCombination(comb, n));
         return out;
     }
-
     /**
      * Fills {@code table[i][j]} = χ(x, rest[i], rest[j]) for the elements outside X that are not
      * loops of M/X, and returns how many there are.
@@ -105,8 +109,8 @@ final class RelationScan {
         return kept;
     }
 
-    /** Scans the 4-subsets of rest[0..m); returns true when the limit was reached. */
-    private boolean scan(long x, int m, List<GpRelation> out, int limit) {
+    /** Scans the 4-subsets of rest[0..m) until {@code out} holds {@code limit} relations. */
+    private void scan(long x, int m, List<GpRelation> out, int limit) {
         int[][] t = table;
         for (int a = 0; a < m; a++) {
             int[] ta = t[a];
@@ -126,13 +130,12 @@ final class RelationScan {
                         if ((pos == 0) != (neg == 0)) {
                             out.add(new GpRelation(x, rest[a], rest[b], rest[c], rest[d]));
                             if (out.size() >= limit) {
-                                return true;
+                                return;
                             }
                         }
                     }
                 }
             }
         }
-        return false;
     }
 }

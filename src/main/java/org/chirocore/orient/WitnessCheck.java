@@ -39,7 +39,7 @@ public final class WitnessCheck {
             signs[i] = (byte) witness.sign(i);
         }
         long all = ElementSets.allMask(m.size());
-        List<GpRelation> violated = new RelationScan(index).violated(signs, all, 1);
+        List<GpRelation> violated = new RelationScan(index).violated(signs, all, 1, 1);
         return violated.isEmpty() ? Optional.empty()
                 : Optional.of("The signs violate the 3-term Grassmann-Pluecker relation " + violated.get(0) + ".");
     }

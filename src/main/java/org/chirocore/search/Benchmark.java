@@ -45,12 +45,15 @@ public final class Benchmark {
      * @throws IllegalArgumentException when the construction cannot be built for n (e.g. n = 1)
      */
     public static Row corner(int n, SearchSettings settings) {
-        Matroid m = CubeConstruction.corner(n).build();
+        CubeConstruction construction = CubeConstruction.corner(n);
+        Matroid m = construction.build();
+        SearchSettings focused = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
+                construction.hyperplaneVertices());
         Optional<Orientability> decision = n <= MAX_DECIDED_DIMENSION
                 ? Optional.of(new LazySatDecider(settings.budget()).decide(m))
                 : Optional.empty();
         long start = System.nanoTime();
-        SearchResult reduction = new UnsatCoreSearch(settings, Progress.SILENT).reduce(m);
+        SearchResult reduction = new UnsatCoreSearch(focused, Progress.SILENT).reduce(m);
         long millis = (System.nanoTime() - start) / 1_000_000;
         return new Row(n, m.size(), m.rank(), decision, reduction, millis);
     }

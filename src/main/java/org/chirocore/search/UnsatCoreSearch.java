@@ -136,7 +136,9 @@ public final class UnsatCoreSearch implements CoreSearch {
     private ExplicitMatroid startingMinor(Matroid input, Run run) {
         Matroid m = input;
         List<String> focusContracted = new ArrayList<>();
-        for (String label : settings.focus()) {
+        List<String> focus = new ArrayList<>(settings.focus());
+        Collections.shuffle(focus, run.random);
+        for (String label : focus) {
             int e = m.labels().indexOf(label);
             if (enumerable(m) || m.rank() <= 3 || e < 0 || m.rank(new int[] {e}) == 0) {
                 continue;
