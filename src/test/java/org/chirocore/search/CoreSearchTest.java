@@ -8,6 +8,7 @@ import java.util.List;
 
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.matroid.AffineCube;
+import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
@@ -15,7 +16,9 @@ import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.matroid.PulledMatroid;
 import org.chirocore.orient.Budget;
+import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.WitnessCheck;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -44,7 +47,7 @@ class CoreSearchTest {
             assertTrue(WitnessCheck.defect(minor, w.witness()).isEmpty(), () -> w.operation() + " " + w.element());
         }
         // The core itself is non-orientable: minimal means non-orientable with orientable minors.
-        assertEquals("non-orientable", new org.chirocore.orient.LazySatDecider(Budget.UNLIMITED).decide(core).verdict());
+        assertEquals("non-orientable", new LazySatDecider(Budget.UNLIMITED).decide(core).verdict());
     }
 
     @ParameterizedTest
@@ -108,5 +111,44 @@ class CoreSearchTest {
         int[] c = found.contracted().stream().mapToInt(input.labels()::indexOf).sorted().toArray();
         int[] d = found.deleted().stream().mapToInt(input.labels()::indexOf).sorted().toArray();
         assertEquals(found.core(), ExplicitMatroid.of(new Minor(input, c, d)));
+    }
+
+    @ParameterizedTest
+    @CsvSource({"4, 0", "4, 1", "5, 0", "5, 2", "6, 0"})
+    void cornerConstructionsReduceToCheckedMinimalCores(int n, long seed) {
+        // Focused on the pulled hyperplane, as the reduce command does for constructions.
+        CubeConstruction construction = CubeConstruction.corner(n);
+        Matroid m = construction.build();
+        SearchSettings settings = new SearchSettings(seed, Strategy.CONTRACT_FIRST, Budget.UNLIMITED,
+                construction.hyperplaneVertices());
+        SearchResult r = new UnsatCoreSearch(settings, Progress.SILENT).reduce(m);
+        MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
+        assertMinimalityProof(found);
+        int[] c = found.contracted().stream().mapToInt(m.labels()::indexOf).sorted().toArray();
+        int[] d = found.deleted().stream().mapToInt(m.labels()::indexOf).sorted().toArray();
+        assertEquals(found.core(), ExplicitMatroid.of(new Minor(m, c, d)));
+    }
+
+    @Test
+    void growthFindsANonOrientableRestriction() {
+        // AG(3,2) is non-orientable (binary, not regular: Oxley §6.6), so growth must stop at a
+        // non-orientable restriction of full rank.
+        Matroid m = NamedMatroids.binaryAffineCube();
+        RestrictionGrowth.Grown grown = new RestrictionGrowth(m,
+                new SearchSettings(3, Strategy.CONTRACT_FIRST, Budget.UNLIMITED), Progress.SILENT).grow();
+        Matroid restriction = Minor.restriction(m, grown.elements());
+        assertEquals(m.rank(), restriction.rank());
+        assertEquals("non-orientable", new LazySatDecider(Budget.UNLIMITED).decide(restriction).verdict());
+    }
+
+    @Test
+    @Tag("slow")
+    void withoutFocusTheFiveCubeIsReducedThroughGrowth() {
+        Matroid m = CubeConstruction.corner(5).build();
+        SearchResult r = new UnsatCoreSearch(new SearchSettings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED),
+                Progress.SILENT).reduce(m);
+        MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
+        assertTrue(found.stats().grownTo() < m.size());
+        assertMinimalityProof(found);
     }
 }
