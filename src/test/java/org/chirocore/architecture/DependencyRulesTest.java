@@ -1,0 +1,51 @@
+package org.chirocore.architecture;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * Keeps the package dependencies of DEVELOPERS.md true by scanning import lines: only
+ * {@code orient} talks to sat4j, and no library package reaches up into the CLI or sideways into
+ * a package it must not know.
+ */
+class DependencyRulesTest {
+    private static final Path MAIN = Path.of("src/main/java/org/chirocore");
+
+    @ParameterizedTest(name = "{0} does not import {1}")
+    @CsvSource({
+        "matroid, org.sat4j", "search, org.sat4j", "io, org.sat4j", "cli, org.sat4j",
+        "matroid, org.chirocore.orient", "matroid, org.chirocore.search", "matroid, org.chirocore.cli",
+        "matroid, org.chirocore.io",
+        "orient, org.chirocore.search", "orient, org.chirocore.cli", "orient, org.chirocore.io",
+        "search, org.chirocore.cli", "search, org.chirocore.io",
+        "io, org.chirocore.cli",
+    })
+    void packageDoesNotImport(String pkg, String forbidden) throws IOException {
+        assertEquals(List.of(), importsOf(pkg, forbidden));
+    }
+
+    private static List<String> importsOf(String pkg, String prefix) throws IOException {
+        List<String> offending = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(MAIN.resolve(pkg))) {
+            for (Path f : files.filter(p -> p.toString().endsWith(".java")).toList()) {
+                for (String line : Files.readAllLines(f)) {
+                    String t = line.trim();
+                    if (t.startsWith("import ") && t.replace("import static ", "").replace("import ", "")
+                            .startsWith(prefix)) {
+                        offending.add(f.getFileName() + ": " + t);
+                    }
+                }
+            }
+        }
+        return offending;
+    }
+}
