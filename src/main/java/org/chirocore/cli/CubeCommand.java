@@ -1,14 +1,20 @@
 package org.chirocore.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
+import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.CubeReport;
+import org.chirocore.matroid.Matroid;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -27,6 +33,15 @@ final class CubeCommand implements Callable<Integer> {
 
     @Mixin
     private ConstructionOptions construction;
+
+    @Option(names = "--save", paramLabel = "FILE",
+            description = "Write the pulled matroid (needs --hyperplane and --pull) to FILE as a matroid file with "
+                    + "its bases, at most 64 elements.")
+    private Path save;
+
+    @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
+            description = "With --save: contract the pulled vertex first (default: yes).")
+    private boolean contractPulled;
 
     @Override
     public Integer call() {
@@ -51,6 +66,16 @@ final class CubeCommand implements Callable<Integer> {
         });
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
+        if (save != null) {
+            Inputs.requireDirectoryOf(save);
+            Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
+            if (m.size() > ExplicitMatroid.MAX_ELEMENTS) {
+                throw new ParameterException(spec.commandLine(), "--save writes at most " + ExplicitMatroid.MAX_ELEMENTS
+                        + " elements as bases; this matroid has " + m.size() + ".");
+            }
+            Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(m)));
+            out.println("wrote " + save + " (rank " + m.rank() + " on " + m.size() + " elements)");
+        }
         return ExitCodes.OK;
     }
 }
