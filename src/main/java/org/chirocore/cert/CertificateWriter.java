@@ -60,9 +60,14 @@ public final class CertificateWriter {
      * @throws IOException when a file cannot be written; the certificate is then not replaced
      */
     public static Written write(Certificate c, Path target) throws IOException {
+        return write(c, target, INLINE_DRAT_LIMIT);
+    }
+
+    /** As {@link #write(Certificate, Path)}, with proofs longer than {@code inlineLimit} bytes written beside. */
+    static Written write(Certificate c, Path target, int inlineLimit) throws IOException {
         byte[] drat = c.refutation().drat().getBytes(StandardCharsets.US_ASCII);
         Optional<Path> dratFile = Optional.empty();
-        if (drat.length > INLINE_DRAT_LIMIT) {
+        if (drat.length > inlineLimit) {
             Path file = target.resolveSibling(baseName(target) + ".drat.gz");
             AtomicFiles.write(file, gzip(drat));
             dratFile = Optional.of(file);
