@@ -12,7 +12,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "chirocore", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Orientability of matroids and minor-minimal non-orientable minors of pulled affine cubes.",
-        subcommands = {OrientCommand.class, ReduceCommand.class, CubeCommand.class, BenchCommand.class,
+        subcommands = {OrientCommand.class, ReduceCommand.class, ExportCommand.class, CubeCommand.class,
+                BenchCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
@@ -52,6 +53,6 @@ public final class Chirocore implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "Missing command: use one of orient, reduce, cube, bench.");
+                "Missing command: use one of orient, reduce, export, cube, bench.");
     }
 }

@@ -5,8 +5,11 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 
-import org.chirocore.io.Json;
-import org.chirocore.io.ReductionJson;
+import org.chirocore.cert.Certificate;
+import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.Certification;
+import org.chirocore.io.ResultJson;
+import org.chirocore.orient.Refutation;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.SearchResult;
 import org.chirocore.search.SearchSettings;
@@ -23,7 +26,9 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code chirocore reduce}: reduces a matroid file or a cube construction to a minor-minimal
- * non-orientable minor and writes the reduction file (docs/reduction-format.md).
+ * non-orientable minor and writes its certificate (docs/certificate-format.md). An orientable
+ * input or an exhausted budget gives no certificate: a certificate only ever states minimal
+ * non-orientability.
  */
 @Command(name = "reduce", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = {"Reduce a matroid to a minor-minimal non-orientable minor, with a witness that every "
@@ -66,28 +71,45 @@ final class ReduceCommand implements Callable<Integer> {
     private BudgetOptions budget;
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
-            description = "Where to write the reduction file (written atomically).")
+            description = "Where to write the certificate of the core (written atomically; a large proof goes "
+                    + "beside it as NAME.drat.gz). Nothing is written unless a core is found.")
     private Path out;
 
-    @Option(names = "--json", description = "Print the reduction file's content instead of a summary.")
-    private boolean json;
+    @Option(names = "--witness-out", paramLabel = "FILE",
+            description = "When the input is orientable, write its chirotope there.")
+    private Path witnessOut;
 
     @Override
     public Integer call() {
         Inputs.Input input = input();
         Inputs.requireDirectoryOf(out);
+        if (witnessOut != null) {
+            Inputs.requireDirectoryOf(witnessOut);
+        }
         SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
                 focus ? input.focus() : List.of());
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
         progress.finish();
-        Json.Obj reduction = ReductionJson.reduction(input.source(), settings, result);
-        Inputs.write(out, reduction);
         PrintWriter w = spec.commandLine().getOut();
-        if (json) {
-            w.println(reduction.toText());
-        } else {
-            summarise(w, input, result);
+        String from = Format.shape(input.matroid().rank(), input.matroid().size());
+        if (result instanceof SearchResult.Found f) {
+            Certification certification = Certification.of(f.core(), input.source(), settings.budget());
+            if (certification instanceof Certification.OutOfBudget o) {
+                w.println("unknown: a core was found, but proving it for the certificate ran out of budget: "
+                        + o.reason() + "; no certificate written");
+                return ExitCodes.UNKNOWN;
+            }
+            Certificate certificate = ((Certification.Certified) certification).certificate();
+            summarise(w, from, f.core(), certificate, Inputs.write(out, certificate));
+        } else if (result instanceof SearchResult.Orientable o) {
+            w.println("orientable: " + from + "; no non-orientable minor to find, no certificate written");
+            if (witnessOut != null) {
+                Inputs.write(witnessOut, ResultJson.chirotope(o.witness()));
+                w.println("wrote the witness to " + witnessOut);
+            }
+        } else if (result instanceof SearchResult.Unknown u) {
+            w.println("unknown: " + u.reason() + "; no certificate written");
         }
         return ExitCodes.of(result);
     }
@@ -108,22 +130,20 @@ final class ReduceCommand implements Callable<Integer> {
         return Inputs.read(file);
     }
 
-    private void summarise(PrintWriter w, Inputs.Input input, SearchResult result) {
-        String from = Format.shape(input.matroid().rank(), input.matroid().size());
-        if (result instanceof SearchResult.Found f) {
-            MinimalCore core = f.core();
-            w.println("non-orientable core: " + Format.shape(core.core().rank(), core.core().size(),
-                    core.core().basisCount()) + " (from " + from + ")");
-            w.println("contracted: " + Format.labels(core.contracted()));
-            w.println("deleted: " + Format.labels(core.deleted()));
-            w.println("witnesses: " + core.witnesses().size()
-                    + " (every single-element deletion and contraction is orientable)");
-            w.println("time: " + core.stats().millis() + " ms, " + core.stats().decisions() + " decisions");
-        } else if (result instanceof SearchResult.Orientable) {
-            w.println("orientable: " + from + "; no non-orientable minor to find (witness signs in the file)");
-        } else if (result instanceof SearchResult.Unknown u) {
-            w.println("unknown: " + u.reason());
-        }
-        w.println("wrote " + out);
+    private static void summarise(PrintWriter w, String from, MinimalCore core, Certificate certificate,
+            CertificateWriter.Written written) {
+        w.println("non-orientable core: " + Format.shape(core.core().rank(), core.core().size(),
+                core.core().basisCount()) + " (from " + from + ")");
+        w.println("contracted: " + Format.labels(core.contracted()));
+        w.println("deleted: " + Format.labels(core.deleted()));
+        w.println("witnesses: " + core.witnesses().size()
+                + " (every single-element deletion and contraction is orientable)");
+        w.println("search: " + core.stats().millis() + " ms, " + core.stats().decisions() + " decisions");
+        Refutation proof = certificate.refutation();
+        w.println("proof: " + proof.relations().size() + " relations, " + proof.stats().lemmas() + " lemmas, "
+                + proof.stats().deletions() + " deletions, " + proof.drat().length() + " bytes of DRAT, "
+                + proof.stats().solve().millis() + " ms");
+        w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
+                + written.dratFile().map(d -> " and " + d).orElse(""));
     }
 }

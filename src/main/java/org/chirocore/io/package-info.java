@@ -1,2 +1,2 @@
-/** File formats: a strict JSON model, parser and writer, matroid and result files; depends only on the JDK, {@code matroid}, {@code orient} and {@code search} (for reduction files). */
+/** File formats: a strict JSON model, parser and writer, matroid and result files, atomic writes; depends only on the JDK, {@code matroid} and {@code orient}. */
 package org.chirocore.io;

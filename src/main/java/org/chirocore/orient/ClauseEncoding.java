@@ -90,6 +90,23 @@ public final class ClauseEncoding {
         return out;
     }
 
+    /**
+     * The CNF of the certificate format: a unit clause [v] for each normalised variable in the
+     * given order, then the clauses of each relation in order. Costs O(1) per literal.
+     *
+     * @throws IllegalArgumentException as {@link #clauses}
+     */
+    public static List<int[]> cnf(BasisIndex index, List<Integer> normalised, List<GpRelation> relations) {
+        List<int[]> out = new ArrayList<>();
+        for (int v : normalised) {
+            out.add(new int[] {v});
+        }
+        for (GpRelation r : relations) {
+            out.addAll(clauses(index, r));
+        }
+        return out;
+    }
+
     /** The clause false exactly under the assignment whose "negative" bits are {@code bits} (first variable highest). */
     private static int[] excluding(int[] vars, int bits) {
         int[] clause = new int[vars.length];

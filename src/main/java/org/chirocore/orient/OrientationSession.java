@@ -1,5 +1,6 @@
 package org.chirocore.orient;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
@@ -21,7 +22,9 @@ import org.sat4j.specs.TimeoutException;
  * S), and an unsatisfiable answer comes with the elements the solver needed.
  *
  * <p>This class is the only one that talks to sat4j; it turns sat4j's exceptions into answers:
- * a contradiction while adding clauses is unsatisfiability, a time-out is "unknown".
+ * a contradiction while adding clauses is unsatisfiability, a time-out is "unknown". A session
+ * built with a {@link DratLog} (package-private, for {@link RefutationSearch}) also keeps the
+ * relations it added, in order, and has the solver log its learned and deleted clauses.
  */
 public final class OrientationSession {
     /** Violated relations added per round; bounds the memory one round may take. */
@@ -58,6 +61,8 @@ public final class OrientationSession {
     private final ISolver solver;
     private final RelationScan scan;
     private final long started;
+    /** The relations whose clauses went to the solver, in order; null unless proof logging. */
+    private final List<GpRelation> added;
     private boolean contradiction;
     private long relations;
     private long clauses;
@@ -69,12 +74,28 @@ public final class OrientationSession {
      *     on a proper subset and for the elements an unsatisfiable answer needed)
      */
     public OrientationSession(BasisIndex index, boolean selectors, Budget budget) {
+        this(index, selectors, budget, null);
+    }
+
+    /**
+     * A session without selectors whose solver logs its clausal proof to {@code log}; it records
+     * the relations it adds (see {@link #addedRelations}).
+     */
+    OrientationSession(BasisIndex index, Budget budget, DratLog log) {
+        this(index, false, budget, log);
+    }
+
+    private OrientationSession(BasisIndex index, boolean selectors, Budget budget, DratLog log) {
         this.index = index;
         this.selectors = selectors;
         this.budget = budget;
         this.solver = SolverFactory.newDefault();
         this.scan = new RelationScan(index);
         this.started = System.currentTimeMillis();
+        this.added = log == null ? null : new ArrayList<>();
+        if (log != null) {
+            solver.setSearchListener(log);
+        }
         solver.newVar(index.basisCount() + (selectors ? index.size() : 0));
         if (budget.conflictsPerCall() > 0) {
             solver.setTimeoutOnConflicts(budget.conflictsPerCall());
@@ -101,6 +122,10 @@ public final class OrientationSession {
     }
 
     private void add(GpRelation relation) {
+        if (added != null && !contradiction) {
+            // Relations after a contradiction gave the solver no clause; a proof does not need them.
+            added.add(relation);
+        }
         relations++;
         int[] guard = selectors ? ElementSets.elements(relation.support()) : new int[0];
         for (int[] c : ClauseEncoding.clauses(index, relation)) {
@@ -194,6 +219,14 @@ public final class OrientationSession {
     public SolveStats stats() {
         return new SolveStats(index.basisCount(), relations, clauses, rounds, conflicts,
                 System.currentTimeMillis() - started);
+    }
+
+    /**
+     * The relations whose clauses were given to the solver, in the order added; only for a
+     * proof-logging session.
+     */
+    List<GpRelation> addedRelations() {
+        return List.copyOf(added);
     }
 
     /** The basis index this session works on. */

@@ -28,7 +28,7 @@ class ReduceCommandTest {
     }
 
     private static Json.Obj read(Path file) throws IOException {
-        return Json.parse(Files.readString(file)).asObject("reduction");
+        return Json.parse(Files.readString(file)).asObject("certificate");
     }
 
     /**
@@ -46,27 +46,26 @@ class ReduceCommandTest {
         assertTrue(run.out().contains("witnesses: 14"), run.out());
 
         Json.Obj r = read(dir.resolve("x.json"));
-        assertEquals(List.of("format", "version", "source", "settings", "verdict", "core", "path", "witnesses",
-                "stats"), List.copyOf(r.members().keySet()));
-        assertEquals("chirocore-reduction", r.requireString("format"));
-        assertEquals("non-orientable-core", r.requireString("verdict"));
-        Json.Obj core = r.requireObject("core");
+        assertEquals(List.of("format", "version", "tool", "sha256", "content", "run"),
+                List.copyOf(r.members().keySet()));
+        assertEquals("chirocore-certificate", r.requireString("format"));
+        Json.Obj content = r.requireObject("content");
+        assertEquals("minor-minimal non-orientable", content.requireString("statement"));
+        Json.Obj core = content.requireObject("core");
         assertEquals(3, core.requireInt("rank"));
         assertEquals(7, core.requireArray("labels").size());
         assertEquals(28, core.requireArray("bases").size());
-        Json.Arr witnesses = r.requireArray("witnesses");
-        assertEquals(14, witnesses.size());
-        Json.Obj first = witnesses.get(0).asObject("witness");
-        assertEquals("deletion", first.requireString("operation"));
-        assertTrue(first.requireString("signs").matches("[+-]+"));
-        Json.Obj construction = r.requireObject("source").requireObject("construction");
-        assertEquals("x1 + x2 + x3 = 1", construction.requireObject("hyperplane").requireString("equation"));
-        assertTrue(construction.requireBoolean("contracted"));
-        assertEquals("contract-first", r.requireObject("settings").requireString("strategy"));
+        assertEquals(7, content.requireArray("minimality").size());
+        Json.Obj construction = content.requireObject("provenance").requireObject("construction");
+        // H in element order: labels read as binary numbers.
+        assertEquals(Json.Arr.ofStrings(List.of("001", "010", "100")), construction.requireArray("hyperplane"));
+        assertTrue(construction.requireBoolean("contractPulled"));
+        assertTrue(content.requireObject("nonOrientability").requireString("drat").endsWith("\n0\n"));
+        assertEquals("contract-first", r.requireObject("run").requireObject("search").requireString("strategy"));
     }
 
     @Test
-    void sameRunWritesTheSameFileApartFromTime() throws IOException {
+    void sameRunWritesTheSameContent() throws IOException {
         String[] args = {"reduce", "--cube", "3", "--hyperplane", "1,1,1=1", "--pull", "111", "--seed", "7",
             "--strategy", "delete-first", "--out", out("a.json")};
         assertEquals(0, CliRun.of(args).exit());
@@ -74,40 +73,64 @@ class ReduceCommandTest {
         args[args.length - 1] = out("b.json");
         assertEquals(0, CliRun.of(args).exit());
         Json.Obj b = read(dir.resolve("b.json"));
-        for (String key : List.of("source", "settings", "verdict", "core", "path", "witnesses")) {
-            assertEquals(a.require(key), b.require(key), key);
-        }
+        assertEquals(a.require("content").toText(), b.require("content").toText());
+        assertEquals(a.requireString("sha256"), b.requireString("sha256"));
     }
 
     @Test
-    void fileSourceNamesTheFileAndItsDigest() throws IOException, NoSuchAlgorithmException {
+    void fileSourceNamesTheDigestOfTheFile() throws IOException, NoSuchAlgorithmException {
         Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
         CliRun run = CliRun.of("reduce", f7.toString(), "--out", out("r.json"));
         assertEquals(0, run.exit(), run.err());
-        Json.Obj source = read(dir.resolve("r.json")).requireObject("source");
-        assertEquals(f7.toString(), source.requireString("file"));
+        Json.Obj given = read(dir.resolve("r.json")).requireObject("content").requireObject("provenance")
+                .requireObject("given");
         String digest = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(f7)));
-        assertEquals(digest, source.requireString("sha256"));
+        assertEquals(digest, given.requireString("sha256"));
+        assertEquals(7, given.requireInt("elements"));
+        assertEquals(3, given.requireInt("rank"));
     }
 
     @Test
-    void orientableInputHasItsWitness() throws IOException {
+    void orientableInputWritesNoCertificateButItsWitness() throws IOException {
         Path nonFano = OrientCommandTest.matrixFile(dir, "nf.json", "Q");
-        CliRun run = CliRun.of("reduce", nonFano.toString(), "--out", out("r.json"));
+        CliRun run = CliRun.of("reduce", nonFano.toString(), "--out", out("r.json"), "--witness-out", out("w.json"));
         assertEquals(0, run.exit(), run.err());
-        Json.Obj r = read(dir.resolve("r.json"));
-        assertEquals("orientable", r.requireString("verdict"));
-        assertEquals(29, r.requireString("signs").length());
+        assertTrue(run.out().startsWith("orientable"), run.out());
+        assertFalse(Files.exists(dir.resolve("r.json")));
+        assertEquals(29, read(dir.resolve("w.json")).requireString("signs").length());
     }
 
     @Test
-    void exhaustedBudgetIsUnknownAndStillWritesTheFile() throws IOException {
+    void exhaustedBudgetIsUnknownAndWritesNothing() throws IOException {
         Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");
         CliRun run = CliRun.of("reduce", f7.toString(), "--conflicts", "1", "--out", out("r.json"));
         assertEquals(3, run.exit(), run.err());
-        Json.Obj r = read(dir.resolve("r.json"));
-        assertEquals("unknown", r.requireString("verdict"));
-        assertFalse(r.requireString("reason").isEmpty());
+        assertTrue(run.out().startsWith("unknown: "), run.out());
+        assertFalse(Files.exists(dir.resolve("r.json")));
+    }
+
+    @Test
+    void exportWritesTheRegeneratedCnfAndTheProof() throws IOException {
+        assertEquals(0, CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out",
+                out("f.json")).exit());
+        Path exported = Files.createDirectory(dir.resolve("export"));
+        CliRun run = CliRun.of("export", out("f.json"), "--out-dir", exported.toString());
+        assertEquals(0, run.exit(), run.err());
+        List<String> cnf = Files.readAllLines(exported.resolve("f.cnf"));
+        assertEquals("p cnf 28 " + (cnf.size() - 1), cnf.get(0));
+        assertEquals(read(dir.resolve("f.json")).requireObject("content").requireObject("nonOrientability")
+                .requireString("drat"), Files.readString(exported.resolve("f.drat")));
+    }
+
+    @Test
+    void exportRefusesATamperedCertificate() throws IOException {
+        assertEquals(0, CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out",
+                out("f.json")).exit());
+        Path f = dir.resolve("f.json");
+        Files.writeString(f, Files.readString(f).replace("\"minor-minimal non-orientable\"", "\"orientable\""));
+        CliRun run = CliRun.of("export", f.toString(), "--out-dir", dir.toString());
+        assertEquals(2, run.exit(), run.err());
+        assertTrue(run.err().contains("digest"), run.err());
     }
 
     @ParameterizedTest

@@ -1,0 +1,82 @@
+package org.chirocore.cert;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Matroid;
+import org.chirocore.matroid.Minor;
+import org.chirocore.orient.BasisIndex;
+import org.chirocore.orient.Normalisation;
+import org.chirocore.orient.Refutation;
+import org.chirocore.orient.WitnessCheck;
+import org.chirocore.search.MinimalCore;
+import org.chirocore.search.MinorWitness;
+import org.chirocore.search.Operation;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.SearchStats;
+
+/**
+ * Everything a certificate of minor-minimal non-orientability states: the core, its provenance,
+ * a refutation of its orientability constraints and a witness pair per element; plus the search
+ * figures, which go to the unhashed {@code run} member. Immutable.
+ *
+ * @param core the core
+ * @param provenance where it came from
+ * @param refutation the proof that it has no chirotope
+ * @param minimality one entry per core element, in element order
+ * @param settings the search settings (informative)
+ * @param searchStats the search figures (informative)
+ */
+public record Certificate(ExplicitMatroid core, Provenance provenance, Refutation refutation,
+        List<MinimalityWitness> minimality, SearchSettings settings, SearchStats searchStats) {
+    public Certificate {
+        minimality = List.copyOf(minimality);
+        if (minimality.size() != core.size()) {
+            throw new IllegalArgumentException("A certificate needs one minimality entry per core element: "
+                    + core.size() + " elements, " + minimality.size() + " entries.");
+        }
+    }
+
+    /**
+     * The certificate of {@code found}, obtained from {@code source}, refuted by {@code refutation}.
+     * Re-checks every witness against the minor rebuilt here (one full relation scan each) and
+     * that the refutation's normalisation is the one of the core, so nothing unchecked is written.
+     *
+     * @throws IllegalStateException when a witness fails its re-check, or the refutation was made
+     *     for another matroid
+     */
+    public static Certificate of(MinimalCore found, Source source, Refutation refutation) {
+        ExplicitMatroid core = found.core();
+        BasisIndex index = BasisIndex.of(core);
+        List<Integer> normalisation = Arrays.stream(Normalisation.fixedVariables(index)).boxed().toList();
+        if (!normalisation.equals(refutation.normalised())) {
+            throw new IllegalStateException("The refutation fixes variables " + refutation.normalised()
+                    + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
+        }
+        List<MinimalityWitness> entries = new ArrayList<>();
+        for (int e = 0; e < core.size(); e++) {
+            String label = core.labels().get(e);
+            entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION),
+                    checkedSigns(found, core, e, Operation.CONTRACTION)));
+        }
+        return new Certificate(core, new Provenance(source, found.contracted(), found.deleted()), refutation,
+                entries, found.settings(), found.stats());
+    }
+
+    private static String checkedSigns(MinimalCore found, ExplicitMatroid core, int e, Operation operation) {
+        String label = core.labels().get(e);
+        MinorWitness w = found.witnesses().stream()
+                .filter(x -> x.element().equals(label) && x.operation() == operation)
+                .findFirst()
+                .orElseThrow(() -> new IllegalStateException("The core has no " + operation + " witness for element "
+                        + label + "."));
+        // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
+        int[] single = {e};
+        Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
+                : new Minor(core, single, new int[0]);
+        return ResultJson.signString(WitnessCheck.checked(minor, w.witness()));
+    }
+}

@@ -1,0 +1,216 @@
+package org.chirocore.cert;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Optional;
+import java.util.zip.GZIPOutputStream;
+
+import org.chirocore.io.AtomicFiles;
+import org.chirocore.io.Json;
+import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.ElementSets;
+import org.chirocore.orient.BasisIndex;
+import org.chirocore.orient.GpRelation;
+import org.chirocore.orient.Refutation;
+import org.chirocore.orient.SolveStats;
+
+/**
+ * Writes a {@link Certificate} in the format of {@code docs/certificate-format.md}: the canonical
+ * {@code content}, its SHA-256, and the unhashed {@code run} figures. A DRAT proof of more than
+ * {@value #INLINE_DRAT_LIMIT} bytes goes gzip-compressed to {@code <name>.drat.gz} beside the
+ * certificate, named in {@code dratFile} with the digest of its uncompressed bytes. Both files are
+ * written atomically, the proof first, so a certificate never names a missing proof. Equal
+ * certificates give byte-identical content. Cost: linear in the core's bases, the relations,
+ * the witnesses and the proof.
+ */
+public final class CertificateWriter {
+    /** The value of the {@code format} member. */
+    public static final String FORMAT = "chirocore-certificate";
+    /** The value of the {@code version} member. */
+    public static final int VERSION = 1;
+    /** The value of the {@code tool} member; kept equal to the version in pom.xml. */
+    public static final String TOOL = "chirocore 0.1.0";
+    /** Proofs up to this many bytes are written inline. */
+    public static final int INLINE_DRAT_LIMIT = 1 << 20;
+
+    private CertificateWriter() {
+    }
+
+    /**
+     * What {@link #write} wrote.
+     *
+     * @param certificate the certificate file
+     * @param dratFile the compressed proof beside it, when the proof was too large to inline
+     * @param sha256 the content digest
+     */
+    public record Written(Path certificate, Optional<Path> dratFile, String sha256) {
+    }
+
+    /**
+     * Writes {@code c} to {@code target}, and its proof beside it when large.
+     *
+     * @throws IOException when a file cannot be written; the certificate is then not replaced
+     */
+    public static Written write(Certificate c, Path target) throws IOException {
+        return write(c, target, INLINE_DRAT_LIMIT);
+    }
+
+    /** As {@link #write(Certificate, Path)}, with proofs longer than {@code inlineLimit} bytes written beside. */
+    static Written write(Certificate c, Path target, int inlineLimit) throws IOException {
+        byte[] drat = c.refutation().drat().getBytes(StandardCharsets.US_ASCII);
+        Optional<Path> dratFile = Optional.empty();
+        if (drat.length > inlineLimit) {
+            Path file = target.resolveSibling(baseName(target) + ".drat.gz");
+            AtomicFiles.write(file, gzip(drat));
+            dratFile = Optional.of(file);
+        }
+        Json.Obj content = content(c, dratFile.map(p -> p.getFileName().toString()));
+        Json.Obj document = document(c, content);
+        AtomicFiles.writeJson(target, document);
+        return new Written(target, dratFile, sha256(content));
+    }
+
+    /** The file name without a final {@code .json}: "c5.json" gives "c5". */
+    public static String baseName(Path file) {
+        String name = file.getFileName().toString();
+        return name.endsWith(".json") ? name.substring(0, name.length() - ".json".length()) : name;
+    }
+
+    /** The whole certificate document around {@code content}. */
+    public static Json.Obj document(Certificate c, Json.Obj content) {
+        return Json.Obj.builder()
+                .put("format", FORMAT)
+                .put("version", VERSION)
+                .put("tool", TOOL)
+                .put("sha256", sha256(content))
+                .put("content", content)
+                .put("run", run(c))
+                .build();
+    }
+
+    /**
+     * The hashed content; the proof inline, or named by {@code dratFile} with its digest.
+     */
+    public static Json.Obj content(Certificate c, Optional<String> dratFile) {
+        return Json.Obj.builder()
+                .put("statement", "minor-minimal non-orientable")
+                .put("core", Json.Obj.builder()
+                        .put("rank", c.core().rank())
+                        .put("labels", Json.Arr.ofStrings(c.core().labels()))
+                        .put("bases", new Json.Arr(c.core().bases().stream().<Json>map(Json.Arr::ofInts).toList()))
+                        .build())
+                .put("provenance", provenance(c.provenance()))
+                .put("nonOrientability", nonOrientability(c, dratFile))
+                .put("minimality", new Json.Arr(c.minimality().stream().<Json>map(w -> Json.Obj.builder()
+                        .put("element", w.element())
+                        .put("deletion", w.deletion())
+                        .put("contraction", w.contraction())
+                        .build()).toList()))
+                .build();
+    }
+
+    /** SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */
+    public static String sha256(Json value) {
+        return sha256(value.toText().getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** SHA-256, lower-case hex, of {@code bytes}. */
+    public static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("Every Java platform provides SHA-256.", e);
+        }
+    }
+
+    private static Json.Obj provenance(Provenance p) {
+        Json.Obj.Builder b = Json.Obj.builder();
+        if (p.source() instanceof Source.Constructed k) {
+            CubeConstruction c = k.construction();
+            b.put("construction", Json.Obj.builder()
+                    .put("cube", c.n())
+                    .put("field", c.field().name())
+                    .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices()))
+                    .put("pulled", c.pulledVertex())
+                    .put("contractPulled", c.contractPulled())
+                    .build());
+        } else {
+            Source.Given g = (Source.Given) p.source();
+            b.put("given", Json.Obj.builder()
+                    .put("sha256", g.sha256())
+                    .put("elements", g.elements())
+                    .put("rank", g.rank())
+                    .build());
+        }
+        return b.put("path", Json.Obj.builder()
+                .put("contracted", Json.Arr.ofStrings(p.contracted()))
+                .put("deleted", Json.Arr.ofStrings(p.deleted()))
+                .build()).build();
+    }
+
+    private static Json.Obj nonOrientability(Certificate c, Optional<String> dratFile) {
+        Refutation r = c.refutation();
+        BasisIndex index = BasisIndex.of(c.core());
+        List<Json> normalised = new ArrayList<>();
+        for (int v : r.normalised()) {
+            normalised.add(Json.Arr.ofInts(ElementSets.elements(index.basis(v))));
+        }
+        List<Json> relations = new ArrayList<>();
+        for (GpRelation g : r.relations()) {
+            relations.add(new Json.Arr(List.of(Json.Arr.ofInts(ElementSets.elements(g.x())), Json.Num.of(g.a()),
+                    Json.Num.of(g.b()), Json.Num.of(g.c()), Json.Num.of(g.d()))));
+        }
+        Json.Obj.Builder b = Json.Obj.builder()
+                .put("normalised", new Json.Arr(normalised))
+                .put("relations", new Json.Arr(relations));
+        if (dratFile.isPresent()) {
+            b.put("dratFile", dratFile.get())
+                    .put("dratSha256", sha256(r.drat().getBytes(StandardCharsets.US_ASCII)));
+        } else {
+            b.put("drat", r.drat());
+        }
+        return b.build();
+    }
+
+    private static Json.Obj run(Certificate c) {
+        SolveStats s = c.refutation().stats().solve();
+        return Json.Obj.builder()
+                .put("search", Json.Obj.builder()
+                        .put("seed", c.settings().seed())
+                        .put("strategy", c.settings().strategy().id())
+                        .put("decisions", c.searchStats().decisions())
+                        .put("grownTo", c.searchStats().grownTo())
+                        .put("millis", c.searchStats().millis())
+                        .build())
+                .put("refutation", Json.Obj.builder()
+                        .put("bases", s.bases())
+                        .put("relations", c.refutation().relations().size())
+                        .put("clauses", s.clauses())
+                        .put("rounds", s.rounds())
+                        .put("conflicts", s.conflicts())
+                        .put("lemmas", c.refutation().stats().lemmas())
+                        .put("deletions", c.refutation().stats().deletions())
+                        .put("dratBytes", c.refutation().drat().length())
+                        .put("millis", s.millis())
+                        .build())
+                .build();
+    }
+
+    private static byte[] gzip(byte[] bytes) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream(bytes.length / 4 + 64);
+        try (GZIPOutputStream z = new GZIPOutputStream(out)) {
+            z.write(bytes);
+        } catch (IOException e) {
+            throw new UncheckedIOException("Compressing to memory cannot fail.", e);
+        }
+        return out.toByteArray();
+    }
+}

@@ -1,0 +1,30 @@
+package org.chirocore.cert;
+
+import org.chirocore.matroid.CubeConstruction;
+
+/** Where the reduced matroid came from, as a certificate's provenance names it. */
+public sealed interface Source {
+
+    /**
+     * The matroid {@code construction.build()} returns: the pulled cube, contracted by the
+     * pulled vertex when the construction says so.
+     */
+    record Constructed(CubeConstruction construction) implements Source {
+    }
+
+    /**
+     * A matroid read from a file, identified by the digest of its bytes.
+     *
+     * @param sha256 the SHA-256 of the file's bytes, 64 lower-case hex digits
+     * @param elements the matroid's number of elements
+     * @param rank its rank
+     */
+    record Given(String sha256, int elements, int rank) implements Source {
+        public Given {
+            if (!sha256.matches("[0-9a-f]{64}")) {
+                throw new IllegalArgumentException("A SHA-256 digest is 64 lower-case hex digits, not \"" + sha256
+                        + "\".");
+            }
+        }
+    }
+}

@@ -1,0 +1,53 @@
+package org.chirocore.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+import org.chirocore.cert.CertificateExport;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code chirocore export}: writes a certificate's CNF (DIMACS, regenerated from its content)
+ * and its DRAT proof as separate files, for external proof checkers such as drat-trim.
+ */
+@Command(name = "export", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = {"Write the CNF of a certificate's non-orientability claim as DIR/NAME.cnf (DIMACS, "
+                + "regenerated from the certificate) and its proof as DIR/NAME.drat, NAME being the "
+                + "certificate's file name without .json."})
+final class ExportCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(paramLabel = "CERT", description = "A certificate written by reduce.")
+    private Path certificate;
+
+    @Option(names = "--out-dir", paramLabel = "DIR", required = true, description = "An existing directory.")
+    private Path outDir;
+
+    @Override
+    public Integer call() {
+        if (!Files.isDirectory(outDir)) {
+            throw new BadInputException(outDir + ": not an existing directory", null);
+        }
+        CertificateExport.Exported e;
+        try {
+            e = CertificateExport.export(certificate, outDir);
+        } catch (IOException ex) {
+            throw new BadInputException(certificate + ": " + ex, ex);
+        } catch (IllegalArgumentException ex) {
+            // Malformed JSON, a wrong digest, bases that are no matroid's and malformed relations
+            // are all reported as IllegalArgumentException subclasses with a full sentence.
+            throw new BadInputException(certificate + ": not a valid certificate: " + ex.getMessage(), ex);
+        }
+        spec.commandLine().getOut().println("wrote " + e.cnf() + " (" + e.variables() + " variables, "
+                + e.clauses() + " clauses) and " + e.drat());
+        return ExitCodes.OK;
+    }
+}
