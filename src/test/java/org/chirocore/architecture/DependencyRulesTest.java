@@ -27,7 +27,9 @@ class DependencyRulesTest {
         "matroid, org.chirocore.io",
         "orient, org.chirocore.search", "orient, org.chirocore.cli", "orient, org.chirocore.io",
         "search, org.chirocore.cli", "search, org.chirocore.io",
-        "io, org.chirocore.cli",
+        "io, org.chirocore.cli", "io, org.chirocore.search", "io, org.chirocore.cert",
+        "cert, org.sat4j", "cert, org.chirocore.cli",
+        "matroid, org.chirocore.cert", "orient, org.chirocore.cert", "search, org.chirocore.cert",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));
