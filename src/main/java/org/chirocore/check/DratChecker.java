@@ -173,7 +173,7 @@ public final class DratChecker {
             if (conflict == 0) {
                 undo(mark);
                 throw new ProofError(line.number(), "lemma " + clauseText(lits) + " is neither RUP nor RAT on " + pivot
-                        + " (the resolvent with clause " + clauseText(d) + " is not RUP)");
+                        + " (the resolvent with clause " + id + ", " + clauseText(d) + ", is not RUP)");
             }
             hints.append(" -").append(id);
             appendHints(hints, conflict);

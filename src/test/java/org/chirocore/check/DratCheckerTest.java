@@ -93,7 +93,7 @@ class DratCheckerTest {
     void aLemmaThatIsNeitherRupNorRatIsRejectedWithItsLine() {
         DratChecker.Outcome o = DratChecker.check(RAT_EXAMPLE, "-2 0\n4 0\n0\n");
         assertFalse(o.valid());
-        assertEquals("line 1: lemma -2 0 is neither RUP nor RAT on -2 (the resolvent with clause -1 2 0 is not RUP)", o.failure());
+        assertEquals("line 1: lemma -2 0 is neither RUP nor RAT on -2 (the resolvent with clause 1, 2 -1 0, is not RUP)", o.failure());
     }
 
     @Test
