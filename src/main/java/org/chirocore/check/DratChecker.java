@@ -151,7 +151,7 @@ public final class DratChecker {
         int pivot = lits[0];
         for (int id = 1; id < clauses.size(); id++) {
             int[] d = clauses.get(id);
-            if (d == null || !contains(d, -pivot)) {
+            if (d == null || !ProofLines.contains(d, -pivot)) {
                 continue;
             }
             List<Integer> resolvent = new ArrayList<>();
@@ -179,15 +179,6 @@ public final class DratChecker {
             appendHints(hints, conflict);
             undo(mark);
         }
-    }
-
-    private static boolean contains(int[] clause, int lit) {
-        for (int l : clause) {
-            if (l == lit) {
-                return true;
-            }
-        }
-        return false;
     }
 
     static String clauseText(int[] lits) {

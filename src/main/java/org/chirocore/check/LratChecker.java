@@ -97,7 +97,7 @@ public final class LratChecker {
         int mark = assigned.size();
         for (Map.Entry<Long, int[]> entry : clauses.entrySet()) {
             int[] d = entry.getValue();
-            if (!contains(d, -pivot) || satisfiedApartFrom(d, -pivot)) {
+            if (!ProofLines.contains(d, -pivot) || satisfiedApartFrom(d, -pivot)) {
                 continue;
             }
             for (int lit : d) {
@@ -158,15 +158,6 @@ public final class LratChecker {
     private boolean satisfiedApartFrom(int[] clause, int except) {
         for (int lit : clause) {
             if (lit != except && value(lit) > 0) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    private static boolean contains(int[] clause, int lit) {
-        for (int l : clause) {
-            if (l == lit) {
                 return true;
             }
         }

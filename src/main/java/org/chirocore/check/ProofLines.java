@@ -96,4 +96,14 @@ final class ProofLines {
         }
         return out.stream().mapToInt(Integer::intValue).toArray();
     }
+
+    /** Whether {@code clause} contains {@code lit}. */
+    static boolean contains(int[] clause, int lit) {
+        for (int l : clause) {
+            if (l == lit) {
+                return true;
+            }
+        }
+        return false;
+    }
 }
