@@ -85,6 +85,14 @@ class CertificateVerifierTest {
         assertEquals("000", get(corner, "content", "core", "labels", "0").asString("label"));
     }
 
+    @Test
+    void cornerConstructionInDimensionFourWithANonEmptyPathPassesEveryCheck() {
+        // the search's core of the pulled 4-cube, reached by contracting and deleting along a path
+        Report r = verify(TestCertificates.construction(org.chirocore.matroid.CubeConstruction.corner(4), TestCertificates.DEFAULT_SOLVER));
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == Status.PASS), r::toString);
+        assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().contains("|D| = 6"), r::toString);
+    }
+
     // ---- tampering: each is rejected with a message naming the item ----
 
     static String drat(Json.Obj cert) {

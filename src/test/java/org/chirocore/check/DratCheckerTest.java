@@ -64,6 +64,22 @@ class DratCheckerTest {
     }
 
     @Test
+    void aLongProofWithDeletionsIsAcceptedAndCheckedNoSlowerThanFound() {
+        Cnf cnf = pigeonhole(8);
+        long start = System.nanoTime();
+        String drat = TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault);
+        long found = System.nanoTime() - start;
+        start = System.nanoTime();
+        DratChecker.Outcome outcome = DratChecker.check(cnf, drat);
+        long checked = System.nanoTime() - start;
+        assertTrue(outcome.valid(), outcome::failure);
+        assertFalse(outcome.summary().contains(" 0 deletions applied"), outcome.summary());
+        // generous factor: the point is no per-lemma rescans, not a benchmark
+        assertTrue(checked < 3 * found + 1_000_000_000L, "checking " + checked / 1_000_000 + " ms, finding " + found / 1_000_000 + " ms");
+        assertEquals(Optional.empty(), LratChecker.check(cnf, DratChecker.toLrat(cnf, drat)));
+    }
+
+    @Test
     void aCorruptedLratHintIsRejected() {
         Cnf cnf = pigeonhole(4);
         String lrat = DratChecker.toLrat(cnf, TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault));

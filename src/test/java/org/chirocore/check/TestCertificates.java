@@ -13,13 +13,11 @@ import java.util.function.Supplier;
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.io.Json;
 import org.chirocore.io.MatroidFiles;
-import org.chirocore.matroid.AffineCube;
+import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
-import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
-import org.chirocore.matroid.PulledMatroid;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.Chirotope;
@@ -74,13 +72,15 @@ final class TestCertificates {
      * H = {100, 010, 001}, 111 contracted; its core is the Fano plane on 000, …, 110.
      */
     static Json.Obj corner(Supplier<ISolver> solver) {
-        AffineCube cube = AffineCube.real(3);
-        int o = cube.indexOf("111");
-        Matroid m = new Minor(PulledMatroid.pull(cube, HyperplaneSpec.parse("100,010,001").resolve(cube), o), new int[] {o}, new int[0]);
-        MinimalCore found = core(m);
-        Json.Obj construction = Json.Obj.builder().put("cube", 3).put("field", "Q")
-                .put("hyperplane", Json.Arr.ofStrings(List.of("100", "010", "001"))).put("pulled", "111")
-                .put("contractPulled", true).build();
+        return construction(CubeConstruction.corner(3), solver);
+    }
+
+    /** The certificate of the core that the search finds in {@code c}'s matroid. */
+    static Json.Obj construction(CubeConstruction c, Supplier<ISolver> solver) {
+        MinimalCore found = core(c.build());
+        Json.Obj construction = Json.Obj.builder().put("cube", c.n()).put("field", "Q")
+                .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices())).put("pulled", c.pulledVertex())
+                .put("contractPulled", c.contractPulled()).build();
         return certificate(found, Json.Obj.builder().put("construction", construction).put("path", path(found)).build(), solver);
     }
 
