@@ -55,8 +55,8 @@ public final class DratChecker {
 
     private DratChecker(Cnf cnf, boolean writeLrat) {
         variables = cnf.variables();
+        // allocated on first use: most literals of a large formula are never watched
         watches = new IntList[2 * variables + 2];
-        Arrays.setAll(watches, i -> new IntList());
         value = new byte[variables + 1];
         reason = new int[variables + 1];
         trail = new int[variables + 1];
@@ -181,7 +181,7 @@ public final class DratChecker {
         }
     }
 
-    static String clauseText(int[] lits) {
+    private static String clauseText(int[] lits) {
         StringBuilder s = new StringBuilder();
         for (int lit : lits) {
             s.append(lit).append(' ');
@@ -238,8 +238,8 @@ public final class DratChecker {
             }
         }
         if (c.length >= 2) {
-            watches[code(c[0])].add(id);
-            watches[code(c[1])].add(id);
+            watch(c[0], id);
+            watch(c[1], id);
         }
         if (value(c[0]) < 0) {
             topConflict = id;
@@ -272,6 +272,9 @@ public final class DratChecker {
         while (propagated < trailSize) {
             int falseLit = -trail[propagated++];
             IntList ws = watches[code(falseLit)];
+            if (ws == null) {
+                continue;
+            }
             int kept = 0;
             for (int i = 0; i < ws.size; i++) {
                 int id = ws.data[i];
@@ -287,7 +290,7 @@ public final class DratChecker {
                 if (replacement >= 0) {
                     c[1] = c[replacement];
                     c[replacement] = falseLit;
-                    watches[code(c[1])].add(id);
+                    watch(c[1], id);
                     continue;
                 }
                 ws.data[kept++] = id;
@@ -363,6 +366,13 @@ public final class DratChecker {
             reason[v] = 0;
         }
         propagated = Math.min(propagated, mark);
+    }
+
+    private void watch(int lit, int id) {
+        if (watches[code(lit)] == null) {
+            watches[code(lit)] = new IntList();
+        }
+        watches[code(lit)].add(id);
     }
 
     private static int code(int lit) {
