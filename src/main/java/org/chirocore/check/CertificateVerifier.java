@@ -88,6 +88,10 @@ public final class CertificateVerifier {
         } catch (JsonValueException e) {
             checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
             return new Report(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
+        } catch (RuntimeException e) {
+            // a bug of the verifier must still give a FAIL line, never an accepted certificate
+            checks.add(new Check(FORMAT, Status.FAIL, "internal error of the verifier: " + e));
+            return new Report(source, notRun(checks, "the file could not be read"), elapsed(start));
         }
         checks.add(new Check(FORMAT, Status.PASS, "chirocore-certificate version 1, rank " + certificate.rank() + " on "
                 + certificate.labels().size() + " elements, " + certificate.bases().size() + " bases"));

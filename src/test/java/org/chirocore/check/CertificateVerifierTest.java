@@ -29,14 +29,6 @@ class CertificateVerifierTest {
     @TempDir
     static Path dir;
 
-    static {
-        try {
-            dir = java.nio.file.Files.createTempDirectory("tmpcheck");
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException(e);
-        }
-    }
-
     static Json.Obj fano;
     static Json.Obj corner;
 
