@@ -12,12 +12,12 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "chirocore", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Orientability of matroids and minor-minimal non-orientable minors of pulled affine cubes.",
-        subcommands = {OrientCommand.class, ReduceCommand.class, ExportCommand.class, CubeCommand.class,
-                BenchCommand.class,
+        subcommands = {OrientCommand.class, ReduceCommand.class, VerifyCommand.class, ExportCommand.class,
+                CubeCommand.class, BenchCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
-                "1:internal error (a bug; stack trace printed)",
+                "1:internal error (a bug; stack trace printed); for verify: a check failed",
                 "2:bad usage or bad input (message on stderr)",
                 "3:unknown: the budget ran out before an answer"})
 public final class Chirocore implements Runnable {
@@ -53,6 +53,6 @@ public final class Chirocore implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "Missing command: use one of orient, reduce, export, cube, bench.");
+                "Missing command: use one of orient, reduce, verify, export, cube, bench.");
     }
 }

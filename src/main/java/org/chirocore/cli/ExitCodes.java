@@ -12,6 +12,8 @@ final class ExitCodes {
     static final int OK = 0;
     /** A bug: an unexpected exception, printed with its stack trace by picocli. */
     static final int INTERNAL_ERROR = 1;
+    /** {@code verify}: some check of some certificate failed (shares its value with INTERNAL_ERROR, as the spec of verify asks). */
+    static final int CHECK_FAILED = 1;
     /** Bad usage or bad input: unknown option, missing argument, unreadable or invalid file, invalid construction. */
     static final int BAD_INPUT = 2;
     /** No answer: a budget ran out. */

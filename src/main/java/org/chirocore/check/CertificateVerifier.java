@@ -1,0 +1,366 @@
+package org.chirocore.check;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Optional;
+import java.util.zip.GZIPInputStream;
+
+import org.chirocore.check.Certificate.Relation;
+import org.chirocore.check.Certificate.Witness;
+import org.chirocore.check.Relations.Term;
+import org.chirocore.check.Report.Check;
+import org.chirocore.check.Report.Status;
+import org.chirocore.io.Json;
+import org.chirocore.io.JsonFormatException;
+import org.chirocore.io.JsonValueException;
+
+/**
+ * Verifies a certificate of a minor-minimal non-orientable matroid (docs/certificate-format.md),
+ * running the spec's eight checks in order and regenerating everything it relies on: the CNF from
+ * the listed relations, the minors' bases, the rebuilt construction. It never throws on bad input:
+ * every problem becomes a FAIL line naming the first offending item, and checks that depend on a
+ * failed one are reported as NOT_RUN.
+ *
+ * <p>Cost, for b bases of rank r on n elements: basis exchange O(b² r² log b); the DRAT check the
+ * unit propagation of the proof; the witnesses O(n · b r² n² log b); the provenance one exact rank
+ * per r-subset of the core's ground set.
+ */
+public final class CertificateVerifier {
+    public static final String FORMAT = "format";
+    public static final String HASH = "sha256";
+    public static final String CORE = "basis exchange";
+    public static final String NORMALISATION = "normalisation";
+    public static final String RELATIONS = "relations";
+    public static final String DRAT = "drat proof";
+    public static final String MINIMALITY = "minimality witnesses";
+    public static final String PROVENANCE = "provenance";
+    /** The check names, in the spec's order. */
+    public static final List<String> CHECKS = List.of(FORMAT, HASH, CORE, NORMALISATION, RELATIONS, DRAT, MINIMALITY, PROVENANCE);
+    /** Largest certificate or (uncompressed) DRAT file read, in bytes. */
+    static final int MAX_BYTES = 1 << 30;
+
+    private CertificateVerifier() {
+    }
+
+    /** Verifies the certificate in {@code file}; a given-matroid provenance is reported as not run. */
+    public static Report verify(Path file) {
+        return verify(file, Optional.empty());
+    }
+
+    /** Verifies the certificate in {@code file}, reading a given matroid's file from {@code input} if present. */
+    public static Report verify(Path file, Optional<Path> input) {
+        Path dir = file.toAbsolutePath().getParent();
+        try {
+            return verify(readCapped(Files.newInputStream(file), file.getFileName().toString()), dir, input, file.toString());
+        } catch (IOException e) {
+            return new Report(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
+                    "the file could not be read"), 0);
+        }
+    }
+
+    /**
+     * Verifies a certificate given as bytes.
+     *
+     * @param baseDir the directory in which a {@code dratFile} is looked up
+     * @param input the matroid file of a given-matroid provenance, if any
+     */
+    public static Report verify(byte[] bytes, Path baseDir, Optional<Path> input) {
+        return verify(bytes, baseDir, input, "(" + bytes.length + " bytes)");
+    }
+
+    private static Report verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
+        long start = System.nanoTime();
+        List<Check> checks = new ArrayList<>();
+        Certificate certificate;
+        try {
+            certificate = Certificate.read(Json.parseUtf8(bytes));
+        } catch (JsonFormatException e) {
+            checks.add(new Check(FORMAT, Status.FAIL, "not valid JSON: " + e.getMessage()));
+            return new Report(source, notRun(checks, "the file is not JSON"), elapsed(start));
+        } catch (JsonValueException e) {
+            checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
+            return new Report(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
+        } catch (RuntimeException e) {
+            // a bug of the verifier must still give a FAIL line, never an accepted certificate
+            checks.add(new Check(FORMAT, Status.FAIL, "internal error of the verifier: " + e));
+            return new Report(source, notRun(checks, "the file could not be read"), elapsed(start));
+        }
+        checks.add(new Check(FORMAT, Status.PASS, "chirocore-certificate version 1, rank " + certificate.rank() + " on "
+                + certificate.labels().size() + " elements, " + certificate.bases().size() + " bases"));
+        Verification v = new Verification(certificate, baseDir, input);
+        checks.add(run(HASH, v::hash));
+        Check core = run(CORE, v::core);
+        checks.add(core);
+        if (core.status() != Status.PASS) {
+            return new Report(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
+        }
+        checks.add(run(NORMALISATION, v::normalisation));
+        Check relations = run(RELATIONS, v::relations);
+        checks.add(relations);
+        checks.add(relations.status() == Status.PASS ? run(DRAT, v::drat)
+                : new Check(DRAT, Status.NOT_RUN, "not checked because a relation is invalid"));
+        checks.add(run(MINIMALITY, v::minimality));
+        checks.add(run(PROVENANCE, v::provenance));
+        return new Report(source, checks, elapsed(start));
+    }
+
+    private static long elapsed(long start) {
+        return (System.nanoTime() - start) / 1_000_000;
+    }
+
+    /** {@code done} followed by the remaining checks as NOT_RUN. */
+    private static List<Check> notRun(List<Check> done, String because) {
+        List<Check> out = new ArrayList<>(done);
+        for (String name : CHECKS.subList(done.size(), CHECKS.size())) {
+            out.add(new Check(name, Status.NOT_RUN, "not checked because " + because));
+        }
+        return out;
+    }
+
+    /** A failed check; the message names the first offending item. */
+    private static final class Failure extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        Failure(String message) {
+            super(message);
+        }
+    }
+
+    /** A check that cannot run without more input. */
+    private static final class Skipped extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        Skipped(String message) {
+            super(message);
+        }
+    }
+
+    private interface Step {
+        /** Runs the check; returns what was checked. */
+        String run() throws Failure, Skipped, IOException, Provenance.Mismatch;
+    }
+
+    private static Check run(String name, Step step) {
+        try {
+            return new Check(name, Status.PASS, step.run());
+        } catch (Failure | Provenance.Mismatch | JsonValueException e) {
+            return new Check(name, Status.FAIL, e.getMessage());
+        } catch (Skipped e) {
+            return new Check(name, Status.NOT_RUN, e.getMessage());
+        } catch (JsonFormatException e) {
+            return new Check(name, Status.FAIL, "not valid JSON: " + e.getMessage());
+        } catch (IOException e) {
+            return new Check(name, Status.FAIL, "cannot read: " + e);
+        } catch (ArithmeticException e) {
+            return new Check(name, Status.FAIL, "exact 64-bit arithmetic overflowed (" + e.getMessage() + "); not checked");
+        } catch (RuntimeException e) {
+            // a bug of the verifier must still give a FAIL line, never an accepted certificate
+            return new Check(name, Status.FAIL, "internal error of the verifier: " + e);
+        }
+    }
+
+    /** The SHA-256 of {@code bytes} as 64 lower-case hex digits. */
+    static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("Every Java platform has SHA-256.", e);
+        }
+    }
+
+    private static byte[] readCapped(InputStream in, String name) throws IOException {
+        try (InputStream stream = in) {
+            byte[] bytes = stream.readNBytes(MAX_BYTES + 1);
+            if (bytes.length > MAX_BYTES) {
+                throw new IOException(name + " is larger than " + MAX_BYTES + " bytes");
+            }
+            return bytes;
+        }
+    }
+
+    /** The checks of one parsed certificate; each fills in what the later ones need. */
+    private static final class Verification {
+        private final Certificate c;
+        private final Path baseDir;
+        private final Optional<Path> input;
+        private final int n;
+        private BasisTable core;
+        private Cnf cnf;
+
+        Verification(Certificate c, Path baseDir, Optional<Path> input) {
+            this.c = c;
+            this.baseDir = baseDir;
+            this.input = input;
+            this.n = c.labels().size();
+        }
+
+        String hash() throws Failure {
+            String actual = sha256(c.content().toText().getBytes(StandardCharsets.UTF_8));
+            if (!actual.equals(c.sha256())) {
+                throw new Failure("the canonical content hashes to " + actual + ", not the recorded " + c.sha256());
+            }
+            return actual;
+        }
+
+        /** The bases are sorted sets of size r in canonical order and satisfy basis exchange ([Ox, §1.2]). */
+        String core() throws Failure {
+            long[] masks = new long[c.bases().size()];
+            for (int i = 0; i < masks.length; i++) {
+                masks[i] = set(c.bases().get(i), "basis " + (i + 1), c.rank());
+                if (i > 0 && !BasisTable.lexLess(masks[i - 1], masks[i])) {
+                    throw new Failure("basis " + (i + 1) + " " + BasisTable.set(masks[i]) + " does not come after basis " + i + " "
+                            + BasisTable.set(masks[i - 1]) + " in lexicographic order (or repeats it)");
+                }
+            }
+            core = new BasisTable(n, c.rank(), masks);
+            Optional<String> defect = core.exchangeDefect();
+            if (defect.isPresent()) {
+                throw new Failure("basis exchange fails: " + defect.get());
+            }
+            return masks.length + " distinct bases in canonical order; basis exchange holds";
+        }
+
+        /** A sorted set of distinct elements of the core, of the given size, as a mask. */
+        private long set(int[] elements, String what, int size) throws Failure {
+            long mask = 0;
+            for (int i = 0; i < elements.length; i++) {
+                if (elements[i] < 0 || elements[i] >= n || (i > 0 && elements[i] <= elements[i - 1])) {
+                    throw new Failure(what + " " + java.util.Arrays.toString(elements) + " is not a sorted set of elements 0.." + (n - 1));
+                }
+                mask |= 1L << elements[i];
+            }
+            if (elements.length != size) {
+                throw new Failure(what + " " + java.util.Arrays.toString(elements) + " has " + elements.length + " elements, not " + size);
+            }
+            return mask;
+        }
+
+        /**
+         * The normalised bases are bases and the vectors (1, 1_B) are GF(2)-independent
+         * (math-notes §2, normalisation): equivalently the differences 1_B ⊕ 1_B0 are independent.
+         */
+        String normalisation() throws Failure {
+            long[] pivotByTopBit = new long[64];
+            long first = 0;
+            for (int i = 0; i < c.normalised().size(); i++) {
+                long b = normalisedBasis(i);
+                first = i == 0 ? b : first;
+                // reduce 1_B ⊕ 1_B0 by the pivots, each stored at its highest bit
+                long v = b ^ first;
+                while (v != 0 && pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] != 0) {
+                    v ^= pivotByTopBit[63 - Long.numberOfLeadingZeros(v)];
+                }
+                if (v != 0) {
+                    pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] = v;
+                } else if (i > 0) {
+                    throw new Failure("normalised[" + i + "] " + BasisTable.set(b)
+                            + " makes the vectors (1, 1_B) linearly dependent over GF(2)");
+                }
+            }
+            return c.normalised().size() + " bases fixed to +1, GF(2)-independent";
+        }
+
+        private long normalisedBasis(int i) throws Failure {
+            long b = set(c.normalised().get(i), "normalised[" + i + "]", c.rank());
+            if (core.positionOf(b) < 0) {
+                throw new Failure("normalised[" + i + "] " + BasisTable.set(b) + " is not a basis of the core");
+            }
+            return b;
+        }
+
+        /** Every relation is well formed with 0, 2 or 3 non-zero terms; builds the spec's CNF. */
+        String relations() throws Failure {
+            List<int[]> clauses = new ArrayList<>();
+            for (int i = 0; i < c.normalised().size(); i++) {
+                clauses.add(new int[] {core.positionOf(normalisedBasis(i)) + 1});
+            }
+            for (int i = 0; i < c.relations().size(); i++) {
+                Relation r = c.relations().get(i);
+                String what = "relation " + i + " " + r;
+                long x = set(r.x(), what + ": X", c.rank() - 2);
+                long abcd = set(new int[] {r.a(), r.b(), r.c(), r.d()}, what + ": a, b, c, d", 4);
+                if ((x & abcd) != 0) {
+                    throw new Failure(what + ": a, b, c, d must lie outside X");
+                }
+                List<Term> terms = Relations.nonZero(Relations.terms(core, x, r.a(), r.b(), r.c(), r.d()));
+                if (terms.size() == 1) {
+                    throw new Failure(what + " has exactly one non-zero term, which basis exchange rules out");
+                }
+                clauses.addAll(Relations.clauses(terms));
+            }
+            cnf = new Cnf(core.count(), clauses);
+            return c.relations().size() + " relations; CNF of " + core.count() + " variables and " + clauses.size() + " clauses";
+        }
+
+        /** The DRAT proof refutes the regenerated CNF. */
+        String drat() throws Failure, IOException {
+            String proof = c.drat().isPresent() ? c.drat().get() : dratFile();
+            DratChecker.Outcome outcome = DratChecker.check(cnf, proof);
+            if (!outcome.valid()) {
+                throw new Failure(outcome.failure());
+            }
+            return "the empty clause is derived (" + outcome.summary() + ")";
+        }
+
+        private String dratFile() throws Failure, IOException {
+            String name = c.dratFile();
+            if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals("..") || name.equals(".")) {
+                throw new Failure("dratFile \"" + name + "\" must be a plain file name beside the certificate");
+            }
+            Path file = baseDir.resolve(name);
+            InputStream in = Files.newInputStream(file);
+            byte[] bytes = readCapped(name.endsWith(".gz") ? new GZIPInputStream(in) : in, name);
+            if (!sha256(bytes).equals(c.dratSha256())) {
+                throw new Failure("the uncompressed " + name + " hashes to " + sha256(bytes) + ", not the recorded " + c.dratSha256());
+            }
+            return new String(bytes, StandardCharsets.UTF_8);
+        }
+
+        /** Each witness has one sign per basis of its minor and satisfies all its 3-term relations ([BLSWZ, Thm. 3.6.2]). */
+        String minimality() throws Failure {
+            for (int e = 0; e < n; e++) {
+                Witness w = c.witnesses().get(e);
+                if (!w.element().equals(c.labels().get(e))) {
+                    throw new Failure("minimality[" + e + "] is for element \"" + w.element() + "\", expected \"" + c.labels().get(e) + "\"");
+                }
+                witness(core.deletion(e), w.deletion(), "the deletion witness of " + w.element());
+                witness(core.contraction(e), w.contraction(), "the contraction witness of " + w.element());
+            }
+            return 2 * n + " witnesses orient every single-element deletion and contraction";
+        }
+
+        private static void witness(BasisTable minor, String signs, String what) throws Failure {
+            if (signs.length() != minor.count()) {
+                throw new Failure(what + " has " + signs.length() + " signs; the minor has " + minor.count() + " bases");
+            }
+            int[] values = new int[signs.length()];
+            for (int i = 0; i < values.length; i++) {
+                char s = signs.charAt(i);
+                if (s != '+' && s != '-') {
+                    throw new Failure(what + " has '" + s + "' at position " + i + "; only '+' and '-' are signs");
+                }
+                values[i] = s == '+' ? 1 : -1;
+            }
+            Optional<String> bad = Relations.violated(minor, values);
+            if (bad.isPresent()) {
+                throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
+            }
+        }
+
+        String provenance() throws Provenance.Mismatch, Skipped, IOException {
+            Optional<String> rebuilt = Provenance.rebuild(c.provenance(), c.labels(), core, input);
+            if (rebuilt.isEmpty()) {
+                throw new Skipped("a given matroid can only be rebuilt from its file; run verify with --input FILE");
+            }
+            return rebuilt.get();
+        }
+    }
+}

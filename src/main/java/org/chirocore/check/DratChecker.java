@@ -1,0 +1,394 @@
+package org.chirocore.check;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.chirocore.check.ProofLines.Line;
+import org.chirocore.check.ProofLines.ProofError;
+
+/**
+ * Forward DRAT checking (Wetzler, Heule, Hunt, "DRAT-trim", SAT 2014): each added lemma must be
+ * RUP (assigning its negation and unit-propagating reaches a conflict) or, failing that, RAT on its
+ * first literal p (every resolvent with a clause containing −p is RUP); the proof must add the
+ * empty clause. Unit propagation uses two watched literals per clause and a trail that is undone
+ * after each check, so a lemma costs the propagation it triggers, not a rescan of the formula; a
+ * RAT check also scans the clause list once.
+ *
+ * <p>Deletions ("d …") are applied, except the deletion of a clause that is currently the reason of
+ * a top-level assignment, which is ignored (as drat-trim does), and of a clause not present, which
+ * is ignored too; ignoring a deletion only keeps more clauses and is therefore sound. Lines after the
+ * empty clause are not read. Lemmas may only use the CNF's variables; tautologies are rejected.
+ *
+ * <p>The same run can record, per lemma, the clause ids unit propagation used, which is an LRAT
+ * proof ({@link #toLrat}).
+ */
+public final class DratChecker {
+    /** The outcome: {@code failure} is empty when the proof is valid; {@code summary} counts what was done. */
+    public record Outcome(boolean valid, String failure, String summary) {
+    }
+
+    private final int variables;
+    /** Clause by id (1-based; index 0 unused); null once deleted. Watched literals sit at positions 0 and 1. */
+    private final List<int[]> clauses = new ArrayList<>();
+    private final Map<List<Integer>, ArrayDeque<Integer>> idsByContent = new HashMap<>();
+    private final IntList[] watches;
+    /** Per variable: +1 true, −1 false, 0 unassigned. */
+    private final byte[] value;
+    /** Per variable: the id of the clause that implied it, 0 for an assumption. */
+    private final int[] reason;
+    private final int[] trail;
+    private int trailSize;
+    private int propagated;
+    /** A clause falsified at top level, once the formula is refuted by unit propagation alone; else 0. */
+    private int topConflict;
+    private final int[] markStamp;
+    private int stamp;
+    private final StringBuilder lrat;
+    private int lemmas;
+    private int deleted;
+    private int ignored;
+
+    private DratChecker(Cnf cnf, boolean writeLrat) {
+        variables = cnf.variables();
+        // allocated on first use: most literals of a large formula are never watched
+        watches = new IntList[2 * variables + 2];
+        value = new byte[variables + 1];
+        reason = new int[variables + 1];
+        trail = new int[variables + 1];
+        markStamp = new int[variables + 1];
+        lrat = writeLrat ? new StringBuilder() : null;
+        clauses.add(null);
+        for (int[] clause : cnf.clauses()) {
+            add(clause);
+        }
+    }
+
+    /**
+     * Checks {@code drat} against {@code cnf}. Cost: the unit propagation of all lemmas, plus one
+     * scan of the clauses per RAT lemma. Never throws on bad proof text; the failure names the line.
+     */
+    public static Outcome check(Cnf cnf, String drat) {
+        DratChecker checker = new DratChecker(cnf, false);
+        try {
+            checker.run(drat);
+            return new Outcome(true, "", checker.summary());
+        } catch (ProofError e) {
+            return new Outcome(false, e.getMessage(), checker.summary());
+        }
+    }
+
+    /**
+     * The LRAT proof (Cruz-Filipe et al., CADE 2017) of a valid DRAT proof: lines {@code id lits 0 hints 0}
+     * (a RAT lemma lists, per clause D containing −p, {@code −id(D)} and the hints for its resolvent)
+     * and {@code id d ids 0}; CNF clause i has id i.
+     *
+     * @throws IllegalArgumentException with the DRAT failure when the proof is not valid
+     */
+    public static String toLrat(Cnf cnf, String drat) {
+        DratChecker checker = new DratChecker(cnf, true);
+        try {
+            checker.run(drat);
+        } catch (ProofError e) {
+            throw new IllegalArgumentException("The DRAT proof is not valid: " + e.getMessage(), e);
+        }
+        return checker.lrat.toString();
+    }
+
+    private String summary() {
+        return lemmas + " lemmas, " + deleted + " deletions applied, " + ignored + " ignored";
+    }
+
+    private void run(String drat) throws ProofError {
+        List<Line> lines = ProofLines.parse(drat, 0);
+        for (Line line : lines) {
+            int[] lits = ProofLines.literals(line, 0, variables);
+            if (lits.length != line.numbers().length - 1) {
+                throw new ProofError(line.number(), "text after the closing 0");
+            }
+            if (line.deletion()) {
+                delete(lits);
+            } else {
+                lemma(line, ProofLines.distinct(line, lits));
+                if (lits.length == 0) {
+                    return;
+                }
+            }
+        }
+        throw new ProofError(lines.isEmpty() ? 1 : lines.get(lines.size() - 1).number(), "the proof ends without deriving the empty clause");
+    }
+
+    private void lemma(Line line, int[] lits) throws ProofError {
+        StringBuilder hints = new StringBuilder();
+        int mark = trailSize;
+        int conflict = assumeNegation(lits);
+        if (conflict != 0) {
+            appendHints(hints, conflict);
+            undo(mark);
+        } else {
+            undo(mark);
+            if (lits.length == 0) {
+                throw new ProofError(line.number(), "the empty clause is not RUP: unit propagation finds no conflict");
+            }
+            checkRat(line, lits, hints);
+        }
+        lemmas++;
+        int id = add(lits);
+        if (lrat != null) {
+            lrat.append(id).append(' ');
+            for (int lit : lits) {
+                lrat.append(lit).append(' ');
+            }
+            lrat.append("0").append(hints).append(" 0\n");
+        }
+    }
+
+    private void checkRat(Line line, int[] lits, StringBuilder hints) throws ProofError {
+        int pivot = lits[0];
+        for (int id = 1; id < clauses.size(); id++) {
+            int[] d = clauses.get(id);
+            if (d == null || !ProofLines.contains(d, -pivot)) {
+                continue;
+            }
+            List<Integer> resolvent = new ArrayList<>();
+            for (int lit : lits) {
+                resolvent.add(lit);
+            }
+            boolean tautology = false;
+            for (int lit : d) {
+                tautology |= resolvent.contains(-lit) && lit != -pivot;
+                if (lit != -pivot && !resolvent.contains(lit)) {
+                    resolvent.add(lit);
+                }
+            }
+            if (tautology) {
+                continue;
+            }
+            int mark = trailSize;
+            int conflict = assumeNegation(resolvent.stream().mapToInt(Integer::intValue).toArray());
+            if (conflict == 0) {
+                undo(mark);
+                throw new ProofError(line.number(), "lemma " + clauseText(lits) + " is neither RUP nor RAT on " + pivot
+                        + " (the resolvent with clause " + id + ", " + clauseText(d) + ", is not RUP)");
+            }
+            hints.append(" -").append(id);
+            appendHints(hints, conflict);
+            undo(mark);
+        }
+    }
+
+    private static String clauseText(int[] lits) {
+        StringBuilder s = new StringBuilder();
+        for (int lit : lits) {
+            s.append(lit).append(' ');
+        }
+        return s.append('0').toString();
+    }
+
+    private void delete(int[] lits) {
+        ArrayDeque<Integer> ids = idsByContent.get(key(lits));
+        if (ids == null || ids.isEmpty()) {
+            ignored++;
+            return;
+        }
+        int id = ids.peekLast();
+        int[] c = clauses.get(id);
+        boolean isReason = c.length > 0 && value(c[0]) > 0 && reason[Math.abs(c[0])] == id;
+        if (isReason) {
+            ignored++;
+            return;
+        }
+        ids.removeLast();
+        clauses.set(id, null);
+        deleted++;
+        if (lrat != null) {
+            lrat.append(clauses.size() - 1).append(" d ").append(id).append(" 0\n");
+        }
+    }
+
+    private static List<Integer> key(int[] lits) {
+        List<Integer> k = new ArrayList<>();
+        for (int lit : lits) {
+            k.add(lit);
+        }
+        Collections.sort(k);
+        return k;
+    }
+
+    /** Adds a clause at top level, watches it and propagates; returns its id. */
+    private int add(int[] lits) {
+        int[] c = lits.clone();
+        int id = clauses.size();
+        clauses.add(c);
+        idsByContent.computeIfAbsent(key(c), k -> new ArrayDeque<>()).addLast(id);
+        if (topConflict != 0 || c.length == 0) {
+            return id;
+        }
+        // bring up to two literals that are not false to the front; they are the watches
+        int front = 0;
+        for (int k = 0; k < c.length && front < 2; k++) {
+            if (value(c[k]) >= 0) {
+                int t = c[front];
+                c[front++] = c[k];
+                c[k] = t;
+            }
+        }
+        if (c.length >= 2) {
+            watch(c[0], id);
+            watch(c[1], id);
+        }
+        if (value(c[0]) < 0) {
+            topConflict = id;
+        } else if (value(c[0]) == 0 && (c.length == 1 || value(c[1]) < 0)) {
+            assign(c[0], id);
+            topConflict = propagate();
+        }
+        return id;
+    }
+
+    /** Assigns the negation of {@code lits} and propagates; returns a falsified clause's id or 0. The caller undoes. */
+    private int assumeNegation(int[] lits) {
+        if (topConflict != 0) {
+            return topConflict;
+        }
+        for (int lit : lits) {
+            if (value(lit) > 0) {
+                // true at top level: its reason clause is falsified by the negation
+                return reason[Math.abs(lit)];
+            }
+            if (value(lit) == 0) {
+                assign(-lit, 0);
+            }
+        }
+        return propagate();
+    }
+
+    /** Unit propagation over the watches from the first unpropagated trail entry; returns a falsified clause's id or 0. */
+    private int propagate() {
+        while (propagated < trailSize) {
+            int falseLit = -trail[propagated++];
+            IntList ws = watches[code(falseLit)];
+            if (ws == null) {
+                continue;
+            }
+            int kept = 0;
+            for (int i = 0; i < ws.size; i++) {
+                int id = ws.data[i];
+                int[] c = clauses.get(id);
+                if (c == null) {
+                    continue; // deleted: dropped from this watch list
+                }
+                if (c[0] == falseLit) {
+                    c[0] = c[1];
+                    c[1] = falseLit;
+                }
+                int replacement = value(c[0]) > 0 ? -1 : nonFalseFrom2(c);
+                if (replacement >= 0) {
+                    c[1] = c[replacement];
+                    c[replacement] = falseLit;
+                    watch(c[1], id);
+                    continue;
+                }
+                ws.data[kept++] = id;
+                if (value(c[0]) < 0) {
+                    System.arraycopy(ws.data, i + 1, ws.data, kept, ws.size - i - 1);
+                    ws.size = kept + ws.size - i - 1;
+                    return id;
+                }
+                if (value(c[0]) == 0) {
+                    assign(c[0], id);
+                }
+            }
+            ws.size = kept;
+        }
+        return 0;
+    }
+
+    private int nonFalseFrom2(int[] c) {
+        for (int k = 2; k < c.length; k++) {
+            if (value(c[k]) >= 0) {
+                return k;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * Appends the ids of the clauses that unit propagation used to reach {@code conflict}, in trail
+     * order (each becomes unit after the previous ones), then {@code conflict} itself. Cost O(trail).
+     */
+    private void appendHints(StringBuilder out, int conflict) {
+        if (lrat == null) {
+            return;
+        }
+        stamp++;
+        markVariables(clauses.get(conflict));
+        List<Integer> used = new ArrayList<>();
+        for (int i = trailSize - 1; i >= 0; i--) {
+            int v = Math.abs(trail[i]);
+            if (markStamp[v] == stamp && reason[v] != 0 && reason[v] != conflict) {
+                used.add(reason[v]);
+                markVariables(clauses.get(reason[v]));
+            }
+        }
+        Collections.reverse(used);
+        used.add(conflict);
+        for (int id : used) {
+            out.append(' ').append(id);
+        }
+    }
+
+    private void markVariables(int[] clause) {
+        for (int lit : clause) {
+            markStamp[Math.abs(lit)] = stamp;
+        }
+    }
+
+    private int value(int lit) {
+        int v = value[Math.abs(lit)];
+        return lit > 0 ? v : -v;
+    }
+
+    private void assign(int lit, int why) {
+        value[Math.abs(lit)] = (byte) (lit > 0 ? 1 : -1);
+        reason[Math.abs(lit)] = why;
+        trail[trailSize++] = lit;
+    }
+
+    private void undo(int mark) {
+        while (trailSize > mark) {
+            int v = Math.abs(trail[--trailSize]);
+            value[v] = 0;
+            reason[v] = 0;
+        }
+        propagated = Math.min(propagated, mark);
+    }
+
+    private void watch(int lit, int id) {
+        if (watches[code(lit)] == null) {
+            watches[code(lit)] = new IntList();
+        }
+        watches[code(lit)].add(id);
+    }
+
+    private static int code(int lit) {
+        return 2 * Math.abs(lit) + (lit < 0 ? 1 : 0);
+    }
+
+    /** A growable int array for a watch list. */
+    private static final class IntList {
+        int[] data = new int[4];
+        int size;
+
+        void add(int x) {
+            if (size == data.length) {
+                data = Arrays.copyOf(data, 2 * size);
+            }
+            data[size++] = x;
+        }
+    }
+}

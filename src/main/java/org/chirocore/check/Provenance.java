@@ -1,0 +1,397 @@
+package org.chirocore.check;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import java.util.function.LongToIntFunction;
+
+import org.chirocore.io.Json;
+
+/**
+ * Check 8: rebuilding the core from its provenance with exact arithmetic of our own. A construction
+ * is the affine n-cube (vertex v as the column (1, v), math-notes §3) over Q or GF(p), pulled at O
+ * onto H, optionally contracted at O; a given matroid is read from {@code --input}. Then the core
+ * must be exactly M/C\D (rank_{M/C\D}(S) = rank_M(S ∪ C) − rank_M(C), [Ox, Prop. 3.1.6]). Cost: one
+ * rank evaluation per r-subset of the core's ground set, plus the general-position test.
+ */
+final class Provenance {
+    /** Largest number of candidate subsets enumerated when rebuilding a minor or testing general position. */
+    static final long MAX_CANDIDATES = 50_000_000;
+
+    /** A rejected provenance; the message says what does not match. */
+    static final class Mismatch extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        Mismatch(String message) {
+            super(message);
+        }
+    }
+
+    /** A matroid to take a minor of: its labels and its rank function on masks. */
+    private record Source(List<String> labels, LongToIntFunction rank, long contractedFirst) {
+    }
+
+    private Provenance() {
+    }
+
+    /**
+     * Rebuilds the core; returns a description of what was rebuilt, or empty when the provenance is
+     * a given matroid and no input file was supplied.
+     */
+    static Optional<String> rebuild(Json.Obj provenance, List<String> coreLabels, BasisTable core, Optional<Path> input)
+            throws Mismatch, IOException {
+        provenance.requireOnly(List.of("construction", "given", "path"));
+        if (provenance.has("construction") == provenance.has("given")) {
+            throw new Mismatch("provenance must have exactly one of \"construction\" and \"given\"");
+        }
+        Source source;
+        String what;
+        if (provenance.has("construction")) {
+            Json.Obj c = provenance.requireObject("construction");
+            source = cube(c);
+            what = "the pulled " + c.requireInt("cube") + "-cube over " + c.requireString("field");
+        } else if (input.isPresent()) {
+            source = given(provenance.requireObject("given"), input.get());
+            what = "the given matroid " + input.get().getFileName();
+        } else {
+            return Optional.empty();
+        }
+        Json.Obj path = provenance.requireObject("path");
+        path.requireOnly(List.of("contracted", "deleted"));
+        long contracted = labelMask(path.requireArray("contracted"), source.labels(), "path.contracted");
+        long deleted = labelMask(path.requireArray("deleted"), source.labels(), "path.deleted");
+        if ((contracted & deleted) != 0 || ((contracted | deleted) & source.contractedFirst()) != 0) {
+            throw new Mismatch("path.contracted and path.deleted must be disjoint and avoid the contracted pulled vertex");
+        }
+        compareMinor(source, contracted | source.contractedFirst(), deleted, coreLabels, core);
+        return Optional.of(what + ", /C\\D with |C| = " + Long.bitCount(contracted) + ", |D| = " + Long.bitCount(deleted)
+                + ", gives the core exactly");
+    }
+
+    /** The pulled cube of a construction, after checking that H is a flat of rank n and (H, O) are in general position. */
+    private static Source cube(Json.Obj c) throws Mismatch {
+        c.requireOnly(List.of("cube", "field", "hyperplane", "pulled", "contractPulled"));
+        int n = c.requireInt("cube");
+        if (n < 1 || n > 6) {
+            throw new Mismatch("construction.cube must be between 1 and 6 (at most 64 vertices), found " + n);
+        }
+        long p = field(c.requireString("field"));
+        List<String> labels = new ArrayList<>();
+        long[][] columns = new long[1 << n][n + 1];
+        for (int v = 0; v < 1 << n; v++) {
+            StringBuilder label = new StringBuilder();
+            columns[v][0] = 1;
+            for (int k = 0; k < n; k++) {
+                // coordinate 1 is the most significant binary digit of the element number
+                columns[v][k + 1] = (v >> (n - 1 - k)) & 1;
+                label.append(columns[v][k + 1]);
+            }
+            labels.add(label.toString());
+        }
+        LongToIntFunction rank = mask -> ExactRank.rank(columns, mask, p);
+        long h = labelMask(c.requireArray("hyperplane"), labels, "construction.hyperplane");
+        long o = labelMask(new Json.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
+        long all = (1L << (1 << n)) - 1;
+        if (rank.applyAsInt(h) != n) {
+            throw new Mismatch("the hyperplane has rank " + rank.applyAsInt(h) + ", not " + n);
+        }
+        for (long es = all & ~h; es != 0; es &= es - 1) {
+            if (rank.applyAsInt(h | Long.lowestOneBit(es)) == n) {
+                throw new Mismatch("the hyperplane is not a flat: its closure contains " + labels.get(Long.numberOfTrailingZeros(es)));
+            }
+        }
+        if ((h & o) != 0) {
+            throw new Mismatch("the pulled vertex lies on the hyperplane");
+        }
+        generalPosition(rank, labels, n, h, o, all);
+        long ho = h | o;
+        // math-notes §3: subsets of H ∪ {O} of full rank n + 1 drop to rank n, other ranks are kept
+        LongToIntFunction pulled = mask -> {
+            int r = rank.applyAsInt(mask);
+            return (mask & ~ho) == 0 && r == n + 1 ? n : r;
+        };
+        return new Source(labels, pulled, c.requireBoolean("contractPulled") ? o : 0);
+    }
+
+    /**
+     * (H, O) in general position (math-notes §3): for every hyperline L ⊆ H, the closure of L ∪ {O}
+     * is L ∪ {O}. Each L is the closure of n − 1 independent elements S of H; then no e outside
+     * L ∪ {O} may have rank(S ∪ {O, e}) = n.
+     */
+    private static void generalPosition(LongToIntFunction rank, List<String> labels, int n, long h, long o, long all)
+            throws Mismatch {
+        int[] hs = elements(h);
+        if (binomial(hs.length, n - 1) > MAX_CANDIDATES) {
+            throw new Mismatch("the hyperplane has too many hyperline candidates to test general position");
+        }
+        Set<Long> seen = new HashSet<>();
+        int[] pick = firstCombination(n - 1);
+        do {
+            long s = 0;
+            for (int i : pick) {
+                s |= 1L << hs[i];
+            }
+            if (rank.applyAsInt(s) != n - 1) {
+                continue;
+            }
+            long line = s;
+            for (long es = all & ~s; es != 0; es &= es - 1) {
+                line |= rank.applyAsInt(s | Long.lowestOneBit(es)) == n - 1 ? Long.lowestOneBit(es) : 0;
+            }
+            if (!seen.add(line)) {
+                continue;
+            }
+            for (long es = all & ~line & ~o; es != 0; es &= es - 1) {
+                if (rank.applyAsInt(s | o | Long.lowestOneBit(es)) == n) {
+                    throw new Mismatch("(H, O) are not in general position: the closure of the hyperline "
+                            + labelsOf(line, labels) + " with O contains " + labels.get(Long.numberOfTrailingZeros(es)));
+                }
+            }
+        } while (nextCombination(pick, hs.length));
+    }
+
+    /** The prime p of "GF(p)" (p ≤ 46 340), or 0 for "Q". */
+    private static long field(String field) throws Mismatch {
+        if (field.equals("Q")) {
+            return 0;
+        }
+        if (field.matches("GF\\([1-9][0-9]{0,4}\\)")) {
+            long p = Long.parseLong(field.substring(3, field.length() - 1));
+            if (p <= 46_340 && ExactRank.isPrime(p)) {
+                return p;
+            }
+        }
+        throw new Mismatch("the field must be \"Q\" or \"GF(p)\" with p a prime at most 46340, found \"" + field + "\"");
+    }
+
+    /** A given matroid read from a matroid file (docs/matroid-format.md), after checking its hash, size and rank. */
+    private static Source given(Json.Obj given, Path input) throws Mismatch, IOException {
+        given.requireOnly(List.of("sha256", "elements", "rank"));
+        byte[] bytes = Files.readAllBytes(input);
+        if (!CertificateVerifier.sha256(bytes).equals(given.requireString("sha256"))) {
+            throw new Mismatch("the SHA-256 of " + input.getFileName() + " is " + CertificateVerifier.sha256(bytes)
+                    + ", not the recorded " + given.requireString("sha256"));
+        }
+        Source m = GivenMatroid.read(Json.parseUtf8(bytes));
+        long all = m.labels().size() == 64 ? -1L : (1L << m.labels().size()) - 1;
+        if (m.labels().size() != given.requireInt("elements") || m.rank().applyAsInt(all) != given.requireInt("rank")) {
+            throw new Mismatch("the input has " + m.labels().size() + " elements and rank " + m.rank().applyAsInt(all)
+                    + ", not the recorded " + given.requireInt("elements") + " and " + given.requireInt("rank"));
+        }
+        return m;
+    }
+
+    /** Reading a matroid file into a rank function, with our own code. */
+    private static final class GivenMatroid {
+        static Source read(Json json) throws Mismatch {
+            Json.Obj m = json.asObject("the input matroid");
+            m.requireOnly(List.of("rank", "labels", "elements", "comment", "bases", "nonbases", "matrix"));
+            int n = m.has("labels") ? m.requireArray("labels").size() : m.requireInt("elements");
+            if (n < 0 || n > 64 || (m.has("labels") && m.has("elements") && m.requireInt("elements") != n)) {
+                throw new Mismatch("the input must have at most 64 elements, and labels and elements must agree");
+            }
+            List<String> labels = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                labels.add(m.has("labels") ? m.requireArray("labels").get(i).asString("labels[" + i + "]") : Integer.toString(i));
+            }
+            int r = m.requireInt("rank");
+            if (r < 0 || r > n) {
+                throw new Mismatch("the input's rank " + r + " is not between 0 and its " + n + " elements");
+            }
+            if (m.has("matrix")) {
+                return new Source(labels, matrixRank(m.requireObject("matrix"), n, r), 0);
+            }
+            List<Long> bases = new ArrayList<>();
+            if (m.has("bases")) {
+                for (int[] b : Certificate.sets(m.requireArray("bases"), "bases", Certificate.MAX_BASES)) {
+                    bases.add(mask(b, n, r));
+                }
+            } else {
+                Set<Long> non = new HashSet<>();
+                for (int[] b : Certificate.sets(m.requireArray("nonbases"), "nonbases", Certificate.MAX_BASES)) {
+                    non.add(mask(b, n, r));
+                }
+                if (binomial(n, r) > Certificate.MAX_BASES) {
+                    throw new Mismatch("the input has too many " + r + "-subsets to list its bases");
+                }
+                int[] pick = firstCombination(r);
+                do {
+                    long b = 0;
+                    for (int e : pick) {
+                        b |= 1L << e;
+                    }
+                    if (!non.contains(b)) {
+                        bases.add(b);
+                    }
+                } while (nextCombination(pick, n));
+            }
+            // the rank of S in a matroid is the largest |S ∩ B| over its bases B ([Ox, §1.3])
+            long[] masks = bases.stream().mapToLong(Long::longValue).toArray();
+            return new Source(labels, s -> {
+                int best = 0;
+                for (long b : masks) {
+                    best = Math.max(best, Long.bitCount(s & b));
+                }
+                return best;
+            }, 0);
+        }
+
+        private static LongToIntFunction matrixRank(Json.Obj matrix, int n, int r) throws Mismatch {
+            matrix.requireOnly(List.of("field", "columns"));
+            long p = field(matrix.requireString("field"));
+            Json.Arr cols = matrix.requireArray("columns");
+            if (cols.size() != n && n != 0) {
+                throw new Mismatch("the input matrix has " + cols.size() + " columns for " + n + " elements");
+            }
+            long[][] columns = new long[cols.size()][];
+            for (int j = 0; j < columns.length; j++) {
+                Json.Arr col = cols.get(j).asArray("columns[" + j + "]");
+                columns[j] = new long[col.size()];
+                for (int i = 0; i < col.size(); i++) {
+                    columns[j][i] = col.get(i).asLong("columns[" + j + "][" + i + "]");
+                }
+                if (columns[j].length != columns[0].length || columns[j].length > 64) {
+                    throw new Mismatch("the input matrix columns must have one length, at most 64");
+                }
+            }
+            long all = columns.length == 64 ? -1L : (1L << columns.length) - 1;
+            if (columns.length > 64 || ExactRank.rank(columns, all, p) != r) {
+                throw new Mismatch("the input matrix does not have the declared rank " + r);
+            }
+            return mask -> ExactRank.rank(columns, mask, p);
+        }
+
+        private static long mask(int[] set, int n, int r) throws Mismatch {
+            long m = 0;
+            for (int e : set) {
+                if (e < 0 || e >= n || (m & 1L << e) != 0) {
+                    throw new Mismatch("an input basis set mentions element " + e + " twice or out of range");
+                }
+                m |= 1L << e;
+            }
+            if (set.length != r) {
+                throw new Mismatch("an input basis set has " + set.length + " elements, not the rank " + r);
+            }
+            return m;
+        }
+    }
+
+    /**
+     * Compares M/C\D with the core: same labels in order, same rank, and the r-subsets S of the
+     * remaining elements with rank_M(S ∪ C) = rank_M(C) + r, enumerated in lexicographic order, are
+     * exactly the core's bases.
+     */
+    private static void compareMinor(Source m, long contracted, long deleted, List<String> coreLabels, BasisTable core)
+            throws Mismatch {
+        int size = m.labels().size();
+        long ground = (size == 64 ? -1L : (1L << size) - 1) & ~contracted & ~deleted;
+        int[] kept = elements(ground);
+        List<String> keptLabels = new ArrayList<>();
+        for (int e : kept) {
+            keptLabels.add(m.labels().get(e));
+        }
+        if (!keptLabels.equals(coreLabels)) {
+            throw new Mismatch("the rebuilt minor has the elements " + keptLabels + ", the core " + coreLabels);
+        }
+        int rc = m.rank().applyAsInt(contracted);
+        int r = m.rank().applyAsInt(ground | contracted) - rc;
+        if (r != core.rank) {
+            throw new Mismatch("the rebuilt minor has rank " + r + ", the core " + core.rank);
+        }
+        if (binomial(kept.length, r) > MAX_CANDIDATES) {
+            throw new Mismatch("the minor has more than " + MAX_CANDIDATES + " candidate bases to rebuild");
+        }
+        int next = 0;
+        int[] pick = firstCombination(r);
+        do {
+            long inCore = 0;
+            long inM = contracted;
+            for (int i : pick) {
+                inCore |= 1L << i;
+                inM |= 1L << kept[i];
+            }
+            boolean listed = next < core.count() && core.basis(next) == inCore;
+            boolean basis = m.rank().applyAsInt(inM) == rc + r;
+            if (listed != basis) {
+                throw new Mismatch(listed ? "the core lists " + BasisTable.set(inCore) + ", which is not a basis of the rebuilt minor"
+                        : "the rebuilt minor has the basis " + BasisTable.set(inCore) + ", which the core does not list");
+            }
+            next += listed ? 1 : 0;
+        } while (nextCombination(pick, kept.length));
+        if (next != core.count()) {
+            throw new Mismatch("the core lists " + BasisTable.set(core.basis(next)) + ", which is not a basis of the rebuilt minor");
+        }
+    }
+
+    /** The mask of the listed labels, which must be distinct labels of the matroid. */
+    private static long labelMask(Json.Arr array, List<String> labels, String what) throws Mismatch {
+        long mask = 0;
+        for (int i = 0; i < array.size(); i++) {
+            int e = labels.indexOf(array.get(i).asString(what + "[" + i + "]"));
+            if (e < 0 || (mask & 1L << e) != 0) {
+                throw new Mismatch(what + " lists \"" + array.get(i).asString(what) + "\", which is no label of the matroid or repeated");
+            }
+            mask |= 1L << e;
+        }
+        return mask;
+    }
+
+    private static String labelsOf(long mask, List<String> labels) {
+        List<String> out = new ArrayList<>();
+        for (int e : elements(mask)) {
+            out.add(labels.get(e));
+        }
+        return out.toString();
+    }
+
+    static int[] elements(long mask) {
+        int[] out = new int[Long.bitCount(mask)];
+        int i = 0;
+        for (long m = mask; m != 0; m &= m - 1) {
+            out[i++] = Long.numberOfTrailingZeros(m);
+        }
+        return out;
+    }
+
+    private static int[] firstCombination(int k) {
+        int[] c = new int[Math.max(k, 0)];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = i;
+        }
+        return c;
+    }
+
+    /** Advances {@code c} to the next k-subset of {0..n−1} in lexicographic order; false after the last. */
+    private static boolean nextCombination(int[] c, int n) {
+        int k = c.length;
+        int i = k - 1;
+        while (i >= 0 && c[i] == n - k + i) {
+            i--;
+        }
+        if (i < 0) {
+            return false;
+        }
+        c[i]++;
+        for (int j = i + 1; j < k; j++) {
+            c[j] = c[j - 1] + 1;
+        }
+        return true;
+    }
+
+    /** C(n, k), capped at Long.MAX_VALUE; 0 when k < 0 or k > n. */
+    static long binomial(int n, int k) {
+        if (k < 0 || k > n) {
+            return 0;
+        }
+        long b = 1;
+        for (int i = 1; i <= k; i++) {
+            b = b > Long.MAX_VALUE / (n - k + i) ? Long.MAX_VALUE : b * (n - k + i) / i;
+        }
+        return b;
+    }
+}

@@ -1,0 +1,71 @@
+package org.chirocore.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+
+import org.chirocore.check.CertificateVerifier;
+import org.chirocore.check.Report;
+import org.chirocore.io.Json;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code chirocore verify FILE...}: checks certificates with the independent verifier. */
+@Command(name = "verify", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Check certificates of minor-minimal non-orientable matroids (docs/certificate-format.md).",
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:every file passed every check (a given-matroid provenance without --input is not run)",
+                "1:some check failed",
+                "2:bad usage"})
+final class VerifyCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(paramLabel = "FILE", arity = "1..*", description = "Certificate files.")
+    private List<Path> files;
+
+    @Option(names = "--input", paramLabel = "FILE", description = "The matroid file of a given-matroid provenance.")
+    private Path input;
+
+    @Option(names = "--json", description = "Print a JSON array of reports instead of text.")
+    private boolean json;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        List<Json> reports = new ArrayList<>();
+        boolean allPassed = true;
+        for (Path file : files) {
+            Report report = CertificateVerifier.verify(file, Optional.ofNullable(input));
+            allPassed &= report.passed();
+            if (json) {
+                reports.add(toJson(report));
+            } else {
+                for (Report.Check c : report.checks()) {
+                    out.printf("%-8s %s: %s%n", c.status(), c.name(), c.detail());
+                }
+                out.println(file + ": " + (report.passed() ? "verified" : "REJECTED") + " (" + report.millis() + " ms)");
+            }
+        }
+        if (json) {
+            out.println(new Json.Arr(reports).toText());
+        }
+        return allPassed ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+    }
+
+    private static Json toJson(Report report) {
+        List<Json> checks = new ArrayList<>();
+        for (Report.Check c : report.checks()) {
+            checks.add(Json.Obj.builder().put("name", c.name()).put("status", c.status().name()).put("detail", c.detail()).build());
+        }
+        return Json.Obj.builder().put("file", report.source()).put("passed", report.passed()).put("millis", report.millis())
+                .put("checks", new Json.Arr(checks)).build();
+    }
+}

@@ -1,0 +1,47 @@
+package org.chirocore.check;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * The verifier shares no code with what it checks (code-style lesson 6): its sources import only
+ * java.*, the JSON model of org.chirocore.io, and each other. Fully qualified uses are caught too.
+ */
+class CheckIndependenceTest {
+    static final Path SOURCES = Path.of("src/main/java/org/chirocore/check");
+    static final List<String> ALLOWED = List.of("java.", "org.chirocore.check.", "org.chirocore.io.Json;",
+            "org.chirocore.io.JsonFormatException;", "org.chirocore.io.JsonValueException;");
+
+    @Test
+    void theCheckPackageImportsNothingItChecks() throws IOException {
+        List<String> forbidden = new ArrayList<>();
+        int files = 0;
+        try (Stream<Path> paths = Files.list(SOURCES)) {
+            for (Path file : paths.filter(p -> p.toString().endsWith(".java")).toList()) {
+                files++;
+                for (String line : Files.readAllLines(file)) {
+                    String s = line.strip();
+                    if (s.startsWith("import ") && ALLOWED.stream().noneMatch(a -> s.replace("import static ", "").replace("import ", "").startsWith(a))) {
+                        forbidden.add(file.getFileName() + ": " + s);
+                    }
+                    for (String banned : List.of("org.chirocore.orient", "org.chirocore.search", "org.chirocore.matroid", "org.sat4j", "org.jgrapht")) {
+                        if (s.contains(banned)) {
+                            forbidden.add(file.getFileName() + ": " + s);
+                        }
+                    }
+                }
+            }
+        }
+        assertTrue(files >= 5, "found only " + files + " sources in " + SOURCES.toAbsolutePath());
+        assertEquals(List.of(), forbidden);
+    }
+}

@@ -1,0 +1,135 @@
+package org.chirocore.check;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Supplier;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.sat4j.minisat.SolverFactory;
+import org.sat4j.specs.ISolver;
+
+/**
+ * The DRAT and LRAT checkers on hand-made proofs and on sat4j's DRUP proofs of the pigeonhole
+ * formula PHP(n+1, n), unsatisfiable for every n (Cook and Reckhow 1979; Haken 1985 for its hardness).
+ */
+class DratCheckerTest {
+    /** Pigeon i in hole j is variable i·holes + j + 1; every pigeon has a hole, no hole two pigeons. */
+    static Cnf pigeonhole(int holes) {
+        int pigeons = holes + 1;
+        List<int[]> clauses = new ArrayList<>();
+        for (int i = 0; i < pigeons; i++) {
+            int[] some = new int[holes];
+            for (int j = 0; j < holes; j++) {
+                some[j] = i * holes + j + 1;
+            }
+            clauses.add(some);
+        }
+        for (int j = 0; j < holes; j++) {
+            for (int i = 0; i < pigeons; i++) {
+                for (int k = i + 1; k < pigeons; k++) {
+                    clauses.add(new int[] {-(i * holes + j + 1), -(k * holes + j + 1)});
+                }
+            }
+        }
+        return new Cnf(pigeons * holes, clauses);
+    }
+
+    static Stream<Arguments> solvers() {
+        return Stream.of(Arguments.of("default", (Supplier<ISolver>) SolverFactory::newDefault),
+                Arguments.of("glucose21", (Supplier<ISolver>) SolverFactory::newGlucose21),
+                Arguments.of("miniLearningHeap", (Supplier<ISolver>) SolverFactory::newMiniLearningHeap));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("solvers")
+    void sat4jProofsOfPigeonholeAreAcceptedAndTheirLratToo(String name, Supplier<ISolver> solver) {
+        Cnf cnf = pigeonhole(6);
+        String drat = TestCertificates.proof(cnf.variables(), cnf.clauses(), solver);
+        long start = System.nanoTime();
+        DratChecker.Outcome outcome = DratChecker.check(cnf, drat);
+        long millis = (System.nanoTime() - start) / 1_000_000;
+        assertTrue(outcome.valid(), outcome::failure);
+        assertTrue(millis < 10_000, "checking took " + millis + " ms for " + outcome.summary());
+        String lrat = DratChecker.toLrat(cnf, drat);
+        assertEquals(Optional.empty(), LratChecker.check(cnf, lrat));
+    }
+
+    @Test
+    void aLongProofWithDeletionsIsAcceptedAndCheckedNoSlowerThanFound() {
+        Cnf cnf = pigeonhole(8);
+        long start = System.nanoTime();
+        String drat = TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault);
+        long found = System.nanoTime() - start;
+        start = System.nanoTime();
+        DratChecker.Outcome outcome = DratChecker.check(cnf, drat);
+        long checked = System.nanoTime() - start;
+        assertTrue(outcome.valid(), outcome::failure);
+        assertFalse(outcome.summary().contains(" 0 deletions applied"), outcome.summary());
+        // generous factor: the point is no per-lemma rescans, not a benchmark
+        assertTrue(checked < 3 * found + 1_000_000_000L, "checking " + checked / 1_000_000 + " ms, finding " + found / 1_000_000 + " ms");
+        assertEquals(Optional.empty(), LratChecker.check(cnf, DratChecker.toLrat(cnf, drat)));
+    }
+
+    @Test
+    void aCorruptedLratHintIsRejected() {
+        Cnf cnf = pigeonhole(4);
+        String lrat = DratChecker.toLrat(cnf, TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault));
+        // replace the last hint of the first lemma by a clause that is not unit there
+        String first = lrat.lines().filter(l -> !l.contains(" d ")).findFirst().orElseThrow();
+        String[] t = first.split(" ");
+        t[t.length - 2] = "1";
+        String corrupted = lrat.replaceFirst(java.util.regex.Pattern.quote(first), String.join(" ", t));
+        Optional<String> fault = LratChecker.check(cnf, corrupted);
+        assertTrue(fault.isPresent() && fault.get().startsWith("line "), fault::toString);
+    }
+
+    /** {(−1 2), (2 3), (2 −3)} and an unsatisfiable core on 4, 5; the lemma (1) is RAT on 1 but not RUP. */
+    static final Cnf RAT_EXAMPLE = new Cnf(5, List.of(new int[] {-1, 2}, new int[] {2, 3}, new int[] {2, -3},
+            new int[] {4, 5}, new int[] {-4, 5}, new int[] {4, -5}, new int[] {-4, -5}));
+
+    @Test
+    void aRatLemmaIsAcceptedAndWrittenAsLrat() {
+        String drat = "1 0\n4 0\n0\n";
+        assertTrue(DratChecker.check(RAT_EXAMPLE, drat).valid());
+        String lrat = DratChecker.toLrat(RAT_EXAMPLE, drat);
+        assertTrue(lrat.startsWith("8 1 0 -1 2 3 0\n"), lrat);
+        assertEquals(Optional.empty(), LratChecker.check(RAT_EXAMPLE, lrat));
+    }
+
+    @Test
+    void aLemmaThatIsNeitherRupNorRatIsRejectedWithItsLine() {
+        DratChecker.Outcome o = DratChecker.check(RAT_EXAMPLE, "-2 0\n4 0\n0\n");
+        assertFalse(o.valid());
+        assertEquals("line 1: lemma -2 0 is neither RUP nor RAT on -2 (the resolvent with clause 1, 2 -1 0, is not RUP)", o.failure());
+    }
+
+    @Test
+    void aProofWithoutTheEmptyClauseIsRejected() {
+        assertEquals("line 1: the proof ends without deriving the empty clause", DratChecker.check(RAT_EXAMPLE, "4 0\n").failure());
+    }
+
+    @Test
+    void deletionsAreAppliedSoAProofRelyingOnADeletedClauseFails() {
+        // deleting (4 5) leaves (4) unprovable by unit propagation
+        DratChecker.Outcome o = DratChecker.check(RAT_EXAMPLE, "d 4 5 0\n4 0\n0\n");
+        assertFalse(o.valid());
+        assertTrue(o.failure().startsWith("line 2: lemma 4 0"), o.failure());
+    }
+
+    @Test
+    void malformedProofTextIsRejectedNotThrown() {
+        assertEquals("line 1: \"x\" is not an integer of at most 10 digits", DratChecker.check(RAT_EXAMPLE, "4 x 0\n").failure());
+        assertEquals("line 1: literal 9 names no variable of the CNF (1..5)", DratChecker.check(RAT_EXAMPLE, "9 0\n").failure());
+        assertEquals("line 1: missing the closing 0", DratChecker.check(RAT_EXAMPLE, "4").failure());
+        assertEquals("line 1: the clause contains both -4 and 4", DratChecker.check(RAT_EXAMPLE, "4 -4 0").failure());
+    }
+}

@@ -1,0 +1,75 @@
+package org.chirocore.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.chirocore.check.TestCertificatesAccess;
+import org.chirocore.io.Json;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code chirocore verify}: exit 0 only when every check of every file passes, 1 when one fails, 2 on bad usage. */
+class VerifyCommandTest {
+    @TempDir
+    static Path dir;
+
+    static Path good;
+    static Path bad;
+
+    @BeforeAll
+    static void write() throws IOException {
+        // the n = 3 corner construction gives F7 (math-notes §3)
+        good = dir.resolve("good.json");
+        Files.writeString(good, TestCertificatesAccess.corner());
+        bad = dir.resolve("bad.json");
+        Files.writeString(bad, TestCertificatesAccess.cornerWithAFlippedWitnessSign());
+    }
+
+    @Test
+    void aGoodCertificatePassesEveryCheck() {
+        CliRun run = CliRun.of("verify", good.toString());
+        assertEquals(0, run.exit(), run.out() + run.err());
+        assertTrue(run.out().contains("PASS     basis exchange: "), run.out());
+        assertTrue(run.out().contains("PASS     drat proof: the empty clause is derived"), run.out());
+        assertTrue(run.out().contains("good.json: verified ("), run.out());
+        assertEquals(8, run.out().lines().filter(l -> l.startsWith("PASS")).count(), run.out());
+    }
+
+    @Test
+    void aBadCertificateExitsWithOne() {
+        CliRun run = CliRun.of("verify", good.toString(), bad.toString());
+        assertEquals(1, run.exit(), run.out() + run.err());
+        assertTrue(run.out().contains("FAIL     minimality witnesses: the deletion witness of 000: relation"), run.out());
+        assertTrue(run.out().contains("bad.json: REJECTED ("), run.out());
+    }
+
+    @Test
+    void jsonOutputIsAnArrayOfReports() {
+        CliRun run = CliRun.of("verify", "--json", good.toString(), bad.toString());
+        assertEquals(1, run.exit());
+        Json.Arr reports = Json.parse(run.out()).asArray("output");
+        assertEquals(2, reports.size());
+        assertTrue(reports.get(0).asObject("report").requireBoolean("passed"));
+        assertEquals("FAIL", reports.get(1).asObject("r").requireArray("checks").get(6).asObject("c").requireString("status"));
+    }
+
+    @Test
+    void helpAndBadUsage() {
+        assertEquals(0, CliRun.of("verify", "--help").exit());
+        assertEquals(2, CliRun.of("verify").exit());
+        assertEquals(2, CliRun.of("verify", "--frobnicate", good.toString()).exit());
+    }
+
+    @Test
+    void aMissingFileIsAFailedCheckNotAStackTrace() {
+        CliRun run = CliRun.of("verify", dir.resolve("absent.json").toString());
+        assertEquals(1, run.exit());
+        assertTrue(run.out().contains("FAIL     format: cannot read the file"), run.out());
+        assertEquals("", run.err());
+    }
+}
