@@ -7,8 +7,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.zip.GZIPInputStream;
 
+import org.chirocore.check.Cnf;
+import org.chirocore.check.DratChecker;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonValueException;
@@ -37,21 +40,25 @@ public final class CertificateExport {
      * @param drat the proof file
      * @param variables the number of variables (bases of the core)
      * @param clauses the number of clauses in the CNF
+     * @param lrat the LRAT file, when asked for
      */
-    public record Exported(Path cnf, Path drat, int variables, int clauses) {
+    public record Exported(Path cnf, Path drat, int variables, int clauses, Optional<Path> lrat) {
     }
 
     /**
      * Writes {@code outDir/<name>.cnf} and {@code outDir/<name>.drat} for {@code certificate},
-     * {@code <name>} being its file name without {@code .json}.
+     * {@code <name>} being its file name without {@code .json}; with {@code lrat}, also
+     * {@code outDir/<name>.lrat}, the proof with the unit-propagation hints the independent
+     * checker finds for each step (so that formally verified LRAT checkers can consume it).
      *
      * @throws IOException when a file cannot be read or written
      * @throws JsonValueException when the certificate is not of this format, its digest does not
      *     match its content, or its proof file does not match {@code dratSha256}
      * @throws org.chirocore.matroid.InvalidMatroidException when its bases are not a matroid's
-     * @throws IllegalArgumentException when a relation is malformed
+     * @throws IllegalArgumentException when a relation is malformed, or (with {@code lrat}) when
+     *     the proof does not check
      */
-    public static Exported export(Path certificate, Path outDir) throws IOException {
+    public static Exported export(Path certificate, Path outDir, boolean lrat) throws IOException {
         Json.Obj doc = Json.parse(Files.readString(certificate, StandardCharsets.UTF_8)).asObject("the certificate");
         if (!CertificateWriter.FORMAT.equals(doc.requireString("format"))
                 || doc.requireInt("version") != CertificateWriter.VERSION) {
@@ -98,9 +105,16 @@ public final class CertificateExport {
         String name = CertificateWriter.baseName(certificate);
         Path cnfFile = outDir.resolve(name + ".cnf");
         Path dratFile = outDir.resolve(name + ".drat");
+        byte[] dratBytes = drat(proof, certificate);
         AtomicFiles.writeString(cnfFile, dimacs.toString());
-        AtomicFiles.write(dratFile, drat(proof, certificate));
-        return new Exported(cnfFile, dratFile, index.basisCount(), cnf.size());
+        AtomicFiles.write(dratFile, dratBytes);
+        Optional<Path> lratFile = Optional.empty();
+        if (lrat) {
+            String hinted = DratChecker.toLrat(new Cnf(index.basisCount(), cnf), new String(dratBytes, StandardCharsets.UTF_8));
+            lratFile = Optional.of(outDir.resolve(name + ".lrat"));
+            AtomicFiles.writeString(lratFile.get(), hinted);
+        }
+        return new Exported(cnfFile, dratFile, index.basisCount(), cnf.size(), lratFile);
     }
 
     private static ExplicitMatroid core(Json.Obj core) {

@@ -31,6 +31,10 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--out-dir", paramLabel = "DIR", required = true, description = "An existing directory.")
     private Path outDir;
 
+    @Option(names = "--lrat", description = "Also write DIR/NAME.lrat: the proof with the unit-propagation hints "
+            + "the verifier finds for every step.")
+    private boolean lrat;
+
     @Override
     public Integer call() {
         if (!Files.isDirectory(outDir)) {
@@ -38,7 +42,7 @@ final class ExportCommand implements Callable<Integer> {
         }
         CertificateExport.Exported e;
         try {
-            e = CertificateExport.export(certificate, outDir);
+            e = CertificateExport.export(certificate, outDir, lrat);
         } catch (IOException ex) {
             throw new BadInputException(certificate + ": " + ex, ex);
         } catch (IllegalArgumentException ex) {
@@ -47,7 +51,7 @@ final class ExportCommand implements Callable<Integer> {
             throw new BadInputException(certificate + ": not a valid certificate: " + ex.getMessage(), ex);
         }
         spec.commandLine().getOut().println("wrote " + e.cnf() + " (" + e.variables() + " variables, "
-                + e.clauses() + " clauses) and " + e.drat());
+                + e.clauses() + " clauses) and " + e.drat() + e.lrat().map(l -> " and " + l).orElse(""));
         return ExitCodes.OK;
     }
 }

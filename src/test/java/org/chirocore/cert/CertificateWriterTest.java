@@ -145,7 +145,12 @@ class CertificateWriterTest {
         Path file = dir.resolve("corner4.json");
         CertificateWriter.write(c, file);
         Path out = Files.createDirectory(dir.resolve("out"));
-        CertificateExport.Exported e = CertificateExport.export(file, out);
+        CertificateExport.Exported e = CertificateExport.export(file, out, true);
+        // The LRAT proof passes the independent linear-time hint check against the same CNF.
+        List<int[]> clausesOfCnf = c.refutation().cnf(BasisIndex.of(c.core()));
+        assertEquals(java.util.Optional.empty(), org.chirocore.check.LratChecker.check(
+                new org.chirocore.check.Cnf(BasisIndex.of(c.core()).basisCount(), clausesOfCnf),
+                Files.readString(e.lrat().orElseThrow())));
         List<String> lines = Files.readAllLines(e.cnf());
         int clauses = lines.size() - 1;
         assertEquals("p cnf " + BasisIndex.of(c.core()).basisCount() + " " + clauses, lines.get(0));
@@ -177,7 +182,7 @@ class CertificateWriterTest {
                 proof.requireString("dratSha256"));
         // export decompresses it and checks its digest
         Path out = Files.createDirectory(dir.resolve("out"));
-        assertEquals(c.refutation().drat(), Files.readString(CertificateExport.export(file, out).drat()));
+        assertEquals(c.refutation().drat(), Files.readString(CertificateExport.export(file, out, false).drat()));
     }
 
     private static int[] ints(Json json) {
