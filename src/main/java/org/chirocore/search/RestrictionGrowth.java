@@ -16,7 +16,8 @@ import org.chirocore.orient.OrientationSession;
 
 /**
  * Grows a small non-orientable restriction M|S of a large matroid, so that only subsets of S are
- * ever enumerated. Starts from a basis and, while M|S is orientable, adds the outside element
+ * ever enumerated. Starts from the focus elements of the settings completed to a spanning set
+ * (from a basis when there is no focus) and, while M|S is orientable, adds the outside element
  * lying on the most hyperplanes of M|S (it adds the most dependencies, hence constraints); ties
  * go by a seeded order. Once M|S is non-orientable the solver's needed elements cut S down.
  * A restriction of the same rank is a minor, so a non-orientable M|S proves M non-orientable.
@@ -52,7 +53,19 @@ final class RestrictionGrowth {
             order.add(e);
         }
         Collections.shuffle(order, new Random(settings.seed()));
-        int[] s = independentPart(order.stream().mapToInt(Integer::intValue).toArray(), m.rank());
+        // Start from the focus elements still present (where the obstruction is expected), made
+        // spanning by a greedy completion in the seeded order.
+        int[] s = settings.focus().stream().mapToInt(m.labels()::indexOf).filter(e -> e >= 0).sorted().toArray();
+        for (int e : order) {
+            int rank = m.rank(s);
+            if (rank == m.rank()) {
+                break;
+            }
+            int[] t = ElementSets.with(s, e);
+            if (m.rank(t) > rank) {
+                s = t;
+            }
+        }
         int decisions = 0;
         while (s.length <= ExplicitMatroid.MAX_ELEMENTS
                 && ElementSets.binomial(s.length, m.rank()) <= BasisIndex.MAX_SUBSETS) {
