@@ -2,13 +2,16 @@ package org.chirocore.search;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Random;
+import java.util.Set;
 
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
+import org.chirocore.matroid.Simplification;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.LazySatDecider;
@@ -158,32 +161,44 @@ public final class UnsatCoreSearch implements CoreSearch {
     }
 
     /**
-     * {@code m} itself when it is enumerable and non-orientable within the budget, else a grown
-     * non-orientable restriction of it (deletions recorded in {@code run}), or null.
+     * A non-orientable restriction of {@code m} small enough to enumerate, or null: {@code m}
+     * itself or its simplification when that is enumerable and decided non-orientable within the
+     * budget, else a restriction grown inside the simplification. The deleted labels are recorded
+     * in {@code run} on success only.
      */
     private ExplicitMatroid nonOrientablePart(Matroid m, Run run) {
-        if (enumerable(m)) {
-            ExplicitMatroid explicit = ExplicitMatroid.of(m);
-            Orientability answer = new LazySatDecider(settings.budget()).decide(explicit);
-            run.decisions++;
-            return answer instanceof Orientability.NonOrientable ? explicit : null;
-        }
-        progress.report("growing a non-orientable restriction", m.size(), m.rank(), run.decisions);
-        RestrictionGrowth.Grown grown = new RestrictionGrowth(m, settings, progress).grow();
-        run.decisions += grown.decisions();
-        if (grown.elements() == null) {
-            return null;
-        }
-        for (int e = 0, k = 0; e < m.size(); e++) {
-            if (k < grown.elements().length && grown.elements()[k] == e) {
-                k++;
-            } else {
-                run.deleted.add(m.labels().get(e));
+        Matroid candidate = m;
+        if (!enumerable(m)) {
+            // A restriction is a minor, so a non-orientable simplification serves as well as m.
+            int[] simple = Simplification.representatives(m);
+            if (simple.length < m.size()) {
+                candidate = Minor.restriction(m, simple);
+                progress.report("simplified", candidate.size(), candidate.rank(), run.decisions);
             }
         }
-        ExplicitMatroid restriction = ExplicitMatroid.of(Minor.restriction(m, grown.elements()));
-        run.grownTo = restriction.size();
-        return restriction;
+        ExplicitMatroid found;
+        if (enumerable(candidate)) {
+            ExplicitMatroid explicit = ExplicitMatroid.of(candidate);
+            Orientability answer = new LazySatDecider(settings.budget()).decide(explicit);
+            run.decisions++;
+            found = answer instanceof Orientability.NonOrientable ? explicit : null;
+        } else {
+            progress.report("growing a non-orientable restriction", candidate.size(), candidate.rank(), run.decisions);
+            RestrictionGrowth.Grown grown = new RestrictionGrowth(candidate, settings, progress).grow();
+            run.decisions += grown.decisions();
+            found = grown.elements() == null ? null : ExplicitMatroid.of(Minor.restriction(candidate, grown.elements()));
+        }
+        if (found == null) {
+            return null;
+        }
+        Set<String> kept = new HashSet<>(found.labels());
+        for (String label : m.labels()) {
+            if (!kept.contains(label)) {
+                run.deleted.add(label);
+            }
+        }
+        run.grownTo = found.size();
+        return found;
     }
 
     /** The restriction of {@code m} to the elements of {@code kept}, recording the deleted labels. */

@@ -114,7 +114,7 @@ class CoreSearchTest {
     }
 
     @ParameterizedTest
-    @CsvSource({"4, 0", "4, 1", "5, 0", "5, 2", "6, 0"})
+    @CsvSource({"4, 0", "4, 1", "5, 0", "5, 2", "6, 0", "7, 0", "8, 0"})
     void cornerConstructionsReduceToCheckedMinimalCores(int n, long seed) {
         // Focused on the pulled hyperplane, as the reduce command does for constructions.
         CubeConstruction construction = CubeConstruction.corner(n);
