@@ -1,6 +1,8 @@
 package org.chirocore.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,6 +39,21 @@ final class VerifyCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print a JSON array of reports instead of text.")
     private boolean json;
 
+    /**
+     * The search and refutation time the writer recorded in the unhashed run section, if any:
+     * informative only (the verifier never reads that section), so that a reader can compare
+     * checking with finding.
+     */
+    private static Optional<Long> producedMillis(Path file) {
+        try {
+            Json.Obj run = Json.parseUtf8(Files.readAllBytes(file)).asObject("certificate").requireObject("run");
+            return Optional.of(run.requireObject("search").requireLong("millis")
+                    + run.requireObject("refutation").requireLong("millis"));
+        } catch (IOException | IllegalArgumentException e) {
+            return Optional.empty();
+        }
+    }
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -51,7 +68,9 @@ final class VerifyCommand implements Callable<Integer> {
                 for (Report.Check c : report.checks()) {
                     out.printf("%-8s %s: %s%n", c.status(), c.name(), c.detail());
                 }
-                out.println(file + ": " + (report.passed() ? "verified" : "REJECTED") + " (" + report.millis() + " ms)");
+                out.println(file + ": " + (report.passed() ? "verified" : "REJECTED") + " (" + report.millis() + " ms"
+                        + producedMillis(file).map(p -> "; producing it took " + p + " ms, by its run section").orElse("")
+                        + ")");
             }
         }
         if (json) {
