@@ -13,12 +13,13 @@ import org.chirocore.io.JsonValueException;
  * spec) but nothing mathematical yet: sets are kept as the integer arrays written in the file so
  * that later checks can name them.
  *
- * @param drat the inline proof, or empty when {@code dratFile} is given
+ * @param drat the inline DRAT proof, or empty when {@code dratFile} or {@code lrat} is given
+ * @param lrat the inline LRAT proof (hints included), when given instead of a DRAT proof
  * @param provenance the provenance object, whose inside is checked by the provenance check
  */
 record Certificate(String sha256, Json.Obj content, int rank, List<String> labels, List<int[]> bases,
         List<int[]> normalised, List<Relation> relations, Optional<String> drat, String dratFile, String dratSha256,
-        List<Witness> witnesses, Json.Obj provenance) {
+        Optional<String> lrat, List<Witness> witnesses, Json.Obj provenance) {
 
     static final int MAX_ELEMENTS = 64;
     static final int MAX_BASES = 10_000_000;
@@ -67,16 +68,19 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         }
         List<int[]> bases = sets(core.requireArray("bases"), "core.bases", MAX_BASES);
         Json.Obj non = content.requireObject("nonOrientability");
-        non.requireOnly(List.of("normalised", "relations", "drat", "dratFile", "dratSha256"));
+        non.requireOnly(List.of("normalised", "relations", "drat", "dratFile", "dratSha256", "lrat"));
         List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", MAX_ELEMENTS + 1);
         List<Relation> relations = relations(non.requireArray("relations"));
         Optional<String> drat = non.find("drat").map(d -> d.asString("nonOrientability.drat"));
-        if (drat.isPresent() == non.has("dratFile") || non.has("dratFile") != non.has("dratSha256")) {
-            throw new JsonValueException("nonOrientability must have either \"drat\" or both \"dratFile\" and \"dratSha256\"");
+        Optional<String> lrat = non.find("lrat").map(d -> d.asString("nonOrientability.lrat"));
+        int proofs = (drat.isPresent() ? 1 : 0) + (non.has("dratFile") ? 1 : 0) + (lrat.isPresent() ? 1 : 0);
+        if (proofs != 1 || non.has("dratFile") != non.has("dratSha256")) {
+            throw new JsonValueException("nonOrientability must have exactly one of \"drat\", \"lrat\", or both "
+                    + "\"dratFile\" and \"dratSha256\"");
         }
-        String dratFile = drat.isPresent() ? "" : non.requireString("dratFile");
-        String dratSha256 = drat.isPresent() ? "" : non.requireString("dratSha256");
-        return new Certificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256,
+        String dratFile = non.has("dratFile") ? non.requireString("dratFile") : "";
+        String dratSha256 = non.has("dratFile") ? non.requireString("dratSha256") : "";
+        return new Certificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256, lrat,
                 witnesses(content.requireArray("minimality"), labels.size()), content.requireObject("provenance"));
     }
 

@@ -300,8 +300,18 @@ public final class CertificateVerifier {
             return c.relations().size() + " relations; CNF of " + core.count() + " variables and " + clauses.size() + " clauses";
         }
 
-        /** The DRAT proof refutes the regenerated CNF. */
+        /**
+         * The proof refutes the regenerated CNF: an LRAT proof by following its hints (linear in
+         * its size), a DRAT proof by unit propagation and RAT.
+         */
         String drat() throws Failure, IOException {
+            if (c.lrat().isPresent()) {
+                Optional<String> failure = LratChecker.check(cnf, c.lrat().get());
+                if (failure.isPresent()) {
+                    throw new Failure(failure.get());
+                }
+                return "the empty clause is derived (LRAT hints checked)";
+            }
             String proof = c.drat().isPresent() ? c.drat().get() : dratFile();
             DratChecker.Outcome outcome = DratChecker.check(cnf, proof);
             if (!outcome.valid()) {
