@@ -1,5 +1,7 @@
 package org.chirocore.check;
 
+import java.util.BitSet;
+
 /**
  * Exact ranks of integer vectors: over Q by fraction-free (Bareiss) elimination in 64-bit integers,
  * every step checked for overflow (an overflow throws instead of giving a wrong rank), and over GF(p)
@@ -10,18 +12,18 @@ final class ExactRank {
     }
 
     /**
-     * The rank of the columns whose indices are in {@code mask}.
+     * The rank of the columns whose indices are in {@code set}.
      *
      * @param p 0 for Q, else a prime
      * @throws ArithmeticException when an intermediate value of the elimination over Q overflows a long
      */
-    static int rank(long[][] columns, long mask, long p) {
-        int k = Long.bitCount(mask);
+    static int rank(long[][] columns, BitSet set, long p) {
+        int k = set.cardinality();
         int d = columns.length == 0 ? 0 : columns[0].length;
         long[][] a = new long[d][k];
         int j = 0;
-        for (long m = mask; m != 0; m &= m - 1) {
-            long[] column = columns[Long.numberOfTrailingZeros(m)];
+        for (int e = set.nextSetBit(0); e >= 0; e = set.nextSetBit(e + 1)) {
+            long[] column = columns[e];
             for (int i = 0; i < d; i++) {
                 a[i][j] = p == 0 ? column[i] : Math.floorMod(column[i], p);
             }

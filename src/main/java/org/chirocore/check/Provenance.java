@@ -4,11 +4,12 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.BitSet;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
-import java.util.function.LongToIntFunction;
+import java.util.function.ToIntFunction;
 
 import org.chirocore.io.Json;
 
@@ -17,11 +18,16 @@ import org.chirocore.io.Json;
  * is the affine n-cube (vertex v as the column (1, v), math-notes §3) over Q or GF(p), pulled at O
  * onto H, optionally contracted at O; a given matroid is read from {@code --input}. Then the core
  * must be exactly M/C\D (rank_{M/C\D}(S) = rank_M(S ∪ C) − rank_M(C), [Ox, Prop. 3.1.6]). Cost: one
- * rank evaluation per r-subset of the core's ground set, plus the general-position test.
+ * rank evaluation per r-subset of the core's ground set, plus the general-position test. Subsets
+ * of a cube's ground set (up to 2^10 vertices) are BitSets; a given matroid and the core have at
+ * most 64 elements.
  */
 final class Provenance {
     /** Largest number of candidate subsets enumerated when rebuilding a minor or testing general position. */
     static final long MAX_CANDIDATES = 50_000_000;
+
+    /** Largest cube dimension rebuilt: 2^10 = 1024 vertices. */
+    static final int MAX_CUBE = 10;
 
     /** A rejected provenance; the message says what does not match. */
     static final class Mismatch extends Exception {
@@ -32,8 +38,8 @@ final class Provenance {
         }
     }
 
-    /** A matroid to take a minor of: its labels and its rank function on masks. */
-    private record Source(List<String> labels, LongToIntFunction rank, long contractedFirst) {
+    /** A matroid to take a minor of: its labels and its rank function on sets of element numbers. */
+    private record Source(List<String> labels, ToIntFunction<BitSet> rank, BitSet contractedFirst) {
     }
 
     private Provenance() {
@@ -63,13 +69,15 @@ final class Provenance {
         }
         Json.Obj path = provenance.requireObject("path");
         path.requireOnly(List.of("contracted", "deleted"));
-        long contracted = labelMask(path.requireArray("contracted"), source.labels(), "path.contracted");
-        long deleted = labelMask(path.requireArray("deleted"), source.labels(), "path.deleted");
-        if ((contracted & deleted) != 0 || ((contracted | deleted) & source.contractedFirst()) != 0) {
+        BitSet contracted = labelSet(path.requireArray("contracted"), source.labels(), "path.contracted");
+        BitSet deleted = labelSet(path.requireArray("deleted"), source.labels(), "path.deleted");
+        if (contracted.intersects(deleted) || contracted.intersects(source.contractedFirst())
+                || deleted.intersects(source.contractedFirst())) {
             throw new Mismatch("path.contracted and path.deleted must be disjoint and avoid the contracted pulled vertex");
         }
-        compareMinor(source, contracted | source.contractedFirst(), deleted, coreLabels, core);
-        return Optional.of(what + ", /C\\D with |C| = " + Long.bitCount(contracted) + ", |D| = " + Long.bitCount(deleted)
+        BitSet allContracted = union(contracted, source.contractedFirst());
+        compareMinor(source, allContracted, deleted, coreLabels, core);
+        return Optional.of(what + ", /C\\D with |C| = " + contracted.cardinality() + ", |D| = " + deleted.cardinality()
                 + ", gives the core exactly");
     }
 
@@ -77,8 +85,9 @@ final class Provenance {
     private static Source cube(Json.Obj c) throws Mismatch {
         c.requireOnly(List.of("cube", "field", "hyperplane", "pulled", "contractPulled"));
         int n = c.requireInt("cube");
-        if (n < 1 || n > 6) {
-            throw new Mismatch("construction.cube must be between 1 and 6 (at most 64 vertices), found " + n);
+        if (n < 1 || n > MAX_CUBE) {
+            throw new Mismatch("construction.cube must be between 1 and " + MAX_CUBE + " (at most " + (1 << MAX_CUBE)
+                    + " vertices), found " + n);
         }
         long p = field(c.requireString("field"));
         List<String> labels = new ArrayList<>();
@@ -93,63 +102,66 @@ final class Provenance {
             }
             labels.add(label.toString());
         }
-        LongToIntFunction rank = mask -> ExactRank.rank(columns, mask, p);
-        long h = labelMask(c.requireArray("hyperplane"), labels, "construction.hyperplane");
-        long o = labelMask(new Json.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
-        long all = (1L << (1 << n)) - 1;
+        ToIntFunction<BitSet> rank = set -> ExactRank.rank(columns, set, p);
+        BitSet h = labelSet(c.requireArray("hyperplane"), labels, "construction.hyperplane");
+        BitSet o = labelSet(new Json.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
         if (rank.applyAsInt(h) != n) {
             throw new Mismatch("the hyperplane has rank " + rank.applyAsInt(h) + ", not " + n);
         }
-        for (long es = all & ~h; es != 0; es &= es - 1) {
-            if (rank.applyAsInt(h | Long.lowestOneBit(es)) == n) {
-                throw new Mismatch("the hyperplane is not a flat: its closure contains " + labels.get(Long.numberOfTrailingZeros(es)));
+        for (int e = h.nextClearBit(0); e < labels.size(); e = h.nextClearBit(e + 1)) {
+            if (rank.applyAsInt(with(h, e)) == n) {
+                throw new Mismatch("the hyperplane is not a flat: its closure contains " + labels.get(e));
             }
         }
-        if ((h & o) != 0) {
+        if (h.intersects(o)) {
             throw new Mismatch("the pulled vertex lies on the hyperplane");
         }
-        generalPosition(rank, labels, n, h, o, all);
-        long ho = h | o;
+        generalPosition(rank, labels, n, h, o);
+        BitSet ho = union(h, o);
         // math-notes §3: subsets of H ∪ {O} of full rank n + 1 drop to rank n, other ranks are kept
-        LongToIntFunction pulled = mask -> {
-            int r = rank.applyAsInt(mask);
-            return (mask & ~ho) == 0 && r == n + 1 ? n : r;
+        ToIntFunction<BitSet> pulled = set -> {
+            int r = rank.applyAsInt(set);
+            return r == n + 1 && union(set, ho).equals(ho) ? n : r;
         };
-        return new Source(labels, pulled, c.requireBoolean("contractPulled") ? o : 0);
+        return new Source(labels, pulled, c.requireBoolean("contractPulled") ? o : new BitSet());
     }
 
     /**
      * (H, O) in general position (math-notes §3): for every hyperline L ⊆ H, the closure of L ∪ {O}
-     * is L ∪ {O}. Each L is the closure of n − 1 independent elements S of H; then no e outside
-     * L ∪ {O} may have rank(S ∪ {O, e}) = n.
+     * is L ∪ {O}. Each L is the closure of n − 1 independent elements S of H, and lies in H as H is
+     * a flat. An e ∈ H − L has rank(S ∪ {O, e}) = n + 1, so only the e outside H ∪ {O} are tested:
+     * none may have rank(S ∪ {O, e}) = n. Cost: C(|H|, n − 1) subsets S, each with |H| + 2^n ranks.
      */
-    private static void generalPosition(LongToIntFunction rank, List<String> labels, int n, long h, long o, long all)
+    private static void generalPosition(ToIntFunction<BitSet> rank, List<String> labels, int n, BitSet h, BitSet o)
             throws Mismatch {
         int[] hs = elements(h);
         if (binomial(hs.length, n - 1) > MAX_CANDIDATES) {
             throw new Mismatch("the hyperplane has too many hyperline candidates to test general position");
         }
-        Set<Long> seen = new HashSet<>();
+        BitSet outside = union(h, o);
+        outside.flip(0, labels.size());
+        Set<BitSet> seen = new HashSet<>();
         int[] pick = firstCombination(n - 1);
         do {
-            long s = 0;
+            BitSet s = new BitSet();
             for (int i : pick) {
-                s |= 1L << hs[i];
+                s.set(hs[i]);
             }
             if (rank.applyAsInt(s) != n - 1) {
                 continue;
             }
-            long line = s;
-            for (long es = all & ~s; es != 0; es &= es - 1) {
-                line |= rank.applyAsInt(s | Long.lowestOneBit(es)) == n - 1 ? Long.lowestOneBit(es) : 0;
+            BitSet line = new BitSet();
+            for (int e : hs) {
+                line.set(e, rank.applyAsInt(with(s, e)) == n - 1);
             }
             if (!seen.add(line)) {
                 continue;
             }
-            for (long es = all & ~line & ~o; es != 0; es &= es - 1) {
-                if (rank.applyAsInt(s | o | Long.lowestOneBit(es)) == n) {
+            BitSet so = union(s, o);
+            for (int e = outside.nextSetBit(0); e >= 0; e = outside.nextSetBit(e + 1)) {
+                if (rank.applyAsInt(with(so, e)) == n) {
                     throw new Mismatch("(H, O) are not in general position: the closure of the hyperline "
-                            + labelsOf(line, labels) + " with O contains " + labels.get(Long.numberOfTrailingZeros(es)));
+                            + labelsOf(line, labels) + " with O contains " + labels.get(e));
                 }
             }
         } while (nextCombination(pick, hs.length));
@@ -178,7 +190,8 @@ final class Provenance {
                     + ", not the recorded " + given.requireString("sha256"));
         }
         Source m = GivenMatroid.read(Json.parseUtf8(bytes));
-        long all = m.labels().size() == 64 ? -1L : (1L << m.labels().size()) - 1;
+        BitSet all = new BitSet();
+        all.set(0, m.labels().size());
         if (m.labels().size() != given.requireInt("elements") || m.rank().applyAsInt(all) != given.requireInt("rank")) {
             throw new Mismatch("the input has " + m.labels().size() + " elements and rank " + m.rank().applyAsInt(all)
                     + ", not the recorded " + given.requireInt("elements") + " and " + given.requireInt("rank"));
@@ -204,7 +217,7 @@ final class Provenance {
                 throw new Mismatch("the input's rank " + r + " is not between 0 and its " + n + " elements");
             }
             if (m.has("matrix")) {
-                return new Source(labels, matrixRank(m.requireObject("matrix"), n, r), 0);
+                return new Source(labels, matrixRank(m.requireObject("matrix"), n, r), new BitSet());
             }
             List<Long> bases = new ArrayList<>();
             if (m.has("bases")) {
@@ -232,16 +245,17 @@ final class Provenance {
             }
             // the rank of S in a matroid is the largest |S ∩ B| over its bases B ([Ox, §1.3])
             long[] masks = bases.stream().mapToLong(Long::longValue).toArray();
-            return new Source(labels, s -> {
+            return new Source(labels, set -> {
+                long s = set.isEmpty() ? 0 : set.toLongArray()[0]; // at most 64 elements
                 int best = 0;
                 for (long b : masks) {
                     best = Math.max(best, Long.bitCount(s & b));
                 }
                 return best;
-            }, 0);
+            }, new BitSet());
         }
 
-        private static LongToIntFunction matrixRank(Json.Obj matrix, int n, int r) throws Mismatch {
+        private static ToIntFunction<BitSet> matrixRank(Json.Obj matrix, int n, int r) throws Mismatch {
             matrix.requireOnly(List.of("field", "columns"));
             long p = field(matrix.requireString("field"));
             Json.Arr cols = matrix.requireArray("columns");
@@ -259,11 +273,12 @@ final class Provenance {
                     throw new Mismatch("the input matrix columns must have one length, at most 64");
                 }
             }
-            long all = columns.length == 64 ? -1L : (1L << columns.length) - 1;
+            BitSet all = new BitSet();
+            all.set(0, columns.length);
             if (columns.length > 64 || ExactRank.rank(columns, all, p) != r) {
                 throw new Mismatch("the input matrix does not have the declared rank " + r);
             }
-            return mask -> ExactRank.rank(columns, mask, p);
+            return set -> ExactRank.rank(columns, set, p);
         }
 
         private static long mask(int[] set, int n, int r) throws Mismatch {
@@ -284,12 +299,13 @@ final class Provenance {
     /**
      * Compares M/C\D with the core: same labels in order, same rank, and the r-subsets S of the
      * remaining elements with rank_M(S ∪ C) = rank_M(C) + r, enumerated in lexicographic order, are
-     * exactly the core's bases.
+     * exactly the core's bases. C is first replaced by a basis B of C (rank_M(S ∪ C) = rank_M(S ∪ B)
+     * in any matroid), so every rank query is on at most r + rank_M(C) elements.
      */
-    private static void compareMinor(Source m, long contracted, long deleted, List<String> coreLabels, BasisTable core)
+    private static void compareMinor(Source m, BitSet contracted, BitSet deleted, List<String> coreLabels, BasisTable core)
             throws Mismatch {
-        int size = m.labels().size();
-        long ground = (size == 64 ? -1L : (1L << size) - 1) & ~contracted & ~deleted;
+        BitSet ground = union(contracted, deleted);
+        ground.flip(0, m.labels().size());
         int[] kept = elements(ground);
         List<String> keptLabels = new ArrayList<>();
         for (int e : kept) {
@@ -298,8 +314,14 @@ final class Provenance {
         if (!keptLabels.equals(coreLabels)) {
             throw new Mismatch("the rebuilt minor has the elements " + keptLabels + ", the core " + coreLabels);
         }
-        int rc = m.rank().applyAsInt(contracted);
-        int r = m.rank().applyAsInt(ground | contracted) - rc;
+        BitSet basisOfC = new BitSet();
+        for (int e = contracted.nextSetBit(0); e >= 0; e = contracted.nextSetBit(e + 1)) {
+            if (m.rank().applyAsInt(with(basisOfC, e)) > basisOfC.cardinality()) {
+                basisOfC.set(e);
+            }
+        }
+        int rc = basisOfC.cardinality();
+        int r = m.rank().applyAsInt(union(ground, basisOfC)) - rc;
         if (r != core.rank) {
             throw new Mismatch("the rebuilt minor has rank " + r + ", the core " + core.rank);
         }
@@ -310,10 +332,10 @@ final class Provenance {
         int[] pick = firstCombination(r);
         do {
             long inCore = 0;
-            long inM = contracted;
+            BitSet inM = (BitSet) basisOfC.clone();
             for (int i : pick) {
                 inCore |= 1L << i;
-                inM |= 1L << kept[i];
+                inM.set(kept[i]);
             }
             boolean listed = next < core.count() && core.basis(next) == inCore;
             boolean basis = m.rank().applyAsInt(inM) == rc + r;
@@ -328,34 +350,46 @@ final class Provenance {
         }
     }
 
-    /** The mask of the listed labels, which must be distinct labels of the matroid. */
-    private static long labelMask(Json.Arr array, List<String> labels, String what) throws Mismatch {
-        long mask = 0;
+    /** The set of the listed labels, which must be distinct labels of the matroid. */
+    private static BitSet labelSet(Json.Arr array, List<String> labels, String what) throws Mismatch {
+        BitSet set = new BitSet();
         for (int i = 0; i < array.size(); i++) {
             int e = labels.indexOf(array.get(i).asString(what + "[" + i + "]"));
-            if (e < 0 || (mask & 1L << e) != 0) {
+            if (e < 0 || set.get(e)) {
                 throw new Mismatch(what + " lists \"" + array.get(i).asString(what) + "\", which is no label of the matroid or repeated");
             }
-            mask |= 1L << e;
+            set.set(e);
         }
-        return mask;
+        return set;
     }
 
-    private static String labelsOf(long mask, List<String> labels) {
+    private static String labelsOf(BitSet set, List<String> labels) {
         List<String> out = new ArrayList<>();
-        for (int e : elements(mask)) {
+        for (int e : elements(set)) {
             out.add(labels.get(e));
         }
         return out.toString();
     }
 
-    static int[] elements(long mask) {
-        int[] out = new int[Long.bitCount(mask)];
-        int i = 0;
-        for (long m = mask; m != 0; m &= m - 1) {
-            out[i++] = Long.numberOfTrailingZeros(m);
+    /** The elements of {@code set} in increasing order. */
+    private static int[] elements(BitSet set) {
+        int[] out = new int[set.cardinality()];
+        for (int i = 0, e = set.nextSetBit(0); e >= 0; i++, e = set.nextSetBit(e + 1)) {
+            out[i] = e;
         }
         return out;
+    }
+
+    private static BitSet union(BitSet a, BitSet b) {
+        BitSet u = (BitSet) a.clone();
+        u.or(b);
+        return u;
+    }
+
+    private static BitSet with(BitSet a, int e) {
+        BitSet u = (BitSet) a.clone();
+        u.set(e);
+        return u;
     }
 
     private static int[] firstCombination(int k) {

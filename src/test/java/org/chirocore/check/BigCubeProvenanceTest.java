@@ -1,0 +1,103 @@
+package org.chirocore.check;
+
+import static org.chirocore.check.CertificateVerifierTest.assertRejected;
+import static org.chirocore.check.TestCertificates.bytes;
+import static org.chirocore.check.TestCertificates.tamper;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.Certification;
+import org.chirocore.cert.Source;
+import org.chirocore.io.Json;
+import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.orient.Budget;
+import org.chirocore.search.MinimalCore;
+import org.chirocore.search.Progress;
+import org.chirocore.search.SearchResult;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.Strategy;
+import org.chirocore.search.UnsatCoreSearch;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The provenance of a cube with more than 64 vertices: the n = 7 corner construction (128
+ * vertices, H = the unit vectors, 1111111 pulled and contracted, math-notes §3), certified by the
+ * library and written by {@link CertificateWriter}, is rebuilt by the verifier.
+ */
+class BigCubeProvenanceTest {
+    @TempDir
+    static Path dir;
+
+    static Path file;
+    static Json.Obj corner7;
+
+    @BeforeAll
+    static void build() throws IOException {
+        CubeConstruction construction = CubeConstruction.corner(7);
+        SearchSettings settings = new SearchSettings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED, construction.hyperplaneVertices());
+        MinimalCore core = assertInstanceOf(SearchResult.Found.class,
+                new UnsatCoreSearch(settings, Progress.SILENT).reduce(construction.build())).core();
+        Certification.Certified certified = assertInstanceOf(Certification.Certified.class,
+                Certification.of(core, new Source.Constructed(construction), Budget.UNLIMITED));
+        file = dir.resolve("corner-n7.cert.json");
+        CertificateWriter.write(certified.certificate(), file);
+        corner7 = Json.parse(Files.readString(file)).asObject("certificate");
+    }
+
+    static Report verify(Json.Obj cert) {
+        return CertificateVerifier.verify(bytes(cert), dir, Optional.empty());
+    }
+
+    @Test
+    void theSevenCubeCornerCertificateVerifies() {
+        Report r = CertificateVerifier.verify(file);
+        assertTrue(r.passed(), r::toString);
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == Report.Status.PASS), r::toString);
+        assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().startsWith("the pulled 7-cube over Q"), r::toString);
+    }
+
+    @Test
+    void anotherPulledVertexIsRejected() {
+        // with O = 1111110, the hyperline H − {0000001} and O span the facet x_7 = 0 of the cube
+        assertRejected(verify(tamper(corner7, new Json.Str("1111110"), "provenance", "construction", "pulled")),
+                CertificateVerifier.PROVENANCE, "(H, O) are not in general position");
+    }
+
+    @Test
+    void theEightCubeCornerCertificateVerifies() {
+        // written by `chirocore reduce --cube 8` (H = the unit vectors, 11111111 pulled and contracted)
+        Report r = CertificateVerifier.verify(Path.of("src/test/resources/org/chirocore/check/corner-n8.cert.json"));
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == Report.Status.PASS), r::toString);
+        assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().startsWith("the pulled 8-cube over Q"), r::toString);
+    }
+
+    @Test
+    void aTenCubeIsRebuiltUpToThePath() {
+        // the 10-cube with H = the unit vectors passes the flat and general-position tests quickly;
+        // the 7-cube's path then names no vertex of it
+        Json.Obj cert = tamper(corner7, Json.Num.of(10), "provenance", "construction", "cube");
+        List<String> units = new ArrayList<>();
+        for (int k = 0; k < 10; k++) {
+            units.add("0".repeat(k) + "1" + "0".repeat(9 - k));
+        }
+        cert = tamper(cert, Json.Arr.ofStrings(units), "provenance", "construction", "hyperplane");
+        cert = tamper(cert, new Json.Str("1".repeat(10)), "provenance", "construction", "pulled");
+        assertRejected(verify(cert), CertificateVerifier.PROVENANCE, "path.contracted lists \"");
+    }
+
+    @Test
+    void cubesAboveTheLimitAreRefused() {
+        assertRejected(verify(tamper(corner7, Json.Num.of(11), "provenance", "construction", "cube")),
+                CertificateVerifier.PROVENANCE, "construction.cube must be between 1 and 10 (at most 1024 vertices), found 11");
+    }
+}
