@@ -7,8 +7,16 @@ chirocore() { java -Xmx2g -jar target/chirocore.jar "$@"; }
 for f in fano fano-dual ag32 ag23-minus-point; do
   chirocore reduce "certificates/inputs/$f.json" --out "certificates/$f.cert.json"
 done
-for n in 3 4 5 6; do
-  h=$(for i in $(seq 1 "$n"); do for j in $(seq 1 "$n"); do [ "$i" = "$j" ] && printf 1 || printf 0; done; [ "$i" -lt "$n" ] && printf ,; done)
+for n in 3 4 5 6 7 8; do
+  # H = the unit vectors 10...0,01...0,...,0...01; O = the all-ones vertex.
+  h=""
+  for i in $(seq 1 "$n"); do
+    v=""
+    for j in $(seq 1 "$n"); do
+      if [ "$i" = "$j" ]; then v="${v}1"; else v="${v}0"; fi
+    done
+    h="${h:+$h,}$v"
+  done
   chirocore reduce --cube "$n" --hyperplane "$h" --pull "$(printf '1%.0s' $(seq 1 "$n"))" \
     --out "certificates/corner-n$n.cert.json"
 done
