@@ -61,7 +61,7 @@ class FamilyRunTest {
         FamilyTable table = run(dir, 3, 3, 1);
         assertTrue(new HyperplaneIsomorphismInspector(certified(table, 0).facts().core(), NamedMatroids.fano()).find()
                 .isPresent());
-        // its one non-basis of three unit vectors is the line x1 + x2 + x3 = 1 the pulled point left
+        // the Fano plane has 7 lines of 3 points, so 7 of its 3-sets are non-bases
         CoreDescription d = table.rows().get(0).description().orElseThrow();
         assertEquals(7, d.nonBasesByWeights().values().stream().mapToInt(Integer::intValue).sum());
     }
