@@ -131,17 +131,21 @@ public final class CertificateWriter {
         }
     }
 
+    /** The {@code provenance.construction} member describing {@code c}. */
+    public static Json.Obj construction(CubeConstruction c) {
+        return Json.Obj.builder()
+                .put("cube", c.n())
+                .put("field", c.field().name())
+                .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices()))
+                .put("pulled", c.pulledVertex())
+                .put("contractPulled", c.contractPulled())
+                .build();
+    }
+
     private static Json.Obj provenance(Provenance p) {
         Json.Obj.Builder b = Json.Obj.builder();
         if (p.source() instanceof Source.Constructed k) {
-            CubeConstruction c = k.construction();
-            b.put("construction", Json.Obj.builder()
-                    .put("cube", c.n())
-                    .put("field", c.field().name())
-                    .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices()))
-                    .put("pulled", c.pulledVertex())
-                    .put("contractPulled", c.contractPulled())
-                    .build());
+            b.put("construction", construction(k.construction()));
         } else {
             Source.Given g = (Source.Given) p.source();
             b.put("given", Json.Obj.builder()

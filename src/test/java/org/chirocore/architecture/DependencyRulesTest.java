@@ -30,6 +30,9 @@ class DependencyRulesTest {
         "io, org.chirocore.cli", "io, org.chirocore.search", "io, org.chirocore.cert",
         "cert, org.sat4j", "cert, org.chirocore.cli",
         "matroid, org.chirocore.cert", "orient, org.chirocore.cert", "search, org.chirocore.cert",
+        "family, org.sat4j", "family, org.chirocore.cli",
+        "matroid, org.chirocore.family", "orient, org.chirocore.family", "search, org.chirocore.family",
+        "io, org.chirocore.family", "cert, org.chirocore.family", "check, org.chirocore.family",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));

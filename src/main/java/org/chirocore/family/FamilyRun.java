@@ -1,0 +1,228 @@
+package org.chirocore.family;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+
+import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.Certification;
+import org.chirocore.cert.Source;
+import org.chirocore.check.CertificateVerifier;
+import org.chirocore.check.Report;
+import org.chirocore.orient.Budget;
+import org.chirocore.search.Progress;
+import org.chirocore.search.SearchResult;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.Strategy;
+import org.chirocore.search.UnsatCoreSearch;
+
+/**
+ * Runs a family over a range of n: for each n, builds the member (checking that H is a
+ * hyperplane and (H, O) are in general position), reduces it to a minimal non-orientable core
+ * with the focus on H's vertices, certifies the core, writes {@code n=K.cert.json} atomically and
+ * verifies the written file with the independent verifier; then writes the family table
+ * ({@link FamilyTable}). Every member is built before any is reduced, so a definition that fails
+ * at some n fails before work is spent.
+ *
+ * <p>Resuming: a member whose certificate already exists in the directory, passes the verifier
+ * and records the same construction, seed and strategy is
+ * not recomputed; any other file under that name (corrupt, unverifiable, from another family)
+ * is redone. Temporary files of an interrupted write are never read.
+ *
+ * <p>Members run on {@code threads} threads; each member's search depends only on its input and
+ * the seed, so certificates do not depend on thread timing, and the table lists members in
+ * order of n. Cost: per member, what the reduction, the certification and the verifier cost.
+ */
+public final class FamilyRun {
+    /** The family table in Markdown, in the run's directory. */
+    public static final String TABLE_MD = "table.md";
+    /** The family table as JSON, in the run's directory. */
+    public static final String TABLE_JSON = "table.json";
+
+    /**
+     * How to run a family.
+     *
+     * @param seed the seed of every member's search
+     * @param strategy the strategy of every member's search
+     * @param budget the budget of each orientability decision
+     * @param threads how many members run at once, at least 1
+     */
+    public record Settings(long seed, Strategy strategy, Budget budget, int threads) {
+        public Settings {
+            if (strategy == null || budget == null) {
+                throw new IllegalArgumentException("Family run settings need a strategy and a budget.");
+            }
+            if (threads < 1) {
+                throw new IllegalArgumentException("A family run needs at least 1 thread, not " + threads + ".");
+            }
+        }
+    }
+
+    /** Receives the stage each member is in ("reducing", "certifying", …); called from worker threads. */
+    @FunctionalInterface
+    public interface Listener {
+        /** A listener that ignores everything. */
+        Listener SILENT = (n, stage) -> { };
+
+        void stage(int n, String stage);
+    }
+
+    private final FamilyDefinition family;
+    private final Path dir;
+    private final Settings settings;
+    private final Listener listener;
+
+    /** A run of {@code family} writing into {@code dir}; nothing is computed until {@link #run}. */
+    public FamilyRun(FamilyDefinition family, Path dir, Settings settings, Listener listener) {
+        this.family = family;
+        this.dir = dir;
+        this.settings = settings;
+        this.listener = listener;
+    }
+
+    /** The certificate's file name of the member at n: {@code n=K.cert.json}. */
+    public static String certificateName(int n) {
+        return "n=" + n + ".cert.json";
+    }
+
+    /**
+     * Runs the members {@code from..to} and writes the table.
+     *
+     * @throws FamilyException when the range is outside the family's or a member cannot be built
+     * @throws IOException when a file cannot be written
+     * @throws IllegalStateException when the verifier rejects a certificate just written (a bug;
+     *     the file is removed)
+     */
+    public FamilyTable run(int from, int to) throws IOException {
+        if (from > to) {
+            throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
+        }
+        List<FamilyDefinition.Member> members = new ArrayList<>();
+        for (int n = from; n <= to; n++) {
+            listener.stage(n, "building");
+            members.add(family.build(n));
+        }
+        Files.createDirectories(dir);
+        ExecutorService pool = Executors.newFixedThreadPool(Math.min(settings.threads(), members.size()));
+        List<MemberResult> results = new ArrayList<>();
+        try {
+            List<Future<MemberResult>> futures = new ArrayList<>();
+            for (FamilyDefinition.Member m : members) {
+                futures.add(pool.submit(() -> member(m)));
+            }
+            for (Future<MemberResult> f : futures) {
+                results.add(f.get());
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("The family run was interrupted.", e);
+        } catch (ExecutionException e) {
+            throw rethrow(e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+        FamilyTable table = FamilyTable.of(family, settings, results);
+        table.write(dir);
+        return table;
+    }
+
+    private MemberResult member(FamilyDefinition.Member m) throws IOException {
+        int n = m.construction().n();
+        int elements = m.matroid().size();
+        int rank = m.matroid().rank();
+        Path file = dir.resolve(certificateName(n));
+        if (Files.exists(file)) {
+            listener.stage(n, "checking the existing certificate");
+            Optional<MemberResult> reused = reuse(m, file);
+            if (reused.isPresent()) {
+                listener.stage(n, "reused the existing certificate");
+                return reused.get();
+            }
+        }
+        listener.stage(n, "reducing");
+        SearchSettings search = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
+                m.construction().hyperplaneVertices());
+        SearchResult result = new UnsatCoreSearch(search, Progress.SILENT).reduce(m.matroid());
+        if (result instanceof SearchResult.Orientable) {
+            return noCore(n, elements, rank, file, "orientable");
+        }
+        if (result instanceof SearchResult.Unknown u) {
+            return noCore(n, elements, rank, file, "unknown: " + u.reason());
+        }
+        listener.stage(n, "certifying");
+        Certification certification = Certification.of(((SearchResult.Found) result).core(),
+                new Source.Constructed(m.construction()), settings.budget());
+        if (certification instanceof Certification.OutOfBudget o) {
+            return noCore(n, elements, rank, file, "unknown: proving the core ran out of budget: " + o.reason());
+        }
+        CertificateWriter.Written written = CertificateWriter.write(((Certification.Certified) certification)
+                .certificate(), file);
+        listener.stage(n, "verifying");
+        Report report = CertificateVerifier.verify(file);
+        Verification verification = Verification.of(report);
+        if (verification == Verification.FAILED) {
+            Files.deleteIfExists(file);
+            if (written.dratFile().isPresent()) {
+                Files.deleteIfExists(written.dratFile().get());
+            }
+            throw new IllegalStateException("The verifier rejected the certificate just written for n = " + n + " ("
+                    + firstFailure(report) + "); it was removed.");
+        }
+        listener.stage(n, verification.text());
+        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), verification, false,
+                CertificateFacts.read(file), report.millis());
+    }
+
+    /** The existing certificate as this run's result, when it verifies and matches the member. */
+    private Optional<MemberResult> reuse(FamilyDefinition.Member m, Path file) throws IOException {
+        Report report = CertificateVerifier.verify(file);
+        Verification verification = Verification.of(report);
+        if (verification == Verification.FAILED) {
+            return Optional.empty();
+        }
+        CertificateFacts facts;
+        try {
+            facts = CertificateFacts.read(file);
+        } catch (IllegalArgumentException notOurs) {
+            // verifies, but lacks the run figures this tool writes: redo it
+            return Optional.empty();
+        }
+        boolean same = facts.construction().equals(CertificateWriter.construction(m.construction()))
+                && facts.seed() == settings.seed() && facts.strategy().equals(settings.strategy().id());
+        return same ? Optional.of(new MemberResult.Certified(m.construction().n(), m.matroid().size(),
+                m.matroid().rank(), file.getFileName().toString(), verification, true, facts, report.millis()))
+                : Optional.empty();
+    }
+
+    /** No core at n; a stale certificate under the member's name is removed so the directory stays truthful. */
+    private MemberResult noCore(int n, int elements, int rank, Path file, String reason) throws IOException {
+        Files.deleteIfExists(file);
+        listener.stage(n, reason);
+        return new MemberResult.NoCore(n, elements, rank, reason);
+    }
+
+    private static String firstFailure(Report report) {
+        return report.checks().stream().filter(c -> c.status() == Report.Status.FAIL)
+                .map(c -> c.name() + ": " + c.detail()).findFirst().orElse("no check failed");
+    }
+
+    private static RuntimeException rethrow(Throwable cause) throws IOException {
+        if (cause instanceof IOException io) {
+            throw io;
+        }
+        if (cause instanceof RuntimeException r) {
+            return r;
+        }
+        if (cause instanceof Error e) {
+            throw e;
+        }
+        return new IllegalStateException("A family member failed unexpectedly.", cause);
+    }
+}

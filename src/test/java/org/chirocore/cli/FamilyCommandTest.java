@@ -1,0 +1,45 @@
+package org.chirocore.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class FamilyCommandTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void runsAFamilyAndWritesTheTable() {
+        Path out = dir.resolve("corner");
+        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3..4", "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("n = 3: core rank 3 on 7 elements, 28 bases; verified"), run.out());
+        assertTrue(Files.exists(out.resolve("table.md")) && Files.exists(out.resolve("n=4.cert.json")));
+        CliRun again = CliRun.of("family", "families/corner.json", "--n", "3..4", "--out", out.toString());
+        assertTrue(again.out().contains("verified (reused)"), again.out());
+    }
+
+    @Test
+    void aFailingMemberIsBadInputNamingFileAndN() throws IOException {
+        Path f = dir.resolve("w3.json");
+        Files.writeString(f, "{\"name\": \"w3\", \"description\": \"d\", \"field\": \"Q\", \"hyperplane\": "
+                + "{\"vertices\": \"weight 3\"}, \"pulled\": \"all zeros\", \"contractPulled\": true, \"range\": [3, 5]}");
+        CliRun run = CliRun.of("family", f.toString(), "--n", "3..5", "--out", dir.resolve("o").toString());
+        assertEquals(2, run.exit());
+        assertTrue(run.err().contains(f + ": hyperplane at n = 3: "), run.err());
+    }
+
+    @Test
+    void aBadRangeIsBadUsage() {
+        CliRun run = CliRun.of("family", "families/corner.json", "--n", "5..3", "--out", dir.toString());
+        assertEquals(2, run.exit());
+        assertTrue(run.err().contains("--n must be A..B"), run.err());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "2..4", "--out", dir.toString()).exit());
+    }
+}
