@@ -18,7 +18,6 @@ import org.chirocore.io.Json;
 import org.chirocore.proof.ReadableProof;
 import org.chirocore.proof.ReadableProof.Branch;
 import org.chirocore.proof.ReadableProof.Forced;
-import org.chirocore.proof.ReadableProof.Split;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -44,7 +43,6 @@ class ReadableCertificateTest {
     @Test
     void fanoProofIsShortAndVerifies() throws IOException {
         ReadableCertificate.Readable r = readable(FANO, 200);
-        System.out.println(r.text());
         assertTrue(r.proof().steps() <= 48, "the Fano proof has " + r.proof().steps() + " steps");
         Report report = verify(r.certificate());
         assertTrue(report.passed(), report.toString());
@@ -52,15 +50,41 @@ class ReadableCertificateTest {
                 r.certificate().requireObject("content").requireObject("nonOrientability").requireArray("relations").size());
     }
 
+    /** The n = 4 corner core needs case splits, but its proof still fits in 200 steps and verifies. */
     @Test
     void cornerN4ProofVerifies() throws IOException {
-        ReadableCertificate.Explanation e = ReadableCertificate.explain(CORNER_N4, 200);
-        if (e instanceof ReadableCertificate.Readable r) {
-            System.out.println(r.text());
-            Report report = verify(r.certificate());
-            assertTrue(report.passed(), report.toString());
-        } else {
-            System.out.println(((ReadableCertificate.Unreadable) e).reason().message());
-        }
+        ReadableCertificate.Readable r = readable(CORNER_N4, 200);
+        assertTrue(r.proof().steps() > 48 && r.proof().steps() <= 200, "steps: " + r.proof().steps());
+        Report report = verify(r.certificate());
+        assertTrue(report.passed(), report.toString());
+    }
+
+    @Test
+    void tooSmallALimitIsReported() throws IOException {
+        ReadableCertificate.Unreadable u = assertInstanceOf(ReadableCertificate.Unreadable.class,
+                ReadableCertificate.explain(CORNER_N4, 40));
+        assertEquals(40, u.reason().limit());
+        assertEquals("too large for a readable proof: the derivation reached 41 steps, more than the limit of 40.",
+                u.reason().message());
+    }
+
+    /**
+     * Flipping the sign of a forced step gives lemmas that the verifier must reject. The step is
+     * taken at the root: a step inside a case that unit propagation alone refutes would stay RUP
+     * whatever its sign, since its clause contains the negated case literal.
+     */
+    @Test
+    void tamperedStepIsRejected() throws IOException {
+        ReadableCertificate.Readable r = readable(FANO, 200);
+        ReadableProof proof = r.proof();
+        List<Forced> forced = new ArrayList<>(proof.root().forced());
+        Forced step = forced.get(0);
+        forced.set(0, new Forced(step.relation(), step.variable(), -step.sign()));
+        ReadableProof tampered = new ReadableProof(proof.normalised(), new Branch(forced, proof.root().ending()));
+        Json.Obj document = CertificateExport.readChecked(FANO);
+        Report report = verify(ReadableCertificate.variant(document, tampered));
+        assertFalse(report.passed());
+        assertEquals(Report.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
+        assertTrue(verify(ReadableCertificate.variant(document, proof)).passed());
     }
 }
