@@ -59,6 +59,54 @@ public final class CertificateExport {
      *     the proof does not check
      */
     public static Exported export(Path certificate, Path outDir, boolean lrat) throws IOException {
+        Json.Obj content = readChecked(certificate).requireObject("content");
+        Json.Obj proof = content.requireObject("nonOrientability");
+        Claim claim = claim(content);
+        BasisIndex index = claim.index();
+        List<int[]> cnf = ClauseEncoding.cnf(index, claim.normalised(), claim.relations());
+        StringBuilder dimacs = new StringBuilder("p cnf " + index.basisCount() + " " + cnf.size() + "\n");
+        for (int[] clause : cnf) {
+            for (int lit : clause) {
+                dimacs.append(lit).append(' ');
+            }
+            dimacs.append("0\n");
+        }
+        String name = CertificateWriter.baseName(certificate);
+        Path cnfFile = outDir.resolve(name + ".cnf");
+        Path dratFile = outDir.resolve(name + ".drat");
+        byte[] dratBytes = drat(proof, certificate);
+        AtomicFiles.writeString(cnfFile, dimacs.toString());
+        AtomicFiles.write(dratFile, dratBytes);
+        Optional<Path> lratFile = Optional.empty();
+        if (lrat) {
+            String hinted = DratChecker.toLrat(new Cnf(index.basisCount(), cnf), new String(dratBytes, StandardCharsets.UTF_8));
+            lratFile = Optional.of(outDir.resolve(name + ".lrat"));
+            AtomicFiles.writeString(lratFile.get(), hinted);
+        }
+        return new Exported(cnfFile, dratFile, index.basisCount(), cnf.size(), lratFile);
+    }
+
+    /**
+     * The non-orientability claim of a certificate's content, on the core's bases.
+     *
+     * @param index the core's bases as variables
+     * @param normalised the variables of the normalised bases, in listed order
+     * @param relations the listed relations, in order
+     */
+    record Claim(BasisIndex index, List<Integer> normalised, List<GpRelation> relations) {
+        Claim {
+            normalised = List.copyOf(normalised);
+            relations = List.copyOf(relations);
+        }
+    }
+
+    /**
+     * The certificate document in {@code certificate}, after checking its format, version and digest.
+     *
+     * @throws IOException when the file cannot be read
+     * @throws JsonValueException when it is not of this format or its digest does not match
+     */
+    static Json.Obj readChecked(Path certificate) throws IOException {
         Json.Obj doc = Json.parse(Files.readString(certificate, StandardCharsets.UTF_8)).asObject("the certificate");
         if (!CertificateWriter.FORMAT.equals(doc.requireString("format"))
                 || doc.requireInt("version") != CertificateWriter.VERSION) {
@@ -71,6 +119,17 @@ public final class CertificateExport {
             throw new JsonValueException("field \"sha256\" is " + doc.requireString("sha256")
                     + ", but the content's digest is " + digest);
         }
+        return doc;
+    }
+
+    /**
+     * The claim of {@code content}.
+     *
+     * @throws JsonValueException when a member is missing or malformed, or a normalised set is no basis
+     * @throws org.chirocore.matroid.InvalidMatroidException when the bases are not a matroid's
+     * @throws IllegalArgumentException when a relation is malformed
+     */
+    static Claim claim(Json.Obj content) {
         BasisIndex index = BasisIndex.of(core(content.requireObject("core")));
         Json.Obj proof = content.requireObject("nonOrientability");
         List<Integer> normalised = new ArrayList<>();
@@ -94,27 +153,7 @@ public final class CertificateExport {
             relations.add(new GpRelation(ElementSets.mask(ints(r.get(0), where + "[0]")), r.get(1).asInt(where),
                     r.get(2).asInt(where), r.get(3).asInt(where), r.get(4).asInt(where)));
         }
-        List<int[]> cnf = ClauseEncoding.cnf(index, normalised, relations);
-        StringBuilder dimacs = new StringBuilder("p cnf " + index.basisCount() + " " + cnf.size() + "\n");
-        for (int[] clause : cnf) {
-            for (int lit : clause) {
-                dimacs.append(lit).append(' ');
-            }
-            dimacs.append("0\n");
-        }
-        String name = CertificateWriter.baseName(certificate);
-        Path cnfFile = outDir.resolve(name + ".cnf");
-        Path dratFile = outDir.resolve(name + ".drat");
-        byte[] dratBytes = drat(proof, certificate);
-        AtomicFiles.writeString(cnfFile, dimacs.toString());
-        AtomicFiles.write(dratFile, dratBytes);
-        Optional<Path> lratFile = Optional.empty();
-        if (lrat) {
-            String hinted = DratChecker.toLrat(new Cnf(index.basisCount(), cnf), new String(dratBytes, StandardCharsets.UTF_8));
-            lratFile = Optional.of(outDir.resolve(name + ".lrat"));
-            AtomicFiles.writeString(lratFile.get(), hinted);
-        }
-        return new Exported(cnfFile, dratFile, index.basisCount(), cnf.size(), lratFile);
+        return new Claim(index, normalised, relations);
     }
 
     private static ExplicitMatroid core(Json.Obj core) {

@@ -169,8 +169,7 @@ public final class CertificateWriter {
         }
         List<Json> relations = new ArrayList<>();
         for (GpRelation g : r.relations()) {
-            relations.add(new Json.Arr(List.of(Json.Arr.ofInts(ElementSets.elements(g.x())), Json.Num.of(g.a()),
-                    Json.Num.of(g.b()), Json.Num.of(g.c()), Json.Num.of(g.d()))));
+            relations.add(relation(g));
         }
         Json.Obj.Builder b = Json.Obj.builder()
                 .put("normalised", new Json.Arr(normalised))
@@ -182,6 +181,12 @@ public final class CertificateWriter {
             b.put("drat", r.drat());
         }
         return b.build();
+    }
+
+    /** A relation as the certificate lists it: {@code [[x1, ...], a, b, c, d]}. */
+    static Json.Arr relation(GpRelation g) {
+        return new Json.Arr(List.of(Json.Arr.ofInts(ElementSets.elements(g.x())), Json.Num.of(g.a()),
+                Json.Num.of(g.b()), Json.Num.of(g.c()), Json.Num.of(g.d())));
     }
 
     private static Json.Obj run(Certificate c) {

@@ -88,4 +88,13 @@ final class Inputs {
             throw new BadInputException(file + ": cannot write the file: " + e, e);
         }
     }
+
+    /** Writes {@code text} to {@code file} atomically. */
+    static void writeText(Path file, String text) {
+        try {
+            AtomicFiles.writeString(file, text);
+        } catch (IOException e) {
+            throw new BadInputException(file + ": cannot write the file: " + e, e);
+        }
+    }
 }

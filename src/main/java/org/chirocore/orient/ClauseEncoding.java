@@ -30,25 +30,12 @@ public final class ClauseEncoding {
      *     (basis exchange) and so shows that the basis list is not a matroid's
      */
     public static List<int[]> clauses(BasisIndex index, GpRelation relation) {
-        long x = relation.x();
-        int[][] pairs = {
-            {relation.a(), relation.b()}, {relation.c(), relation.d()},
-            {relation.a(), relation.c()}, {relation.b(), relation.d()},
-            {relation.a(), relation.d()}, {relation.b(), relation.c()},
-        };
-        int[] termSign = {1, -1, 1};
+        List<Term> terms = terms(index, relation);
         List<int[]> vars = new ArrayList<>();
         List<Integer> negated = new ArrayList<>();
-        for (int t = 0; t < 3; t++) {
-            int[] p = pairs[2 * t];
-            int[] q = pairs[2 * t + 1];
-            int v1 = index.variable(x | (1L << p[0]) | (1L << p[1]));
-            int v2 = index.variable(x | (1L << q[0]) | (1L << q[1]));
-            if (v1 != 0 && v2 != 0) {
-                int s = termSign[t] * permutationSign(x, p[0], p[1]) * permutationSign(x, q[0], q[1]);
-                vars.add(new int[] {v1, v2});
-                negated.add(s < 0 ? 1 : 0);
-            }
+        for (Term t : terms) {
+            vars.add(new int[] {t.first(), t.second()});
+            negated.add(t.sign() < 0 ? 1 : 0);
         }
         List<int[]> out = new ArrayList<>();
         switch (vars.size()) {
@@ -86,6 +73,41 @@ public final class ClauseEncoding {
             }
             default -> throw new IllegalArgumentException("Relation " + relation
                     + " has exactly one non-zero term, which basis exchange rules out: the support is not a matroid.");
+        }
+        return out;
+    }
+
+    /**
+     * A non-zero term s·χ(B1)·χ(B2) of a relation, in the form the encoding uses.
+     *
+     * @param sign s = ±1: the term's own sign times the signs of the permutations sorting both tuples
+     * @param first the variable of B1
+     * @param second the variable of B2
+     */
+    public record Term(int sign, int first, int second) {
+    }
+
+    /**
+     * The non-zero terms of {@code relation}, in term order (a,b)(c,d), (a,c)(b,d), (a,d)(b,c);
+     * a term whose two sets are not both bases is left out. Costs O(rank) per set.
+     */
+    public static List<Term> terms(BasisIndex index, GpRelation relation) {
+        long x = relation.x();
+        int[][] pairs = {
+            {relation.a(), relation.b()}, {relation.c(), relation.d()},
+            {relation.a(), relation.c()}, {relation.b(), relation.d()},
+            {relation.a(), relation.d()}, {relation.b(), relation.c()},
+        };
+        int[] termSign = {1, -1, 1};
+        List<Term> out = new ArrayList<>();
+        for (int t = 0; t < 3; t++) {
+            int[] p = pairs[2 * t];
+            int[] q = pairs[2 * t + 1];
+            int v1 = index.variable(x | (1L << p[0]) | (1L << p[1]));
+            int v2 = index.variable(x | (1L << q[0]) | (1L << q[1]));
+            if (v1 != 0 && v2 != 0) {
+                out.add(new Term(termSign[t] * permutationSign(x, p[0], p[1]) * permutationSign(x, q[0], q[1]), v1, v2));
+            }
         }
         return out;
     }

@@ -33,6 +33,9 @@ class DependencyRulesTest {
         "family, org.sat4j", "family, org.chirocore.cli",
         "matroid, org.chirocore.family", "orient, org.chirocore.family", "search, org.chirocore.family",
         "io, org.chirocore.family", "cert, org.chirocore.family", "check, org.chirocore.family",
+        "proof, org.sat4j", "proof, org.chirocore.cli", "proof, org.chirocore.io", "proof, org.chirocore.cert",
+        "proof, org.chirocore.check", "proof, org.chirocore.search", "proof, org.chirocore.family",
+        "matroid, org.chirocore.proof", "orient, org.chirocore.proof", "check, org.chirocore.proof",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));
