@@ -3,13 +3,18 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.family.FamilyDefinition;
 import org.chirocore.family.FamilyException;
+import org.chirocore.family.FamilyExploration;
 import org.chirocore.family.FamilyRun;
 import org.chirocore.family.FamilyTable;
 import org.chirocore.family.MemberResult;
+import org.chirocore.family.VertexRule;
 import org.chirocore.search.Strategy;
 
 import picocli.CommandLine.Command;
@@ -50,6 +55,21 @@ final class FamilyCommand implements Callable<Integer> {
             description = "Seed of every member's search (default: ${DEFAULT-VALUE}).")
     private long seed;
 
+    @Option(names = "--explore", paramLabel = "K",
+            description = "Instead of one reduction per n, run K seeded reductions (seeds S, S+1, ...; strategies "
+                    + "alternating contract-first, delete-first), group the cores up to isomorphism and certify one "
+                    + "per class: DIR/n=K.core-J.cert.json, DIR/explore.md, DIR/explore.json.")
+    private Integer explore;
+
+    @Option(names = "--keep", paramLabel = "V1,V2,...", split = ",",
+            description = "With --explore: accept only cores containing these vertices (0/1 labels or vertex rules "
+                    + "without commas, e.g. \"all zeros\", \"weight 2\"); other cores are counted as filtered.")
+    private List<String> keep = List.of();
+
+    @Option(names = "--target-rank", paramLabel = "R",
+            description = "With --explore: accept only cores of rank R; other cores are counted as filtered.")
+    private Integer targetRank;
+
     @Mixin
     private BudgetOptions budget;
 
@@ -58,6 +78,13 @@ final class FamilyCommand implements Callable<Integer> {
         int[] bounds = bounds();
         if (threads < 1) {
             throw new ParameterException(spec.commandLine(), "--threads must be at least 1, not " + threads + ".");
+        }
+        if (explore != null) {
+            return explore(bounds);
+        }
+        if (!keep.isEmpty() || targetRank != null) {
+            throw new ParameterException(spec.commandLine(), "--keep and --target-rank filter the cores of --explore; "
+                    + "give --explore K as well.");
         }
         FamilyTable table;
         try {
@@ -85,6 +112,52 @@ final class FamilyCommand implements Callable<Integer> {
             }
         }
         w.println("wrote " + out.resolve(FamilyRun.TABLE_MD) + " and " + out.resolve(FamilyRun.TABLE_JSON));
+        return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
+    }
+
+    /** --explore: K reductions per n, classes up to isomorphism, one certificate per class. */
+    private int explore(int[] bounds) {
+        if (explore < 1) {
+            throw new ParameterException(spec.commandLine(), "--explore must be at least 1, not " + explore + ".");
+        }
+        if (targetRank != null && targetRank < 1) {
+            throw new ParameterException(spec.commandLine(), "--target-rank must be at least 1, not " + targetRank + ".");
+        }
+        List<VertexRule> rules = new ArrayList<>();
+        for (String text : keep) {
+            try {
+                rules.add(VertexRule.parse(text.trim()));
+            } catch (IllegalArgumentException e) {
+                throw new ParameterException(spec.commandLine(), "--keep: " + e.getMessage());
+            }
+        }
+        FamilyExploration.Report report;
+        try {
+            FamilyDefinition family = FamilyDefinition.read(file);
+            FamilyExploration.Settings settings = new FamilyExploration.Settings(seed, explore, budget.budget(), rules,
+                    targetRank == null ? OptionalInt.empty() : OptionalInt.of(targetRank));
+            report = new FamilyExploration(family, out, settings, FamilyConsole.ifInteractive(spec.commandLine().getErr()))
+                    .run(bounds[0], bounds[1]);
+        } catch (FamilyException e) {
+            throw new BadInputException(e.getMessage(), e);
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot write the exploration's files: " + e, e);
+        }
+        PrintWriter w = spec.commandLine().getOut();
+        for (FamilyExploration.Member m : report.members()) {
+            w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
+                    + " of cores, " + m.rejected().size() + " of " + explore + " runs filtered or without a core");
+            for (FamilyExploration.CoreClass c : m.classes()) {
+                w.println("  " + Format.shape(c.core().rank(), c.core().size(), c.core().basisCount()) + " x "
+                        + c.attempts().size() + "; " + c.status()
+                        + c.certificate().map(f -> "; " + out.resolve(f.getKey())).orElse(""));
+            }
+        }
+        w.println("wrote " + out.resolve(FamilyExploration.EXPLORE_MD) + " and "
+                + out.resolve(FamilyExploration.EXPLORE_JSON));
+        boolean unknown = report.members().stream().anyMatch(m -> m.classes().stream()
+                .anyMatch(c -> c.certificate().isEmpty()) || m.rejected().stream()
+                .anyMatch(r -> r.reason().startsWith("unknown")));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
     }
 

@@ -42,4 +42,18 @@ class FamilyCommandTest {
         assertTrue(run.err().contains("--n must be A..B"), run.err());
         assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "2..4", "--out", dir.toString()).exit());
     }
+
+    @Test
+    void exploresWithFiltersAndRejectsFiltersWithoutExplore() {
+        Path out = dir.resolve("explore");
+        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--explore", "2", "--keep", "000,001",
+                "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("n = 3: 1 class of cores, 0 of 2 runs"), run.out());
+        assertTrue(Files.exists(out.resolve("n=3.core-1.cert.json")) && Files.exists(out.resolve("explore.json")));
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3", "--keep", "000", "--out",
+                out.toString()).exit());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--explore", "1", "--keep", "000",
+                "--out", out.toString()).exit());
+    }
 }
