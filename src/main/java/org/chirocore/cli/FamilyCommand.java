@@ -11,6 +11,7 @@ import java.util.concurrent.Callable;
 import org.chirocore.family.FamilyDefinition;
 import org.chirocore.family.FamilyException;
 import org.chirocore.family.FamilyExploration;
+import org.chirocore.family.FamilyPrediction;
 import org.chirocore.family.FamilyRun;
 import org.chirocore.family.FamilyTable;
 import org.chirocore.family.MemberResult;
@@ -70,6 +71,12 @@ final class FamilyCommand implements Callable<Integer> {
             description = "With --explore: accept only cores of rank R; other cores are counted as filtered.")
     private Integer targetRank;
 
+    @Option(names = "--predict", paramLabel = "PREDICTION",
+            description = "Instead of searching, check the predicted core of each n given in PREDICTION (JSON, see "
+                    + "docs/families.md): decide it non-orientable and minor-minimal, then certify and verify it "
+                    + "as DIR/n=K.predicted.cert.json.")
+    private Path predict;
+
     @Mixin
     private BudgetOptions budget;
 
@@ -79,8 +86,14 @@ final class FamilyCommand implements Callable<Integer> {
         if (threads < 1) {
             throw new ParameterException(spec.commandLine(), "--threads must be at least 1, not " + threads + ".");
         }
+        if (explore != null && predict != null) {
+            throw new ParameterException(spec.commandLine(), "--explore and --predict exclude each other.");
+        }
         if (explore != null) {
             return explore(bounds);
+        }
+        if (predict != null) {
+            return predict(bounds);
         }
         if (!keep.isEmpty() || targetRank != null) {
             throw new ParameterException(spec.commandLine(), "--keep and --target-rank filter the cores of --explore; "
@@ -159,6 +172,36 @@ final class FamilyCommand implements Callable<Integer> {
                 .anyMatch(c -> c.certificate().isEmpty()) || m.rejected().stream()
                 .anyMatch(r -> r.reason().startsWith("unknown")));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
+    }
+
+    /** --predict: checks the predicted cores, certifying the confirmed ones. */
+    private int predict(int[] bounds) {
+        List<FamilyPrediction.Outcome> outcomes;
+        try {
+            FamilyDefinition family = FamilyDefinition.read(file);
+            FamilyPrediction.Prediction prediction = FamilyPrediction.Prediction.read(predict);
+            outcomes = new FamilyPrediction(family, prediction, out, budget.budget()).run(bounds[0], bounds[1]);
+        } catch (FamilyException e) {
+            throw new BadInputException(e.getMessage(), e);
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot write the prediction's certificates: " + e, e);
+        }
+        PrintWriter w = spec.commandLine().getOut();
+        int exit = ExitCodes.OK;
+        for (FamilyPrediction.Outcome o : outcomes) {
+            if (o instanceof FamilyPrediction.Confirmed c) {
+                w.println("n = " + c.n() + ": prediction confirmed: core " + Format.shape(c.facts().core().rank(),
+                        c.facts().core().size(), c.facts().core().basisCount()) + "; verified; "
+                        + out.resolve(c.certificate()));
+            } else if (o instanceof FamilyPrediction.Refuted r) {
+                w.println("n = " + r.n() + ": prediction refuted: " + r.reason());
+                exit = exit == ExitCodes.OK ? ExitCodes.CHECK_FAILED : exit;
+            } else {
+                w.println("n = " + o.n() + ": unknown: " + ((FamilyPrediction.Unknown) o).reason());
+                exit = ExitCodes.UNKNOWN;
+            }
+        }
+        return exit;
     }
 
     /** The bounds of --n: "A..B" or "A". */

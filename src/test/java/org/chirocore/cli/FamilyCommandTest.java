@@ -56,4 +56,16 @@ class FamilyCommandTest {
         assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--explore", "1", "--keep", "000",
                 "--out", out.toString()).exit());
     }
+
+    @Test
+    void predictsTheKnownCores() {
+        Path out = dir.resolve("predict");
+        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--predict", "families/corner.predict.json",
+                "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases; verified"),
+                run.out());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--predict",
+                "families/corner.predict.json", "--out", out.toString()).exit());
+    }
 }
