@@ -13,7 +13,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "chirocore", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Orientability of matroids and minor-minimal non-orientable minors of pulled affine cubes.",
         subcommands = {OrientCommand.class, ReduceCommand.class, VerifyCommand.class, ExportCommand.class,
-                CubeCommand.class, BenchCommand.class, FamilyCommand.class,
+                CubeCommand.class, BenchCommand.class, FamilyCommand.class, FamilyMergeCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",

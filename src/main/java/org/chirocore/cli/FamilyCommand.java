@@ -15,6 +15,7 @@ import org.chirocore.family.FamilyPrediction;
 import org.chirocore.family.FamilyRun;
 import org.chirocore.family.FamilyTable;
 import org.chirocore.family.MemberResult;
+import org.chirocore.family.Shard;
 import org.chirocore.family.VertexRule;
 import org.chirocore.search.Strategy;
 
@@ -77,6 +78,11 @@ final class FamilyCommand implements Callable<Integer> {
                     + "as DIR/n=K.predicted.cert.json.")
     private Path predict;
 
+    @Option(names = "--shard", paramLabel = "i/k",
+            description = "Run only the n of A..B with n mod k = i (0 <= i < k); join the shards' directories with "
+                    + "family-merge.")
+    private String shard;
+
     @Mixin
     private BudgetOptions budget;
 
@@ -88,6 +94,10 @@ final class FamilyCommand implements Callable<Integer> {
         }
         if (explore != null && predict != null) {
             throw new ParameterException(spec.commandLine(), "--explore and --predict exclude each other.");
+        }
+        if (shard != null && (explore != null || predict != null)) {
+            throw new ParameterException(spec.commandLine(), "--shard splits a family run; it does not combine with "
+                    + "--explore or --predict.");
         }
         if (explore != null) {
             return explore(bounds);
@@ -104,7 +114,7 @@ final class FamilyCommand implements Callable<Integer> {
             FamilyDefinition family = FamilyDefinition.read(file);
             FamilyRun.Settings settings = new FamilyRun.Settings(seed, Strategy.CONTRACT_FIRST, budget.budget(), threads);
             table = new FamilyRun(family, out, settings, FamilyConsole.ifInteractive(spec.commandLine().getErr()))
-                    .run(bounds[0], bounds[1]);
+                    .run(bounds[0], bounds[1], shard());
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
@@ -202,6 +212,15 @@ final class FamilyCommand implements Callable<Integer> {
             }
         }
         return exit;
+    }
+
+    /** The part of --n to run: --shard, or all of it. */
+    private Shard shard() {
+        try {
+            return shard == null ? Shard.ALL : Shard.parse(shard);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--shard: " + e.getMessage());
+        }
     }
 
     /** The bounds of --n: "A..B" or "A". */

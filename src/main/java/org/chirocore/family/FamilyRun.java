@@ -99,16 +99,34 @@ public final class FamilyRun {
      *     the file is removed)
      */
     public FamilyTable run(int from, int to) throws IOException {
+        return run(from, to, Shard.ALL);
+    }
+
+    /**
+     * Runs the members of {@code from..to} that lie in {@code shard} (possibly none) and writes
+     * the table of those members.
+     *
+     * @throws FamilyException when the range is empty or outside the family's, or a member cannot
+     *     be built
+     * @throws IOException when a file cannot be written
+     * @throws IllegalStateException when the verifier rejects a certificate just written
+     */
+    public FamilyTable run(int from, int to, Shard shard) throws IOException {
         if (from > to) {
             throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
         }
+        if (from < family.from() || to > family.to()) {
+            throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is not within the "
+                    + "family's range [" + family.from() + ", " + family.to() + "].");
+        }
+        List<Integer> ns = shard.select(from, to);
         List<FamilyDefinition.Member> members = new ArrayList<>();
-        for (int n = from; n <= to; n++) {
+        for (int n : ns) {
             listener.stage(n, "building");
             members.add(family.build(n));
         }
         Files.createDirectories(dir);
-        ExecutorService pool = Executors.newFixedThreadPool(Math.min(settings.threads(), members.size()));
+        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(settings.threads(), members.size())));
         List<MemberResult> results = new ArrayList<>();
         try {
             List<Future<MemberResult>> futures = new ArrayList<>();

@@ -68,4 +68,21 @@ class FamilyCommandTest {
         assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--predict",
                 "families/corner.predict.json", "--out", out.toString()).exit());
     }
+
+    @Test
+    void shardsAndMerges() {
+        for (int i = 0; i < 2; i++) {
+            CliRun shard = CliRun.of("family", "families/corner.json", "--n", "3..4", "--shard", i + "/2", "--out",
+                    dir.resolve("s" + i).toString());
+            assertEquals(0, shard.exit(), shard.err());
+        }
+        CliRun merge = CliRun.of("family-merge", "families/corner.json", dir.resolve("s0").toString(),
+                dir.resolve("s1").toString(), "--out", dir.resolve("m").toString());
+        assertEquals(0, merge.exit(), merge.err());
+        assertTrue(merge.out().contains("merged 2 members from 2 shards"), merge.out());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--shard", "2/2", "--out",
+                dir.resolve("x").toString()).exit());
+        assertEquals(2, CliRun.of("family-merge", "families/corner-uncontracted.json", dir.resolve("s0").toString(),
+                "--out", dir.resolve("m2").toString()).exit());
+    }
 }
