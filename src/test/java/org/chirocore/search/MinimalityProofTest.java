@@ -14,8 +14,9 @@ import org.junit.jupiter.api.Test;
 class MinimalityProofTest {
     @Test
     void theFanoPlaneIsMinimalWithCheckedWitnesses() {
-        // F7 is minor-minimal non-orientable: every single-element minor is regular (Oxley, Matroid
-        // Theory, 2nd ed., Theorem 6.6.3 and Proposition 6.4.8)
+        // F7 (Oxley, Matroid Theory, 2nd ed., Example 1.5.7) is minor-minimal non-orientable: its
+        // single-element deletions and contractions have rank at most 3 on 6 elements and are
+        // regular, hence orientable; the check must find all 14 and re-check each
         ExplicitMatroid fano = ExplicitMatroid.of(NamedMatroids.fano());
         MinimalityProof.Minimal minimal = assertInstanceOf(MinimalityProof.Minimal.class,
                 MinimalityProof.check(fano, Budget.UNLIMITED));
@@ -30,7 +31,8 @@ class MinimalityProofTest {
 
     @Test
     void theBinaryAffineCubeIsNotMinimal() {
-        // AG(3, 2)/e is the Fano plane for every e (Oxley, Matroid Theory, 2nd ed., Appendix)
+        // AG(3, 2)/e is the Fano plane for every e: the 7 other points of the binary affine cube
+        // project to the 7 distinct points of PG(2, 2); asserted here by isomorphism
         ExplicitMatroid ag32 = ExplicitMatroid.of(NamedMatroids.binaryAffineCube());
         MinimalityProof.NonOrientableContraction c = assertInstanceOf(MinimalityProof.NonOrientableContraction.class,
                 MinimalityProof.check(ag32, Budget.UNLIMITED));
