@@ -95,6 +95,10 @@ final class FamilyCommand implements Callable<Integer> {
         if (explore != null && predict != null) {
             throw new ParameterException(spec.commandLine(), "--explore and --predict exclude each other.");
         }
+        if (threads != 1 && (explore != null || predict != null)) {
+            throw new ParameterException(spec.commandLine(), "--threads applies to a family run; --explore and "
+                    + "--predict run on one thread.");
+        }
         if (shard != null && (explore != null || predict != null)) {
             throw new ParameterException(spec.commandLine(), "--shard splits a family run; it does not combine with "
                     + "--explore or --predict.");

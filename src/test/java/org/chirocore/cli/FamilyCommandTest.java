@@ -67,6 +67,8 @@ class FamilyCommandTest {
                 run.out());
         assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--predict",
                 "families/corner.predict.json", "--out", out.toString()).exit());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3", "--predict",
+                "families/corner.predict.json", "--threads", "2", "--out", out.toString()).exit());
     }
 
     @Test
