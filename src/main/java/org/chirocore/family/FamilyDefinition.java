@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Supplier;
 
+import org.chirocore.cert.CertificateWriter;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.CubeConstruction;
@@ -32,9 +33,11 @@ import org.chirocore.matroid.Matroid;
  * @param contractPulled whether O is contracted after pulling
  * @param from the smallest n of the family
  * @param to the largest n of the family
+ * @param sha256 the SHA-256 of the definition as re-serialised by chirocore (independent of
+ *     whitespace in the file); shards of one run must agree on it
  */
 public record FamilyDefinition(String source, String name, String description, Field field,
-        HyperplaneRule hyperplane, VertexRule pulled, boolean contractPulled, int from, int to) {
+        HyperplaneRule hyperplane, VertexRule pulled, boolean contractPulled, int from, int to, String sha256) {
     private static final List<String> FIELDS = List.of("name", "description", "field", "hyperplane", "pulled",
             "contractPulled", "range");
     private static final Set<Character> N = Set.of('n');
@@ -91,7 +94,8 @@ public record FamilyDefinition(String source, String name, String description, F
         return new FamilyDefinition(source, o.requireString("name"), o.requireString("description"), field,
                 hyperplane(source, o.requireObject("hyperplane")),
                 in(source, "pulled", () -> VertexRule.parse(o.requireString("pulled"))),
-                o.requireBoolean("contractPulled"), range.get(0).asInt("range[0]"), range.get(1).asInt("range[1]"));
+                o.requireBoolean("contractPulled"), range.get(0).asInt("range[0]"), range.get(1).asInt("range[1]"),
+                CertificateWriter.sha256(json));
     }
 
     /**

@@ -12,8 +12,6 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.Certification;
-import org.chirocore.cert.Source;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
 import org.chirocore.orient.Budget;
@@ -101,16 +99,34 @@ public final class FamilyRun {
      *     the file is removed)
      */
     public FamilyTable run(int from, int to) throws IOException {
+        return run(from, to, Shard.ALL);
+    }
+
+    /**
+     * Runs the members of {@code from..to} that lie in {@code shard} (possibly none) and writes
+     * the table of those members.
+     *
+     * @throws FamilyException when the range is empty or outside the family's, or a member cannot
+     *     be built
+     * @throws IOException when a file cannot be written
+     * @throws IllegalStateException when the verifier rejects a certificate just written
+     */
+    public FamilyTable run(int from, int to, Shard shard) throws IOException {
         if (from > to) {
             throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
         }
+        if (from < family.from() || to > family.to()) {
+            throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is not within the "
+                    + "family's range [" + family.from() + ", " + family.to() + "].");
+        }
+        List<Integer> ns = shard.select(from, to);
         List<FamilyDefinition.Member> members = new ArrayList<>();
-        for (int n = from; n <= to; n++) {
+        for (int n : ns) {
             listener.stage(n, "building");
             members.add(family.build(n));
         }
         Files.createDirectories(dir);
-        ExecutorService pool = Executors.newFixedThreadPool(Math.min(settings.threads(), members.size()));
+        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(settings.threads(), members.size())));
         List<MemberResult> results = new ArrayList<>();
         try {
             List<Future<MemberResult>> futures = new ArrayList<>();
@@ -156,28 +172,16 @@ public final class FamilyRun {
         if (result instanceof SearchResult.Unknown u) {
             return noCore(n, elements, rank, file, "unknown: " + u.reason());
         }
-        listener.stage(n, "certifying");
-        Certification certification = Certification.of(((SearchResult.Found) result).core(),
-                new Source.Constructed(m.construction()), settings.budget());
-        if (certification instanceof Certification.OutOfBudget o) {
+        listener.stage(n, "certifying and verifying");
+        MemberCertifier.Outcome outcome = MemberCertifier.certify(((SearchResult.Found) result).core(),
+                m.construction(), settings.budget(), file);
+        if (outcome instanceof MemberCertifier.OutOfBudget o) {
             return noCore(n, elements, rank, file, "unknown: proving the core ran out of budget: " + o.reason());
         }
-        CertificateWriter.Written written = CertificateWriter.write(((Certification.Certified) certification)
-                .certificate(), file);
-        listener.stage(n, "verifying");
-        Report report = CertificateVerifier.verify(file);
-        Verification verification = Verification.of(report);
-        if (verification == Verification.FAILED) {
-            Files.deleteIfExists(file);
-            if (written.dratFile().isPresent()) {
-                Files.deleteIfExists(written.dratFile().get());
-            }
-            throw new IllegalStateException("The verifier rejected the certificate just written for n = " + n + " ("
-                    + firstFailure(report) + "); it was removed.");
-        }
-        listener.stage(n, verification.text());
-        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), verification, false,
-                CertificateFacts.read(file), report.millis());
+        MemberCertifier.Written w = (MemberCertifier.Written) outcome;
+        listener.stage(n, w.verification().text());
+        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), w.verification(), false,
+                w.facts(), w.verifyMillis());
     }
 
     /** The existing certificate as this run's result, when it verifies and matches the member. */
@@ -206,11 +210,6 @@ public final class FamilyRun {
         Files.deleteIfExists(file);
         listener.stage(n, reason);
         return new MemberResult.NoCore(n, elements, rank, reason);
-    }
-
-    private static String firstFailure(Report report) {
-        return report.checks().stream().filter(c -> c.status() == Report.Status.FAIL)
-                .map(c -> c.name() + ": " + c.detail()).findFirst().orElse("no check failed");
     }
 
     private static RuntimeException rethrow(Throwable cause) throws IOException {

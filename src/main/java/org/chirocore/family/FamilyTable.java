@@ -151,6 +151,7 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
         return Json.Obj.builder()
                 .put("family", family.name())
                 .put("definition", family.source())
+                .put("definitionSha256", family.sha256())
                 .put("description", family.description())
                 .put("field", family.field().name())
                 .put("contractPulled", family.contractPulled())

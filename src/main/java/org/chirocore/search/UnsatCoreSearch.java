@@ -215,61 +215,27 @@ public final class UnsatCoreSearch implements CoreSearch {
         return next;
     }
 
+    /** One {@link MinimalityProof} over the elements of {@code m} in a seeded order. */
     private Pass minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
         List<Integer> order = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
         }
         Collections.shuffle(order, run.random);
-        Chirotope[] deletion = new Chirotope[m.size()];
-        Chirotope[] contraction = new Chirotope[m.size()];
-        List<Operation> phases = settings.strategy() == Strategy.CONTRACT_FIRST
-                ? List.of(Operation.CONTRACTION, Operation.DELETION)
-                : List.of(Operation.DELETION, Operation.CONTRACTION);
-        long all = ElementSets.allMask(m.size());
-        for (Operation op : phases) {
-            for (int e : order) {
-                int[] single = {e};
-                int[] rest = ElementSets.elements(all & ~(1L << e));
-                boolean loop = m.rank(single) == 0;
-                boolean coloop = m.rank(rest) < m.rank();
-                progress.report((op == Operation.DELETION ? "deleting " : "contracting ") + m.labels().get(e),
-                        m.size(), m.rank(), run.decisions);
-                if (op == Operation.DELETION && !coloop) {
-                    OrientationSession.Outcome o = session.solve(all & ~(1L << e));
-                    run.decisions++;
-                    if (o instanceof OrientationSession.OutOfBudget b) {
-                        return new NoAnswer(b.reason());
-                    }
-                    if (o instanceof OrientationSession.Unsatisfiable u) {
-                        return new Shrunk(restrict(m, u.needed(), run));
-                    }
-                    Chirotope w = session.index().chirotope(((OrientationSession.Satisfiable) o).signs(), all & ~(1L << e));
-                    deletion[e] = WitnessCheck.checked(new Minor(m, new int[0], single), w);
-                } else if (op == Operation.CONTRACTION && !loop) {
-                    ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, single, new int[0]));
-                    Orientability answer = new LazySatDecider(settings.budget()).decide(minor);
-                    run.decisions++;
-                    if (answer instanceof Orientability.Unknown u) {
-                        return new NoAnswer(u.reason());
-                    }
-                    if (answer instanceof Orientability.NonOrientable) {
-                        run.contracted.add(m.labels().get(e));
-                        return new Shrunk(minor);
-                    }
-                    contraction[e] = ((Orientability.Orientable) answer).witness();
-                }
-            }
+        MinimalityProof proof = new MinimalityProof(settings.budget(), settings.strategy(), progress);
+        MinimalityProof.Result result = proof.check(m, session, order);
+        run.decisions += proof.decisions();
+        if (result instanceof MinimalityProof.Unknown u) {
+            return new NoAnswer(u.reason());
         }
-        List<MinorWitness> witnesses = new ArrayList<>();
-        for (int e = 0; e < m.size(); e++) {
-            // For a loop or a coloop, M\e = M/e, so one witness serves both ([Ox, §3.1]).
-            Chirotope del = deletion[e] != null ? deletion[e] : contraction[e];
-            Chirotope con = contraction[e] != null ? contraction[e] : deletion[e];
-            witnesses.add(new MinorWitness(m.labels().get(e), Operation.DELETION, del));
-            witnesses.add(new MinorWitness(m.labels().get(e), Operation.CONTRACTION, con));
+        if (result instanceof MinimalityProof.NonOrientableDeletion d) {
+            return new Shrunk(restrict(m, d.needed(), run));
         }
-        return new Minimal(witnesses);
+        if (result instanceof MinimalityProof.NonOrientableContraction c) {
+            run.contracted.add(m.labels().get(c.element()));
+            return new Shrunk(c.minor());
+        }
+        return new Minimal(((MinimalityProof.Minimal) result).witnesses());
     }
 
     /** Re-derives the core as M/C\D from the input and the recorded path, and insists it is the same. */

@@ -42,4 +42,49 @@ class FamilyCommandTest {
         assertTrue(run.err().contains("--n must be A..B"), run.err());
         assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "2..4", "--out", dir.toString()).exit());
     }
+
+    @Test
+    void exploresWithFiltersAndRejectsFiltersWithoutExplore() {
+        Path out = dir.resolve("explore");
+        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--explore", "2", "--keep", "000,001",
+                "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("n = 3: 1 class of cores, 0 of 2 runs"), run.out());
+        assertTrue(Files.exists(out.resolve("n=3.core-1.cert.json")) && Files.exists(out.resolve("explore.json")));
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3", "--keep", "000", "--out",
+                out.toString()).exit());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--explore", "1", "--keep", "000",
+                "--out", out.toString()).exit());
+    }
+
+    @Test
+    void predictsTheKnownCores() {
+        Path out = dir.resolve("predict");
+        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--predict", "families/corner.predict.json",
+                "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases; verified"),
+                run.out());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--predict",
+                "families/corner.predict.json", "--out", out.toString()).exit());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3", "--predict",
+                "families/corner.predict.json", "--threads", "2", "--out", out.toString()).exit());
+    }
+
+    @Test
+    void shardsAndMerges() {
+        for (int i = 0; i < 2; i++) {
+            CliRun shard = CliRun.of("family", "families/corner.json", "--n", "3..4", "--shard", i + "/2", "--out",
+                    dir.resolve("s" + i).toString());
+            assertEquals(0, shard.exit(), shard.err());
+        }
+        CliRun merge = CliRun.of("family-merge", "families/corner.json", dir.resolve("s0").toString(),
+                dir.resolve("s1").toString(), "--out", dir.resolve("m").toString());
+        assertEquals(0, merge.exit(), merge.err());
+        assertTrue(merge.out().contains("merged 2 members from 2 shards"), merge.out());
+        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--shard", "2/2", "--out",
+                dir.resolve("x").toString()).exit());
+        assertEquals(2, CliRun.of("family-merge", "families/corner-uncontracted.json", dir.resolve("s0").toString(),
+                "--out", dir.resolve("m2").toString()).exit());
+    }
 }

@@ -132,7 +132,7 @@ class FamilyDefinitionTest {
         gf5.build(5);
         FamilyException e = assertThrows(FamilyException.class,
                 () -> new FamilyDefinition(gf5.source(), gf5.name(), gf5.description(), gf5.field(), gf5.hyperplane(),
-                        gf5.pulled(), true, 3, 6).build(6));
+                        gf5.pulled(), true, 3, 6, gf5.sha256()).build(6));
         assertTrue(e.getMessage().startsWith("families/corner-gf5.json: hyperplane at n = 6: ")
                 && e.getMessage().contains("111111 lies in its closure"), e.getMessage());
     }

@@ -1,0 +1,251 @@
+package org.chirocore.family;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+
+import org.chirocore.io.Json;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Matroid;
+import org.chirocore.matroid.Minor;
+import org.chirocore.orient.Budget;
+import org.chirocore.orient.LazySatDecider;
+import org.chirocore.orient.Orientability;
+import org.chirocore.search.MinimalCore;
+import org.chirocore.search.MinimalityProof;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.SearchStats;
+import org.chirocore.search.Strategy;
+
+/**
+ * Checks a predicted core of each member of a family without searching: the prediction names,
+ * per n, the core's vertices S(n) and a contraction set C(n) (file format in docs/families.md);
+ * the candidate is M/C restricted to S, where M is the member. It is decided non-orientable, then
+ * checked minor-minimal directly by {@link MinimalityProof} (every single-element deletion and
+ * contraction orientable, with witnesses), and only then certified into
+ * {@code n=K.predicted.cert.json} and verified. Cost per n: building M/C on S (|S| rank
+ * queries of M per r-subset), one orientability decision, up to 2|S| more, and the certification.
+ */
+public final class FamilyPrediction {
+    private static final List<String> FIELDS = List.of("family", "members");
+    private static final List<String> MEMBER_FIELDS = List.of("n", "core", "contract");
+
+    /**
+     * The predicted candidate at one n.
+     *
+     * @param core vertex rules for S(n), the candidate's elements
+     * @param contract vertex rules for C(n), the elements contracted
+     */
+    public record Candidate(List<VertexRule> core, List<VertexRule> contract) {
+        public Candidate {
+            core = List.copyOf(core);
+            contract = List.copyOf(contract);
+        }
+    }
+
+    /**
+     * A prediction file.
+     *
+     * @param source the file name, the prefix of every message
+     * @param family the name of the family it predicts
+     * @param candidates the candidate for each n it covers
+     */
+    public record Prediction(String source, String family, Map<Integer, Candidate> candidates) {
+        public Prediction {
+            candidates = Map.copyOf(candidates);
+        }
+
+        /**
+         * Reads the prediction in {@code file}.
+         *
+         * @throws FamilyException naming the file and the offending member
+         */
+        public static Prediction read(Path file) {
+            String source = file.toString();
+            try {
+                Json.Obj o = Json.parseUtf8(Files.readAllBytes(file)).asObject("the prediction");
+                o.requireOnly(FIELDS);
+                Map<Integer, Candidate> candidates = new TreeMap<>();
+                Json.Arr members = o.requireArray("members");
+                for (int k = 0; k < members.size(); k++) {
+                    Json.Obj m = members.get(k).asObject("members[" + k + "]");
+                    m.requireOnly(MEMBER_FIELDS);
+                    int n = m.requireInt("n");
+                    Candidate c = new Candidate(rules(m.requireArray("core"), "members[" + k + "].core"),
+                            rules(m.requireArray("contract"), "members[" + k + "].contract"));
+                    if (candidates.put(n, c) != null) {
+                        throw new FamilyException(source + ": members[" + k + "]: n = " + n + " is predicted twice.");
+                    }
+                }
+                return new Prediction(source, o.requireString("family"), candidates);
+            } catch (IOException e) {
+                throw new FamilyException(source + ": cannot read the file: " + e.getMessage(), e);
+            } catch (FamilyException e) {
+                throw e;
+            } catch (IllegalArgumentException e) {
+                throw new FamilyException(source + ": " + e.getMessage(), e);
+            }
+        }
+
+        private static List<VertexRule> rules(Json.Arr items, String where) {
+            List<VertexRule> rules = new ArrayList<>();
+            for (int k = 0; k < items.size(); k++) {
+                String text = items.get(k).asString(where + "[" + k + "]");
+                try {
+                    rules.add(VertexRule.parse(text));
+                } catch (IllegalArgumentException e) {
+                    throw new IllegalArgumentException(where + "[" + k + "]: " + e.getMessage(), e);
+                }
+            }
+            return rules;
+        }
+    }
+
+    /** What the check found at one n. */
+    public sealed interface Outcome {
+        /** The cube dimension. */
+        int n();
+    }
+
+    /**
+     * The candidate is a minimal non-orientable core; its certificate was written and verified.
+     *
+     * @param certificate the file name in the output directory
+     * @param facts what it states, read back
+     */
+    public record Confirmed(int n, String certificate, CertificateFacts facts) implements Outcome {
+    }
+
+    /**
+     * The candidate is not a minimal non-orientable core.
+     *
+     * @param reason "orientable", or which single-element minor is non-orientable
+     */
+    public record Refuted(int n, String reason) implements Outcome {
+    }
+
+    /** A budget ran out; nothing is claimed. */
+    public record Unknown(int n, String reason) implements Outcome {
+    }
+
+    private final FamilyDefinition family;
+    private final Prediction prediction;
+    private final Path dir;
+    private final Budget budget;
+
+    /** A check of {@code prediction} for {@code family}, writing certificates into {@code dir}. */
+    public FamilyPrediction(FamilyDefinition family, Prediction prediction, Path dir, Budget budget) {
+        this.family = family;
+        this.prediction = prediction;
+        this.dir = dir;
+        this.budget = budget;
+    }
+
+    /** The certificate's file name of a confirmed prediction at n: {@code n=K.predicted.cert.json}. */
+    public static String certificateName(int n) {
+        return "n=" + n + ".predicted.cert.json";
+    }
+
+    /**
+     * Checks the prediction at every n of {@code from..to}.
+     *
+     * @throws FamilyException when the prediction is for another family, misses an n, names a
+     *     vertex that is not an element of the member, or names one twice
+     * @throws IOException when a certificate cannot be written
+     */
+    public List<Outcome> run(int from, int to) throws IOException {
+        if (!prediction.family().equals(family.name())) {
+            throw new FamilyException(prediction.source() + ": predicts the family \"" + prediction.family()
+                    + "\", not \"" + family.name() + "\".");
+        }
+        List<FamilyDefinition.Member> members = new ArrayList<>();
+        for (int n = from; n <= to; n++) {
+            if (!prediction.candidates().containsKey(n)) {
+                throw new FamilyException(prediction.source() + ": predicts no core at n = " + n + ".");
+            }
+            members.add(family.build(n));
+        }
+        Files.createDirectories(dir);
+        List<Outcome> outcomes = new ArrayList<>();
+        for (FamilyDefinition.Member m : members) {
+            outcomes.add(check(m, prediction.candidates().get(m.construction().n())));
+        }
+        return outcomes;
+    }
+
+    private Outcome check(FamilyDefinition.Member member, Candidate candidate) throws IOException {
+        int n = member.construction().n();
+        Matroid m = member.matroid();
+        List<String> core = labels(candidate.core(), n, m, "core");
+        List<String> contract = labels(candidate.contract(), n, m, "contract");
+        Set<String> used = new HashSet<>(core);
+        for (String c : contract) {
+            if (!used.add(c)) {
+                throw new FamilyException(prediction.source() + ": at n = " + n + " the vertex " + c
+                        + " is both in the core and contracted.");
+            }
+        }
+        List<String> deleted = m.labels().stream().filter(l -> !used.contains(l)).toList();
+        ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, indices(m, contract), indices(m, deleted)));
+        Orientability answer = new LazySatDecider(budget).decide(minor);
+        if (answer instanceof Orientability.Unknown u) {
+            return new Unknown(n, u.reason());
+        }
+        if (answer instanceof Orientability.Orientable) {
+            return new Refuted(n, "the predicted minor is orientable");
+        }
+        MinimalityProof.Result proof = MinimalityProof.check(minor, budget);
+        if (proof instanceof MinimalityProof.Unknown u) {
+            return new Unknown(n, u.reason());
+        }
+        if (proof instanceof MinimalityProof.NonOrientableDeletion d) {
+            return new Refuted(n, "not minimal: deleting " + minor.labels().get(d.element()) + " leaves a "
+                    + "non-orientable minor");
+        }
+        if (proof instanceof MinimalityProof.NonOrientableContraction c) {
+            return new Refuted(n, "not minimal: contracting " + minor.labels().get(c.element()) + " leaves a "
+                    + "non-orientable minor");
+        }
+        // the minimality check's order is the element order, contractions first; seed 0 stands for it
+        MinimalCore found = new MinimalCore(minor, contract, deleted, ((MinimalityProof.Minimal) proof).witnesses(),
+                new SearchSettings(0, Strategy.CONTRACT_FIRST, budget), new SearchStats(1 + 2 * minor.size(),
+                        minor.size(), 0));
+        String name = certificateName(n);
+        MemberCertifier.Outcome written = MemberCertifier.certify(found, member.construction(), budget,
+                dir.resolve(name));
+        if (written instanceof MemberCertifier.OutOfBudget o) {
+            return new Unknown(n, "proving the core ran out of budget: " + o.reason());
+        }
+        return new Confirmed(n, name, ((MemberCertifier.Written) written).facts());
+    }
+
+    /** The labels of {@code rules} at n, each an element of {@code m}, none twice. */
+    private List<String> labels(List<VertexRule> rules, int n, Matroid m, String what) {
+        List<String> labels = new ArrayList<>();
+        for (VertexRule rule : rules) {
+            String label;
+            try {
+                label = rule.label(n);
+            } catch (IllegalArgumentException | ArithmeticException e) {
+                throw new FamilyException(prediction.source() + ": " + what + " \"" + rule.text() + "\" at n = " + n
+                        + ": " + e.getMessage(), e);
+            }
+            if (!m.labels().contains(label) || labels.contains(label)) {
+                throw new FamilyException(prediction.source() + ": " + what + " at n = " + n + ": the vertex " + label
+                        + (labels.contains(label) ? " is named twice." : " is not an element of the member."));
+            }
+            labels.add(label);
+        }
+        return labels;
+    }
+
+    private static int[] indices(Matroid m, List<String> labels) {
+        return labels.stream().mapToInt(l -> m.labels().indexOf(l)).sorted().toArray();
+    }
+}
