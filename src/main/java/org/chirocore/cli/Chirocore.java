@@ -13,7 +13,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "chirocore", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Orientability of matroids and minor-minimal non-orientable minors of pulled affine cubes.",
         subcommands = {OrientCommand.class, ReduceCommand.class, VerifyCommand.class, ExportCommand.class,
-                CubeCommand.class, BenchCommand.class, FamilyCommand.class,
+                CubeCommand.class, BenchCommand.class, FamilyCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
@@ -53,6 +53,6 @@ public final class Chirocore implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "Missing command: use one of orient, reduce, verify, export, cube, bench, family.");
+                "Missing command: use one of orient, reduce, verify, export, cube, bench, family, report.");
     }
 }
