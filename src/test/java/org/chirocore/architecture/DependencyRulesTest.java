@@ -33,6 +33,9 @@ class DependencyRulesTest {
         "family, org.sat4j", "family, org.chirocore.cli",
         "matroid, org.chirocore.family", "orient, org.chirocore.family", "search, org.chirocore.family",
         "io, org.chirocore.family", "cert, org.chirocore.family", "check, org.chirocore.family",
+        "report, org.sat4j", "report, org.chirocore.cli", "report, org.chirocore.matroid", "report, org.chirocore.orient",
+        "report, org.chirocore.search", "report, org.chirocore.cert", "report, org.chirocore.family",
+        "check, org.chirocore.report", "family, org.chirocore.report",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));
