@@ -10,8 +10,8 @@ import java.util.List;
  * deterministic). Cost: O(k² · L · k) per improving round for k points and L lines.
  */
 public final class ConfigurationPicture {
-    private static final int SIZE = 420;
-    private static final double RADIUS = 160;
+    private static final int SIZE = 480;
+    private static final double RADIUS = 150;
 
     private ConfigurationPicture() {
     }
@@ -35,8 +35,9 @@ public final class ConfigurationPicture {
         }
         for (int e = 0; e < k; e++) {
             svg.circle(xy[e][0], xy[e][1], 6, "point", "black", "white");
-            double[] label = point(position[e], k, RADIUS + 22);
-            svg.text(label[0], label[1] + 4, core.labels().get(e), "middle", 13);
+            double[] label = point(position[e], k, RADIUS + 14);
+            double side = label[0] - SIZE / 2.0;
+            svg.text(label[0], label[1] + 4, core.labels().get(e), side > 20 ? "start" : side < -20 ? "end" : "middle", 13);
         }
         String caption = "The core as a configuration of " + k + " points and " + lines.size()
                 + " lines (each line drawn through its points; points on a circle only for layout).";
