@@ -16,6 +16,8 @@ import org.chirocore.report.ReportFormat;
 import org.chirocore.report.ReportWriter;
 
 import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -61,7 +63,7 @@ final class ReportCommand implements Callable<Integer> {
     }
 
     /** Parses md, tex or html, case-insensitively. */
-    static final class FormatConverter implements picocli.CommandLine.ITypeConverter<ReportFormat> {
+    static final class FormatConverter implements ITypeConverter<ReportFormat> {
         @Override
         public ReportFormat convert(String value) {
             for (ReportFormat f : ReportFormat.values()) {
@@ -69,7 +71,7 @@ final class ReportCommand implements Callable<Integer> {
                     return f;
                 }
             }
-            throw new picocli.CommandLine.TypeConversionException("unknown format \"" + value + "\": use "
+            throw new TypeConversionException("unknown format \"" + value + "\": use "
                     + List.of(ReportFormat.values()).stream().map(ReportFormat::extension).collect(Collectors.joining(", ")));
         }
     }

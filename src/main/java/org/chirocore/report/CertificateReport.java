@@ -107,6 +107,7 @@ public final class CertificateReport {
             items.add(List.of(new Text("H, a hyperplane, by its vertices: "), new Mono(String.join(" ", c.hyperplane()))));
             items.add(List.of(new Text("O, the vertex pulled to H: "), new Mono(c.pulled()),
                     new Text(c.contractPulled() ? "; O is contracted after pulling" : "; O is not contracted")));
+            items.add(List.of(new Text("the pulled matroid: its bases are the bases of the cube not contained in the set of H's vertices and O")));
             items.add(path("C (contracted)", c.contracted()));
             items.add(path("D (deleted)", c.deleted()));
             items.add(List.of(new Text("M is the pulled matroid" + (c.contractPulled() ? " contracted by O" : "") + ", then /C\\D")));

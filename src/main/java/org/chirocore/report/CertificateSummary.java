@@ -74,7 +74,11 @@ public record CertificateSummary(String file, String contentSha256, String fileS
         long[] masks = new long[bases.size()];
         for (int i = 0; i < masks.length; i++) {
             for (Json e : bases.get(i).asArray("core.bases[" + i + "]").elements()) {
-                masks[i] |= 1L << e.asInt("an element of core.bases[" + i + "]");
+                int element = e.asInt("an element of core.bases[" + i + "]");
+                if (element < 0 || element >= Long.SIZE) {
+                    throw new IllegalArgumentException("core.bases[" + i + "] names element " + element + ", not in 0..63");
+                }
+                masks[i] |= 1L << element;
             }
         }
         return new Core(core.requireInt("rank"), labels, masks);

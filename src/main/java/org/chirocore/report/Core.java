@@ -23,11 +23,18 @@ public final class Core {
     /**
      * The matroid of rank {@code rank} on the elements {@code labels} with the given bases.
      *
-     * @throws IllegalArgumentException when there are more than 64 elements
+     * @param bases the bases as bit masks over the elements
+     * @throws IllegalArgumentException when there are more than 64 elements or a basis names an
+     *     element beyond them
      */
     public Core(int rank, List<String> labels, long[] bases) {
         if (labels.size() > 64) {
             throw new IllegalArgumentException("A core has at most 64 elements, found " + labels.size() + ".");
+        }
+        for (long b : bases) {
+            if (labels.size() < 64 && b >>> labels.size() != 0) {
+                throw new IllegalArgumentException("A basis names an element beyond the " + labels.size() + " elements.");
+            }
         }
         this.rank = rank;
         this.labels = List.copyOf(labels);
@@ -51,11 +58,6 @@ public final class Core {
     /** The number of bases. */
     public int basisCount() {
         return bases.size();
-    }
-
-    /** Whether the set {@code mask} is a basis. */
-    public boolean isBasis(long mask) {
-        return bases.contains(mask);
     }
 
     /** C(k, r), the number of r-subsets of the k elements, saturated at {@code Long.MAX_VALUE}. */

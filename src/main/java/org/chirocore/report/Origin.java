@@ -22,6 +22,8 @@ public sealed interface Origin permits Origin.Construction, Origin.Given {
      * @param hyperplane the labels of H's vertices
      * @param pulled the label of O
      * @param contractPulled whether O is contracted before the path
+     * @param contracted the labels of C
+     * @param deleted the labels of D
      */
     record Construction(int cube, String field, List<String> hyperplane, String pulled, boolean contractPulled,
             List<String> contracted, List<String> deleted) implements Origin {
@@ -38,6 +40,8 @@ public sealed interface Origin permits Origin.Construction, Origin.Given {
      * @param sha256 the input file's SHA-256
      * @param elements its number of elements
      * @param rank its rank
+     * @param contracted the labels of C
+     * @param deleted the labels of D
      */
     record Given(String sha256, int elements, int rank, List<String> contracted, List<String> deleted) implements Origin {
         public Given {

@@ -70,7 +70,7 @@ public enum ReportFormat {
 
         @Override
         String mono(String text) {
-            return "`" + text + "`";
+            return text.contains("`") ? "`` " + text + " ``" : "`" + text + "`";
         }
     },
     /**
