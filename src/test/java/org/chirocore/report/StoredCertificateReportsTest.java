@@ -97,6 +97,14 @@ class StoredCertificateReportsTest {
     }
 
     @Test
+    void givenMatroidWithTheWrongInputGetsNoReport() {
+        Path wrong = STORED.resolve("inputs/fano-dual.json");
+        ReportException e = assertThrows(ReportException.class,
+                () -> CertificateReport.of(STORED.resolve("fano.cert.json"), Optional.of(wrong)));
+        assertTrue(e.getMessage().contains("provenance"), e.getMessage());
+    }
+
+    @Test
     void constructionNamesItsCubeAndDrawsIt() {
         Document doc = CertificateReport.of(STORED.resolve("corner-n4.cert.json"), Optional.empty());
         String md = ReportFormat.MD.render(doc, "r").text();
