@@ -14,7 +14,7 @@ import picocli.CommandLine.Spec;
         description = "Orientability of matroids and minor-minimal non-orientable minors of pulled affine cubes.",
         subcommands = {OrientCommand.class, ReduceCommand.class, VerifyCommand.class, ExportCommand.class,
                 CubeCommand.class, BenchCommand.class, FamilyCommand.class, FamilyMergeCommand.class,
-                ExplainCommand.class,
+                ExplainCommand.class, ReportCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
@@ -54,6 +54,7 @@ public final class Chirocore implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
-                "Missing command: use one of orient, reduce, verify, export, cube, bench, family, family-merge, explain.");
+                "Missing command: use one of orient, reduce, verify, export, cube, bench, family, family-merge, explain, "
+                        + "report.");
     }
 }

@@ -1,0 +1,99 @@
+package org.chirocore.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
+
+import org.chirocore.report.CertificateReport;
+import org.chirocore.report.Document;
+import org.chirocore.report.FamilyReport;
+import org.chirocore.report.ReportException;
+import org.chirocore.report.ReportFormat;
+import org.chirocore.report.ReportWriter;
+
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.TypeConversionException;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code chirocore report}: writes a report on a verified certificate, or on a family run, in
+ * Markdown, LaTeX or HTML (docs/reports.md).
+ */
+@Command(name = "report", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = {"Write a report for a paper on a certificate (only if it verifies) or on a family run directory: "
+                + "the statement, the construction, the core, the proof's size, the hashes and the verify command."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:report written",
+                "2:bad usage, an unknown format, or a certificate that does not verify"})
+final class ReportCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @ArgGroup(multiplicity = "1")
+    private Subject subject;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "md", converter = FormatConverter.class,
+            description = "md, tex or html (default: ${DEFAULT-VALUE}).")
+    private ReportFormat format;
+
+    @Option(names = "--out", paramLabel = "FILE", required = true, description = "The report file; a Markdown report's "
+            + "pictures go beside it as FILE-STEM-NAME.svg.")
+    private Path out;
+
+    @Option(names = "--input", paramLabel = "FILE", description = "The matroid file of a given-matroid provenance: "
+            + "the provenance is verified too and the file is named in the verify command.")
+    private Path input;
+
+    /** What the report is about: one certificate or one family run. */
+    static final class Subject {
+        @Parameters(paramLabel = "CERT", description = "A certificate file.")
+        private Path certificate;
+
+        @Option(names = "--family", paramLabel = "DIR", description = "A family run directory (with table.json).")
+        private Path family;
+    }
+
+    /** Parses md, tex or html, case-insensitively. */
+    static final class FormatConverter implements ITypeConverter<ReportFormat> {
+        @Override
+        public ReportFormat convert(String value) {
+            for (ReportFormat f : ReportFormat.values()) {
+                if (f.extension().equalsIgnoreCase(value)) {
+                    return f;
+                }
+            }
+            throw new TypeConversionException("unknown format \"" + value + "\": use "
+                    + List.of(ReportFormat.values()).stream().map(ReportFormat::extension).collect(Collectors.joining(", ")));
+        }
+    }
+
+    @Override
+    public Integer call() {
+        if (subject.family != null && input != null) {
+            throw new BadInputException("--input applies to a certificate, not to --family", null);
+        }
+        if (subject.family != null && !Files.isDirectory(subject.family)) {
+            throw new BadInputException(subject.family + ": not an existing directory", null);
+        }
+        try {
+            Document doc = subject.family != null ? FamilyReport.of(subject.family)
+                    : CertificateReport.of(subject.certificate, Optional.ofNullable(input));
+            List<Path> written = ReportWriter.write(doc, format, out);
+            spec.commandLine().getOut().println("wrote " + written.stream().map(Path::toString).collect(Collectors.joining(", ")));
+        } catch (ReportException e) {
+            throw new BadInputException(e.getMessage(), e);
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot be written: " + e, e);
+        }
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,56 @@
+package org.chirocore.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code chirocore report}: writes reports, and refuses bad formats and unverifiable certificates with exit 2. */
+class ReportCommandTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void writesAnHtmlReport() throws IOException {
+        Path out = dir.resolve("fano.html");
+        CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--format", "html", "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(Files.readString(out).startsWith("<!DOCTYPE html>"));
+        assertTrue(run.out().contains("wrote " + out), run.out());
+    }
+
+    @Test
+    void writesAFamilyReport() {
+        CliRun run = CliRun.of("report", "--family", "families/corner", "--out", dir.resolve("corner.md").toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(Files.exists(dir.resolve("corner-time.svg")));
+    }
+
+    @Test
+    void unknownFormatIsBadUsage() {
+        CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--format", "pdf", "--out", dir.resolve("x").toString());
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+        assertTrue(run.err().contains("unknown format \"pdf\""), run.err());
+    }
+
+    @Test
+    void unverifiableCertificateIsRefused() throws IOException {
+        Path bad = dir.resolve("bad.cert.json");
+        Files.writeString(bad, Files.readString(Path.of("certificates/fano.cert.json")).replace("\"3057a6", "\"4057a6"));
+        CliRun run = CliRun.of("report", bad.toString(), "--out", dir.resolve("bad.md").toString());
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+        assertTrue(run.err().contains("does not verify"), run.err());
+        assertTrue(Files.notExists(dir.resolve("bad.md")));
+    }
+
+    @Test
+    void certificateAndFamilyAreExclusive() {
+        CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--family", "families/corner", "--out", "x.md");
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+    }
+}

@@ -1,0 +1,116 @@
+package org.chirocore.report;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/** The core's geometry and the SVG pictures drawn from it. */
+class PicturesTest {
+    /** The Fano plane F7 as stored in certificates/fano.cert.json (from certificates/inputs/fano.json). */
+    private static Core fano() {
+        return CertificateSummary.read(Path.of("certificates/fano.cert.json")).core();
+    }
+
+    @Test
+    void fanoPlaneHasSevenLinesOfThreePoints() {
+        List<Long> lines = fano().lines();
+        assertEquals(7, lines.size());
+        assertTrue(lines.stream().allMatch(l -> Long.bitCount(l) == 3), lines.toString());
+        assertEquals(lines, fano().nonBases().orElseThrow(), "in F7 the non-bases are exactly the lines");
+    }
+
+    @Test
+    void fanoDrawingHasSevenPointsAndSevenLines() {
+        String svg = ConfigurationPicture.of(fano()).svg();
+        assertEquals(7, count(svg, "class=\"point\""));
+        assertEquals(7, count(svg, "class=\"line\""));
+        assertTrue(svg.contains(">a</text>") && svg.contains(">g</text>"), "points are labelled");
+    }
+
+    @Test
+    void linesOfAG23MinusAPointIncludeTwoPointLinesOnlyAsNonLines() {
+        Core core = CertificateSummary.read(Path.of("certificates/ag23-minus-point.cert.json")).core();
+        // AG(2,3) has 12 lines of 3 points; deleting a point leaves the 8 lines that avoid it.
+        assertEquals(8, core.lines().size());
+        assertEquals(8, core.nonBasisCount());
+    }
+
+    @Test
+    void nonBasesAreNotListedBeyondTheLimit() {
+        Core core = fano();
+        assertEquals(Optional.empty(), core.nonBases(34));
+        assertEquals(7, core.nonBases(35).orElseThrow().size());
+    }
+
+    @Test
+    void linesNeedRankThree() {
+        Core dual = CertificateSummary.read(Path.of("certificates/fano-dual.cert.json")).core();
+        assertThrows(IllegalStateException.class, dual::lines);
+    }
+
+    @ParameterizedTest(name = "n = {0}")
+    @ValueSource(ints = {1, 2, 3, 4, 5})
+    void cubeVerticesAreDrawnApart(int n) {
+        double[][] xy = CubePicture.layout(n);
+        for (int a = 0; a < xy.length; a++) {
+            for (int b = a + 1; b < xy.length; b++) {
+                double d = Math.hypot(xy[a][0] - xy[b][0], xy[a][1] - xy[b][1]);
+                assertTrue(d > 8, CubePicture.label(a, n) + " and " + CubePicture.label(b, n) + " are " + d + " apart");
+            }
+        }
+    }
+
+    @Test
+    void cornerCubeMarksHMinusHOAndTheCore() {
+        CertificateSummary s = CertificateSummary.read(Path.of("certificates/corner-n3.cert.json"));
+        String svg = CubePicture.of((Origin.Construction) s.origin(), s.core().labels()).svg();
+        // 8 vertices, 12 edges; H = the 3 unit vectors, -H = the 3 vertices of weight 2, O = 111;
+        // each legend entry adds one more mark of its kind.
+        assertAll(
+                () -> assertEquals(8, count(svg, "class=\"vertex\"")),
+                () -> assertEquals(12, count(svg, "class=\"edge\"")),
+                () -> assertEquals(3 + 1, count(svg, "class=\"h\"")),
+                () -> assertEquals(3 + 1, count(svg, "class=\"minus-h\"")),
+                () -> assertEquals(1 + 1, count(svg, "class=\"pulled\"")),
+                () -> assertEquals(s.core().labels().size() + 1, count(svg, "class=\"core\"")));
+    }
+
+    @Test
+    void cubesAboveFiveAreRefused() {
+        Origin.Construction six = new Origin.Construction(6, "Q", List.of(), "111111", true, List.of(), List.of());
+        assertThrows(IllegalArgumentException.class, () -> CubePicture.of(six, List.of()));
+    }
+
+    @ParameterizedTest(name = "max {0}: step {1}")
+    @CsvSource({"1, 1", "8, 1", "9, 2", "16, 2", "17, 5", "40, 5", "41, 10", "800, 100", "801, 200"})
+    void chartStepsAreNice(long max, long step) {
+        assertEquals(step, LineChart.niceStep(max));
+    }
+
+    @Test
+    void chartHasAxesTicksAndALegendForSeveralSeries() {
+        String svg = LineChart.of("t", "T", "n", "ms", List.of(
+                new LineChart.Series("a", List.of(new long[] {3, 10}, new long[] {4, 25})),
+                new LineChart.Series("b", List.of(new long[] {3, 5}, new long[] {4, 7})))).svg();
+        assertAll(
+                () -> assertEquals(2, count(svg, "class=\"axis\"")),
+                () -> assertEquals(2 + 6, count(svg, "class=\"tick\""), "x ticks 3, 4; y ticks 0, 5, ..., 25"),
+                () -> assertEquals(2, count(svg, "class=\"series\"")),
+                () -> assertEquals(2, count(svg, "class=\"key\"")));
+    }
+
+    private static int count(String text, String part) {
+        return text.split(Pattern.quote(part), -1).length - 1;
+    }
+}
