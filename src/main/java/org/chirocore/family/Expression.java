@@ -3,8 +3,9 @@ package org.chirocore.family;
 import java.util.Set;
 
 /**
- * A tiny integer expression in the cube dimension {@code n} and the coordinate index {@code i}:
- * non-negative integer literals, the two variables, {@code + - *}, unary minus and parentheses,
+ * A tiny integer expression in the cube dimension {@code n} and one index variable: the coordinate
+ * index {@code i} in a hyperplane's normal, or the bound variable {@code k} of a generator in a
+ * prediction rule ({@link SetRule}). Non-negative integer literals, the two variables, {@code + - *}, floor division {@code /}, unary minus and parentheses,
  * with the usual precedence. Parsed by recursive descent; evaluated exactly in 64-bit integers
  * with every operation checked, so an overflow is an error, never a wrong value. Immutable.
  *
@@ -13,9 +14,10 @@ import java.util.Set;
 public sealed interface Expression {
 
     /**
-     * The value at cube dimension {@code n} and coordinate {@code i} (1-based).
+     * The value at cube dimension {@code n} and index {@code i} (the coordinate, 1-based, or the
+     * generator's {@code k}).
      *
-     * @throws ArithmeticException when an intermediate value overflows a long
+     * @throws ArithmeticException when an intermediate value overflows a long, or on division by zero
      */
     long value(int n, int i);
 
@@ -27,7 +29,7 @@ public sealed interface Expression {
         }
     }
 
-    /** The variable {@code n} or {@code i}. */
+    /** The variable {@code n}, or the index variable ({@code i} or {@code k}). */
     record Variable(char name) implements Expression {
         @Override
         public long value(int n, int i) {
@@ -35,7 +37,7 @@ public sealed interface Expression {
         }
     }
 
-    /** {@code left op right} for op one of {@code + - *}. */
+    /** {@code left op right} for op one of {@code + - * /}; {@code /} rounds towards minus infinity. */
     record Binary(char op, Expression left, Expression right) implements Expression {
         @Override
         public long value(int n, int i) {
@@ -44,6 +46,7 @@ public sealed interface Expression {
             return switch (op) {
                 case '+' -> Math.addExact(a, b);
                 case '-' -> Math.subtractExact(a, b);
+                case '/' -> Math.floorDiv(a, b);
                 default -> Math.multiplyExact(a, b);
             };
         }
@@ -60,7 +63,7 @@ public sealed interface Expression {
     /**
      * Parses {@code text}, allowing only the listed variables.
      *
-     * @param variables the variable names allowed, a subset of {n, i}
+     * @param variables the variable names allowed: {@code n} and at most one index variable
      * @throws IllegalArgumentException with a sentence naming the text, the position (1-based)
      *     and what was expected there
      */

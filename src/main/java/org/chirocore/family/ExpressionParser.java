@@ -4,7 +4,7 @@ import java.util.Set;
 
 /**
  * Recursive descent for {@link Expression}: expression = term {("+" | "-") term}; term = factor
- * {"*" factor}; factor = integer | variable | "(" expression ")" | "-" factor. Spaces are
+ * {("*" | "/") factor}; factor = integer | variable | "(" expression ")" | "-" factor. Spaces are
  * ignored between tokens.
  */
 final class ExpressionParser {
@@ -21,7 +21,7 @@ final class ExpressionParser {
         Expression e = expression();
         skipSpaces();
         if (pos < text.length()) {
-            throw error("an operator (+, -, *) or the end");
+            throw error("an operator (+, -, *, /) or the end");
         }
         return e;
     }
@@ -37,9 +37,9 @@ final class ExpressionParser {
 
     private Expression term() {
         Expression e = factor();
-        while (peek() == '*') {
-            pos++;
-            e = new Expression.Binary('*', e, factor());
+        while (peek() == '*' || peek() == '/') {
+            char op = text.charAt(pos++);
+            e = new Expression.Binary(op, e, factor());
         }
         return e;
     }

@@ -33,16 +33,17 @@ import org.chirocore.search.Strategy;
  * queries of M per r-subset), one orientability decision, up to 2|S| more, and the certification.
  */
 public final class FamilyPrediction {
-    private static final List<String> FIELDS = List.of("family", "members");
+    private static final List<String> FIELDS = List.of("family", "members", "rule");
     private static final List<String> MEMBER_FIELDS = List.of("n", "core", "contract");
+    private static final List<String> RULE_FIELDS = List.of("range", "core", "contract");
 
     /**
-     * The predicted candidate at one n.
+     * The predicted candidate at one n, or at every n of a rule's range.
      *
-     * @param core vertex rules for S(n), the candidate's elements
-     * @param contract vertex rules for C(n), the elements contracted
+     * @param core set rules for S(n), the candidate's elements
+     * @param contract set rules for C(n), the elements contracted
      */
-    public record Candidate(List<VertexRule> core, List<VertexRule> contract) {
+    public record Candidate(List<SetRule> core, List<SetRule> contract) {
         public Candidate {
             core = List.copyOf(core);
             contract = List.copyOf(contract);
@@ -54,7 +55,8 @@ public final class FamilyPrediction {
      *
      * @param source the file name, the prefix of every message
      * @param family the name of the family it predicts
-     * @param candidates the candidate for each n it covers
+     * @param candidates the candidate for each n it covers: listed per n in {@code members}, or
+     *     one {@code rule} for every n of its range
      */
     public record Prediction(String source, String family, Map<Integer, Candidate> candidates) {
         public Prediction {
@@ -71,7 +73,28 @@ public final class FamilyPrediction {
             try {
                 Json.Obj o = Json.parseUtf8(Files.readAllBytes(file)).asObject("the prediction");
                 o.requireOnly(FIELDS);
+                if (o.has("members") == o.has("rule")) {
+                    throw new FamilyException(source + ": give either \"members\" (a core per n) or \"rule\" "
+                            + "(one core rule for a range of n), not " + (o.has("rule") ? "both." : "neither."));
+                }
                 Map<Integer, Candidate> candidates = new TreeMap<>();
+                if (o.has("rule")) {
+                    Json.Obj r = o.require("rule").asObject("rule");
+                    r.requireOnly(RULE_FIELDS);
+                    Json.Arr range = r.requireArray("range");
+                    int from = range.size() == 2 ? range.get(0).asInt("rule.range[0]") : 0;
+                    int to = range.size() == 2 ? range.get(1).asInt("rule.range[1]") : 0;
+                    if (range.size() != 2 || from < 1 || from > to || to > MAX_N) {
+                        throw new FamilyException(source + ": rule.range must be [a, b] with 1 <= a <= b <= "
+                                + MAX_N + ".");
+                    }
+                    Candidate c = new Candidate(rules(r.requireArray("core"), "rule.core"),
+                            rules(r.requireArray("contract"), "rule.contract"));
+                    for (int n = from; n <= to; n++) {
+                        candidates.put(n, c);
+                    }
+                    return new Prediction(source, o.requireString("family"), candidates);
+                }
                 Json.Arr members = o.requireArray("members");
                 for (int k = 0; k < members.size(); k++) {
                     Json.Obj m = members.get(k).asObject("members[" + k + "]");
@@ -93,12 +116,12 @@ public final class FamilyPrediction {
             }
         }
 
-        private static List<VertexRule> rules(Json.Arr items, String where) {
-            List<VertexRule> rules = new ArrayList<>();
+        private static List<SetRule> rules(Json.Arr items, String where) {
+            List<SetRule> rules = new ArrayList<>();
             for (int k = 0; k < items.size(); k++) {
                 String text = items.get(k).asString(where + "[" + k + "]");
                 try {
-                    rules.add(VertexRule.parse(text));
+                    rules.add(SetRule.parse(text));
                 } catch (IllegalArgumentException e) {
                     throw new IllegalArgumentException(where + "[" + k + "]: " + e.getMessage(), e);
                 }
@@ -133,6 +156,9 @@ public final class FamilyPrediction {
     /** A budget ran out; nothing is claimed. */
     public record Unknown(int n, String reason) implements Outcome {
     }
+
+    /** The largest n a rule's range may reach: vertices are enumerated as int bit patterns. */
+    private static final int MAX_N = 30;
 
     private final FamilyDefinition family;
     private final Prediction prediction;
@@ -182,15 +208,10 @@ public final class FamilyPrediction {
     private Outcome check(FamilyDefinition.Member member, Candidate candidate) throws IOException {
         int n = member.construction().n();
         Matroid m = member.matroid();
-        List<String> core = labels(candidate.core(), n, m, "core");
-        List<String> contract = labels(candidate.contract(), n, m, "contract");
+        List<String> core = labels(candidate.core(), n, m, "core", Set.of());
+        List<String> contract = labels(candidate.contract(), n, m, "contract", Set.copyOf(core));
         Set<String> used = new HashSet<>(core);
-        for (String c : contract) {
-            if (!used.add(c)) {
-                throw new FamilyException(prediction.source() + ": at n = " + n + " the vertex " + c
-                        + " is both in the core and contracted.");
-            }
-        }
+        used.addAll(contract);
         List<String> deleted = m.labels().stream().filter(l -> !used.contains(l)).toList();
         ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, indices(m, contract), indices(m, deleted)));
         Orientability answer = new LazySatDecider(budget).decide(minor);
@@ -225,22 +246,27 @@ public final class FamilyPrediction {
         return new Confirmed(n, name, ((MemberCertifier.Written) written).facts());
     }
 
-    /** The labels of {@code rules} at n, each an element of {@code m}, none twice. */
-    private List<String> labels(List<VertexRule> rules, int n, Matroid m, String what) {
+    /** The labels of {@code rules} at n, each an element of {@code m}, none twice, none in {@code kept}. */
+    private List<String> labels(List<SetRule> rules, int n, Matroid m, String what, Set<String> kept) {
         List<String> labels = new ArrayList<>();
-        for (VertexRule rule : rules) {
-            String label;
+        for (SetRule rule : rules) {
+            String where = prediction.source() + ": " + what + " \"" + rule.text() + "\" at n = " + n + ": ";
+            List<String> given;
             try {
-                label = rule.label(n);
+                given = rule.labels(n);
             } catch (IllegalArgumentException | ArithmeticException e) {
-                throw new FamilyException(prediction.source() + ": " + what + " \"" + rule.text() + "\" at n = " + n
-                        + ": " + e.getMessage(), e);
+                throw new FamilyException(where + e.getMessage(), e);
             }
-            if (!m.labels().contains(label) || labels.contains(label)) {
-                throw new FamilyException(prediction.source() + ": " + what + " at n = " + n + ": the vertex " + label
-                        + (labels.contains(label) ? " is named twice." : " is not an element of the member."));
+            for (String label : given) {
+                if (!m.labels().contains(label) || labels.contains(label)) {
+                    throw new FamilyException(where + "the vertex " + label + (labels.contains(label)
+                            ? " is named twice." : " is not an element of the member."));
+                }
+                if (kept.contains(label)) {
+                    throw new FamilyException(where + "the vertex " + label + " is both in the core and contracted.");
+                }
+                labels.add(label);
             }
-            labels.add(label);
         }
         return labels;
     }

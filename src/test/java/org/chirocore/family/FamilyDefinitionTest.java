@@ -33,14 +33,14 @@ class FamilyDefinitionTest {
     @ParameterizedTest(name = "{0} at n = {1}, i = {2} is {3}")
     @CsvSource(delimiter = ';', value = {
         "n - 1; 7; 0; 6", "2*i - 1; 4; 3; 5", "-(n - i) * 3 + 1; 5; 2; -8", "( n+1 )*(n-1); 4; 0; 15", "7; 9; 9; 7",
-        "n - i - 1; 5; 1; 3"})
+        "n - i - 1; 5; 1; 3", "(n-3)/2; 8; 0; 2", "-n/2; 5; 0; -3"})
     void expressionsEvaluateExactly(String text, int n, int i, long value) {
         assertEquals(value, Expression.parse(text, Set.of('n', 'i')).value(n, i));
     }
 
     @ParameterizedTest(name = "\"{0}\" is rejected")
     @CsvSource(delimiter = ';', value = {"n +; expected a number", "2 n; expected an operator", "(n; closing parenthesis",
-        "i; expected a number, n", "n / 2; found \"/\"", "; found the end"})
+        "i; expected a number, n", "n / ; found the end", "n % 2; found \"%\"", "; found the end"})
     void badExpressionsAreRejectedWithThePosition(String text, String message) {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> Expression.parse(text == null ? "" : text, Set.of('n')));

@@ -86,4 +86,43 @@ class FamilyPredictionTest {
         assertTrue(new HyperplaneIsomorphismInspector(c.facts().core(),
                 NamedMatroids.fano()).find().isPresent());
     }
+
+    @Test
+    void theShippedRuleIsConfirmedAtFiveAndSevenAndRefutedAtSix() throws IOException {
+        List<FamilyPrediction.Outcome> outcomes = check(Path.of("families/corner.rule.json"), 5, 7);
+        for (int k : new int[] {0, 2}) {
+            FamilyPrediction.Confirmed c = assertInstanceOf(FamilyPrediction.Confirmed.class, outcomes.get(k));
+            assertTrue(CertificateVerifier.verify(dir.resolve(c.certificate())).passed());
+            assertEquals(7, c.facts().core().size());
+        }
+        FamilyPrediction.Refuted six = assertInstanceOf(FamilyPrediction.Refuted.class, outcomes.get(1));
+        assertEquals("the predicted minor is orientable", six.reason());
+    }
+
+    @Test
+    void badRulesNameTheFileTheRuleAndN() throws IOException {
+        Path outside = write("{\"family\": \"corner\", \"rule\": {\"range\": [3, 4], "
+                + "\"core\": [\"unit k for k in 1..4\"], \"contract\": []}}");
+        FamilyException e = assertThrows(FamilyException.class, () -> check(outside, 3, 3));
+        assertTrue(e.getMessage().startsWith(outside + ": core \"unit k for k in 1..4\" at n = 3: at k = 4: "),
+                e.getMessage());
+        Path contracted = write("{\"family\": \"corner\", \"rule\": {\"range\": [3, 4], "
+                + "\"core\": [\"all ones\"], \"contract\": []}}");
+        e = assertThrows(FamilyException.class, () -> check(contracted, 3, 3));
+        assertEquals(contracted + ": core \"all ones\" at n = 3: the vertex 111 is not an element of the member.",
+                e.getMessage());
+        Path twice = write("{\"family\": \"corner\", \"rule\": {\"range\": [3, 4], "
+                + "\"core\": [\"all of weight 1\", \"unit 1\"], \"contract\": []}}");
+        e = assertThrows(FamilyException.class, () -> check(twice, 3, 3));
+        assertEquals(twice + ": core \"unit 1\" at n = 3: the vertex 100 is named twice.", e.getMessage());
+        Path both = write("{\"family\": \"corner\", \"rule\": {\"range\": [3, 4], "
+                + "\"core\": [\"all zeros\", \"unit n\"], \"contract\": [\"unit k for k in 2..n\"]}}");
+        e = assertThrows(FamilyException.class, () -> check(both, 4, 4));
+        assertEquals(both + ": contract \"unit k for k in 2..n\" at n = 4: the vertex 0001 is both in the core and "
+                + "contracted.", e.getMessage());
+        Path outOfRange = write("{\"family\": \"corner\", \"rule\": {\"range\": [3, 4], "
+                + "\"core\": [], \"contract\": []}}");
+        e = assertThrows(FamilyException.class, () -> check(outOfRange, 3, 5));
+        assertTrue(e.getMessage().contains("predicts no core at n = 5"), e.getMessage());
+    }
 }
