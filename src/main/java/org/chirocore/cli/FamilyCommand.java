@@ -5,12 +5,14 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.family.FamilyDefinition;
 import org.chirocore.family.FamilyException;
 import org.chirocore.family.FamilyExploration;
+import org.chirocore.family.ShapeFollow;
 import org.chirocore.family.FamilyPrediction;
 import org.chirocore.family.FamilyRun;
 import org.chirocore.family.FamilyTable;
@@ -57,6 +59,11 @@ final class FamilyCommand implements Callable<Integer> {
             description = "Seed of every member's search (default: ${DEFAULT-VALUE}).")
     private long seed;
 
+    @Option(names = "--follow", paramLabel = "SHAPE",
+            description = "With --explore: follow one core shape across n, e.g. elements=n+4,rank=3 (expressions in n); "
+                    + "writes DIR/follow.md and DIR/follow.json.")
+    private String follow;
+
     @Option(names = "--explore", paramLabel = "K",
             description = "Instead of one reduction per n, run K seeded reductions (seeds S, S+1, ...; strategies "
                     + "alternating contract-first, delete-first), group the cores up to isomorphism and certify one "
@@ -102,6 +109,10 @@ final class FamilyCommand implements Callable<Integer> {
         if (shard != null && (explore != null || predict != null)) {
             throw new ParameterException(spec.commandLine(), "--shard splits a family run; it does not combine with "
                     + "--explore or --predict.");
+        }
+        if (follow != null && explore == null) {
+            throw new ParameterException(spec.commandLine(), "--follow picks cores among those of --explore; "
+                    + "give --explore K as well.");
         }
         if (explore != null) {
             return explore(bounds);
@@ -159,12 +170,17 @@ final class FamilyCommand implements Callable<Integer> {
             }
         }
         FamilyExploration.Report report;
+        Optional<ShapeFollow.Shape> shape;
         try {
+            shape = follow == null ? Optional.empty() : Optional.of(ShapeFollow.Shape.parse(follow));
             FamilyDefinition family = FamilyDefinition.read(file);
             FamilyExploration.Settings settings = new FamilyExploration.Settings(seed, explore, budget.budget(), rules,
                     targetRank == null ? OptionalInt.empty() : OptionalInt.of(targetRank));
             report = new FamilyExploration(family, out, settings, FamilyConsole.ifInteractive(spec.commandLine().getErr()))
                     .run(bounds[0], bounds[1]);
+            if (shape.isPresent()) {
+                ShapeFollow.write(out, shape.get(), ShapeFollow.follow(report, shape.get()));
+            }
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
@@ -181,7 +197,9 @@ final class FamilyCommand implements Callable<Integer> {
             }
         }
         w.println("wrote " + out.resolve(FamilyExploration.EXPLORE_MD) + " and "
-                + out.resolve(FamilyExploration.EXPLORE_JSON));
+                + out.resolve(FamilyExploration.EXPLORE_JSON)
+                + shape.map(x -> ", " + out.resolve(ShapeFollow.FOLLOW_MD) + " and " + out.resolve(ShapeFollow.FOLLOW_JSON))
+                        .orElse(""));
         boolean unknown = report.members().stream().anyMatch(m -> m.classes().stream()
                 .anyMatch(c -> c.certificate().isEmpty()) || m.rejected().stream()
                 .anyMatch(r -> r.reason().startsWith("unknown")));
