@@ -177,7 +177,8 @@ public final class OrientationSession {
                         ? "a solver call exceeded " + budget.conflictsPerCall() + " conflicts"
                         : "the time limit of " + budget.millis() + " ms ran out");
             } finally {
-                conflicts += conflictCount();
+                // sat4j's statistics accumulate over the solver's calls, which are all this session's.
+                conflicts = conflictCount();
             }
             if (!sat) {
                 return new Unsatisfiable(selectors ? neededElements() : active);

@@ -17,6 +17,8 @@ final class RelationScan {
     private final int rank;
     private int[][] table = new int[0][0];
     private int[] rest = new int[0];
+    private int[] parity = new int[0];
+    private int[] keep = new int[0];
 
     RelationScan(BasisIndex index) {
         this.index = index;
@@ -42,6 +44,8 @@ final class RelationScan {
         if (table.length < n) {
             table = new int[n][n];
             rest = new int[n];
+            parity = new int[n];
+            keep = new int[n];
         }
         int[] comb = ElementSets.range(k);
         do {
@@ -72,7 +76,6 @@ final class RelationScan {
         }
         // parity[i]: parity of the number of elements of X above rest[i]; moving p then q behind
         // the sorted x costs that many transpositions each.
-        int[] parity = new int[m];
         for (int i = 0; i < m; i++) {
             parity[i] = ClauseEncoding.above(x, rest[i]) & 1;
         }
@@ -87,7 +90,6 @@ final class RelationScan {
         }
         // Drop loops of M/X (all-zero rows): they take part in no non-trivial relation. Rows and
         // columns are compacted in place; a row moves only to a position already read.
-        int[] keep = new int[m];
         int kept = 0;
         for (int i = 0; i < m; i++) {
             boolean zero = true;
