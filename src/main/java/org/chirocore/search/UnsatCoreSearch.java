@@ -27,9 +27,10 @@ import org.chirocore.orient.WitnessCheck;
  * deletion or contraction is non-orientable, the orientation witnesses of all of them, each
  * re-checked, are the proof of minimality.
  *
- * <p>Ground sets whose C(n, r) exceeds {@link #DIRECT_LIMIT} are first cut down to a small
- * non-orientable restriction by {@link RestrictionGrowth}, so their r-subsets are never all
- * enumerated. The element order of each pass is a permutation drawn from the seed.
+ * <p>Inputs too large to enumerate (see {@link #enumerable}) are first cut down, so their
+ * r-subsets are never all enumerated: the focus elements of the settings are contracted (rank
+ * kept at least 3), the result is simplified, and then decided or grown from by
+ * {@link RestrictionGrowth}. The element order of each pass is a permutation drawn from the seed.
  */
 public final class UnsatCoreSearch implements CoreSearch {
     /** Largest C(n, r) that is enumerated directly; larger inputs are grown from a small restriction. */
@@ -44,19 +45,6 @@ public final class UnsatCoreSearch implements CoreSearch {
     public UnsatCoreSearch(SearchSettings settings, Progress progress) {
         this.settings = settings;
         this.progress = progress;
-    }
-
-    /** One pass over the single-element minors: it either shrinks the matroid or proves it minimal. */
-    private sealed interface Pass {
-    }
-
-    private record Shrunk(ExplicitMatroid next) implements Pass {
-    }
-
-    private record Minimal(List<MinorWitness> witnesses) implements Pass {
-    }
-
-    private record NoAnswer(String reason) implements Pass {
     }
 
     /** Mutable state of one reduction. */
@@ -101,15 +89,20 @@ public final class UnsatCoreSearch implements CoreSearch {
                 current = restrict(current, needed, run);
                 continue;
             }
-            Pass pass = minimalityPass(current, session, run);
-            if (pass instanceof NoAnswer n) {
-                return new SearchResult.Unknown(n.reason());
+            MinimalityProof.Result pass = minimalityPass(current, session, run);
+            if (pass instanceof MinimalityProof.Unknown u) {
+                return new SearchResult.Unknown(u.reason());
             }
-            if (pass instanceof Shrunk s) {
-                current = s.next();
+            if (pass instanceof MinimalityProof.NonOrientableDeletion d) {
+                current = restrict(current, d.needed(), run);
                 continue;
             }
-            List<MinorWitness> witnesses = ((Minimal) pass).witnesses();
+            if (pass instanceof MinimalityProof.NonOrientableContraction c) {
+                run.contracted.add(current.labels().get(c.element()));
+                current = c.minor();
+                continue;
+            }
+            List<MinorWitness> witnesses = ((MinimalityProof.Minimal) pass).witnesses();
             checkPath(input, current, run);
             SearchStats stats = new SearchStats(run.decisions, run.grownTo, System.currentTimeMillis() - run.started);
             return new SearchResult.Found(new MinimalCore(current, run.contracted, run.deleted, witnesses, settings, stats));
@@ -125,7 +118,12 @@ public final class UnsatCoreSearch implements CoreSearch {
         int n = m.size();
         int r = m.rank();
         long subsets = ElementSets.binomial(n, r);
-        long scan = r < 2 ? 0 : ElementSets.binomial(n, r - 2) * ElementSets.binomial(n - r + 2, 4);
+        long scan;
+        try {
+            scan = r < 2 ? 0 : Math.multiplyExact(ElementSets.binomial(n, r - 2), ElementSets.binomial(n - r + 2, 4));
+        } catch (ArithmeticException overflow) {
+            scan = Long.MAX_VALUE;
+        }
         return n <= ExplicitMatroid.MAX_ELEMENTS && (subsets <= DIRECT_LIMIT || r <= 3) && scan <= SCAN_LIMIT
                 && subsets <= BasisIndex.MAX_SUBSETS;
     }
@@ -216,7 +214,8 @@ public final class UnsatCoreSearch implements CoreSearch {
     }
 
     /** One {@link MinimalityProof} over the elements of {@code m} in a seeded order. */
-    private Pass minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
+    /** One pass over the single-element minors of {@code m} in a seeded order: it shrinks m or proves it minimal. */
+    private MinimalityProof.Result minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
         List<Integer> order = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
@@ -225,17 +224,7 @@ public final class UnsatCoreSearch implements CoreSearch {
         MinimalityProof proof = new MinimalityProof(settings.budget(), settings.strategy(), progress);
         MinimalityProof.Result result = proof.check(m, session, order);
         run.decisions += proof.decisions();
-        if (result instanceof MinimalityProof.Unknown u) {
-            return new NoAnswer(u.reason());
-        }
-        if (result instanceof MinimalityProof.NonOrientableDeletion d) {
-            return new Shrunk(restrict(m, d.needed(), run));
-        }
-        if (result instanceof MinimalityProof.NonOrientableContraction c) {
-            run.contracted.add(m.labels().get(c.element()));
-            return new Shrunk(c.minor());
-        }
-        return new Minimal(((MinimalityProof.Minimal) result).witnesses());
+        return result;
     }
 
     /** Re-derives the core as M/C\D from the input and the recorded path, and insists it is the same. */
