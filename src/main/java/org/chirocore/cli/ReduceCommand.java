@@ -9,6 +9,7 @@ import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Certification;
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.Catalogue;
 import org.chirocore.orient.Refutation;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.SearchResult;
@@ -134,6 +135,7 @@ final class ReduceCommand implements Callable<Integer> {
             CertificateWriter.Written written) {
         w.println("non-orientable core: " + Format.shape(core.core().rank(), core.core().size(),
                 core.core().basisCount()) + " (from " + from + ")");
+        w.println("isomorphism class: " + Format.named(Catalogue.identify(core.core())));
         w.println("contracted: " + Format.labels(core.contracted()));
         w.println("deleted: " + Format.labels(core.deleted()));
         w.println("witnesses: " + core.witnesses().size()

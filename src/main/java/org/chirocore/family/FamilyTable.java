@@ -8,9 +8,11 @@ import java.util.Optional;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
+import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.NamedMatroid;
 
 /**
  * The family table: one row per n with the pulled matroid's size and rank, the core's size,
@@ -99,6 +101,8 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
                 CoreDescription d = row.description().orElseThrow();
                 b.append("- certificate: `").append(c.certificate()).append("` (sha256 ").append(c.facts().sha256())
                         .append("), ").append(c.verification().text()).append("\n");
+                b.append("- isomorphism class: ").append(Catalogue.identify(c.facts().core()).map(NamedMatroid::title)
+                        .orElse("not in the catalogue of named matroids")).append("\n");
                 b.append("- core vertices by weight: ").append(d.verticesText()).append("\n");
                 b.append("- non-bases by weights: ").append(d.nonBasesText()).append("\n");
             } else {

@@ -1,0 +1,115 @@
+package org.chirocore.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.chirocore.check.Report;
+import org.chirocore.matroid.Catalogue;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.NamedMatroid;
+
+/**
+ * Reports on a run directory of any kind in {@link #KINDS} (family run, exploration,
+ * prediction): what the run's record says, then every certificate of the run that the
+ * independent verifier passes, with its core's isomorphism class, vertices, contracted and
+ * deleted sets and picture. A certificate that does not verify is named with the failed check
+ * and not described. {@link #writeAll} also writes each certificate's own report and an index
+ * that links them. Cost: one verification per certificate plus the bounded drawings.
+ */
+public final class RunReport {
+    /** The kinds of run directory, tried in order; the first that recognises a directory describes it. */
+    static final List<RunKind> KINDS = List.of(new FamilyRunKind(), new ExploreRunKind(), new PredictRunKind());
+
+    private RunReport() {
+    }
+
+    /**
+     * The kind of {@code dir}.
+     *
+     * @throws ReportException when no kind recognises it
+     */
+    public static RunKind kindOf(Path dir) {
+        return KINDS.stream().filter(k -> k.recognises(dir)).findFirst().orElseThrow(() -> new ReportException(dir
+                + ": not a run directory: expected a family run (table.json), an exploration (explore.json) or a "
+                + "prediction (n=K.predicted.cert.json files).", null));
+    }
+
+    /** The report on the run in {@code dir}. */
+    public static Document of(Path dir) {
+        RunKind kind = kindOf(dir);
+        List<Document.Block> blocks = new ArrayList<>(kind.summary(dir));
+        blocks.add(new Document.Heading("The cores"));
+        for (RunKind.Member m : kind.certificates(dir)) {
+            blocks.addAll(member(m));
+        }
+        return new Document(kind.title(dir), blocks);
+    }
+
+    /**
+     * Writes into {@code out} the run's report ({@code run.EXT}), each verified certificate's
+     * report ({@code STEM.EXT}, STEM its file name without {@code .cert.json}) and
+     * {@code index.EXT} linking them.
+     *
+     * @return the files written, the index first
+     * @throws IOException when a file cannot be written
+     */
+    public static List<Path> writeAll(Path dir, ReportFormat format, Path out) throws IOException {
+        RunKind kind = kindOf(dir);
+        List<Path> written = new ArrayList<>();
+        List<String[]> links = new ArrayList<>();
+        String ext = "." + format.extension();
+        List<Path> run = ReportWriter.write(of(dir), format, out.resolve("run" + ext));
+        links.add(new String[] {"run" + ext, "the " + kind.name() + ": " + kind.title(dir)});
+        List<Path> rest = new ArrayList<>(run);
+        for (RunKind.Member m : kind.certificates(dir)) {
+            String stem = m.file().getFileName().toString().replaceFirst("\\.cert\\.json$", "");
+            try {
+                Document doc = CertificateReport.of(m.file(), Optional.empty());
+                rest.addAll(ReportWriter.write(doc, format, out.resolve(stem + ext)));
+                links.add(new String[] {stem + ext, m.caption() + ": " + doc.title()});
+            } catch (ReportException e) {
+                links.add(new String[] {null, m.caption() + ": no report, " + e.getMessage()});
+            }
+        }
+        List<List<Document.Inline>> items = new ArrayList<>();
+        for (String[] l : links) {
+            items.add(l[0] == null ? List.of(new Document.Text(l[1]))
+                    : List.of(new Document.Link(l[0], l[0]), new Document.Text(": " + l[1])));
+        }
+        Document index = new Document("Reports on " + RelativePaths.shown(dir), List.of(
+                Document.Paragraph.of("The " + kind.name() + " in " + RelativePaths.shown(dir) + " and the report on each of "
+                        + "its certificates that verifies."), new Document.Bullets(items)));
+        written.addAll(ReportWriter.write(index, format, out.resolve("index" + ext)));
+        written.addAll(rest);
+        return written;
+    }
+
+    /** One certificate of the run: verified, named, described and drawn; or why not. */
+    private static List<Document.Block> member(RunKind.Member m) {
+        List<Document.Block> blocks = new ArrayList<>();
+        blocks.add(new Document.Heading(m.caption() + ": " + m.file().getFileName()));
+        Report verdict;
+        try {
+            verdict = CertificateReport.verified(m.file(), Optional.empty());
+        } catch (ReportException e) {
+            blocks.add(Document.Paragraph.of("Not described: " + e.getMessage()));
+            return blocks;
+        }
+        CertificateSummary s = CertificateSummary.read(m.file());
+        ExplicitMatroid core = s.core();
+        Optional<NamedMatroid> name = Catalogue.identify(core);
+        blocks.add(Document.Paragraph.of(CertificateReport.statement(core) + " The certificate verifies ("
+                + verdict.checks().size() + " checks; content SHA-256 " + s.contentSha256().substring(0, 16) + "...)."));
+        blocks.add(CertificateReport.named(name));
+        blocks.add(new Document.Paragraph(List.of(new Document.Text("Core vertices (sorted): "),
+                new Document.Mono(String.join(" ", CertificateReport.sortedCopy(core.labels()))))));
+        blocks.add(CertificateReport.origin(s.origin(), core.size()));
+        if (core.rank() == 3) {
+            blocks.add(new Document.Figure(ConfigurationPicture.of(core, Cores.lines(core))));
+        }
+        return blocks;
+    }
+}
