@@ -24,6 +24,8 @@ import java.util.List;
 final class ConfigurationLayout {
     /** Search nodes allowed over all attempts: the bound on the layout's work. */
     static final long MAX_NODES = 400_000;
+    /** Placements compared for one set of straight lines. */
+    static final int SOLUTIONS = 40;
     /** Search nodes allowed for one set of straight lines. */
     static final long MAX_ATTEMPT_NODES = 20_000;
     /** Least distance between a drawn path and a point not on it (the points' spread is about 1). */
@@ -156,6 +158,10 @@ final class ConfigurationLayout {
     private final int[][] lineOf;
     private long nodes;
     private long attemptNodes;
+    /** The best placement of the current attempt, its quality, and how many were found. */
+    private Layout best;
+    private double bestQuality;
+    private int found;
 
     private ConfigurationLayout(int k, List<int[]> lines) {
         this.k = k;
@@ -230,9 +236,40 @@ final class ConfigurationLayout {
         return out;
     }
 
+    /**
+     * The best of the first {@value #SOLUTIONS} placements found with these lines straight, by
+     * {@link #quality}; null when none is found within the budget.
+     */
     private Layout place(boolean[] required) {
         attemptNodes = 0;
-        return nodes >= MAX_NODES ? null : extend(order(required), 0, new long[k][], required);
+        best = null;
+        found = 0;
+        if (nodes < MAX_NODES) {
+            extend(order(required), 0, new long[k][], required);
+        }
+        return best;
+    }
+
+    /**
+     * How well a placement reads: the least distance between two points or between a point and
+     * a path it is not on (the points' spread being about 1). Larger is better.
+     */
+    private double quality(Layout layout) {
+        double[][] p = layout.points();
+        double q = Double.MAX_VALUE;
+        for (int a = 0; a < k; a++) {
+            for (int b = a + 1; b < k; b++) {
+                q = Math.min(q, Math.hypot(p[a][0] - p[b][0], p[a][1] - p[b][1]));
+            }
+        }
+        for (int l = 0; l < lines.size(); l++) {
+            for (int e = 0; e < k; e++) {
+                if ((lineMask[l] >>> e & 1) == 0) {
+                    q = Math.min(q, 2 * layout.paths().get(l).distance(p[e][0], p[e][1]));
+                }
+            }
+        }
+        return q;
     }
 
     /** Elements in search order: each next one on the most straight lines with two points placed. */
@@ -270,26 +307,35 @@ final class ConfigurationLayout {
         return order;
     }
 
-    private Layout extend(int[] order, int depth, long[][] at, boolean[] required) {
+    /** Searches on; true once enough placements were found or the budget is spent. */
+    private boolean extend(int[] order, int depth, long[][] at, boolean[] required) {
         if (depth == k) {
             Layout layout = paths(at, required);
-            return clear(layout) ? layout : null;
+            if (clear(layout)) {
+                double q = quality(layout);
+                if (best == null || q > bestQuality) {
+                    best = layout;
+                    bestQuality = q;
+                }
+                found++;
+            }
+            return found >= SOLUTIONS;
         }
         int p = order[depth];
         for (long[] q : candidates(order, depth, at, required)) {
             if (++nodes > MAX_NODES || ++attemptNodes > MAX_ATTEMPT_NODES) {
-                return null;
+                return true;
             }
             if (fits(order, depth, at, required, p, q)) {
                 at[p] = q;
-                Layout found = extend(order, depth + 1, at, required);
-                if (found != null) {
-                    return found;
-                }
+                boolean done = extend(order, depth + 1, at, required);
                 at[p] = null;
+                if (done) {
+                    return true;
+                }
             }
         }
-        return null;
+        return false;
     }
 
     /**

@@ -94,7 +94,8 @@ public final class ConfigurationPicture {
         // two legend columns when the entries fit in half the width (about 7 px a character at 12 px)
         int columns = 32 + 7 * longest < WIDTH / 2 - 20 ? 2 : 1;
         int rows = (lines.size() + columns - 1) / columns;
-        Canvas svg = new Canvas(WIDTH, legendTop + ROW * (rows + 1) + 10);
+        // a legend entry longer than the drawing widens the picture instead of running off it
+        Canvas svg = new Canvas(Math.max(WIDTH, 60 + 7 * longest), legendTop + ROW * (rows + 1) + 10);
         for (int l = 0; l < lines.size(); l++) {
             draw(svg, d, l);
         }
@@ -112,7 +113,7 @@ public final class ConfigurationPicture {
         }
         int curved = lines.size() - d.layout().straightCount();
         String caption = "The core as a configuration of " + core.size() + " points and " + lines.size() + " lines: "
-                + d.layout().straightCount() + " drawn straight (points at exact integer coordinates, collinear exactly "
+                + d.layout().straightCount() + " drawn straight (points at exact rational coordinates, collinear exactly "
                 + "where a line says so)" + (curved == 0 ? "." : ", " + curved + " drawn as a curve through its points "
                 + "(the search found no placement with " + (curved == 1 ? "it" : "them") + " straight as well).");
         return new Document.Picture("configuration", caption, svg);
