@@ -15,7 +15,7 @@ import java.util.zip.GZIPOutputStream;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
-import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.Construction;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.GpRelation;
@@ -131,15 +131,26 @@ public final class CertificateWriter {
         }
     }
 
-    /** The {@code provenance.construction} member describing {@code c}. */
-    public static Json.Obj construction(CubeConstruction c) {
-        return Json.Obj.builder()
-                .put("cube", c.n())
-                .put("field", c.field().name())
-                .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices()))
-                .put("pulled", c.pulledVertex())
-                .put("contractPulled", c.contractPulled())
-                .build();
+    /** The {@code provenance.construction} member describing {@code c}: its parts, in order. */
+    public static Json.Obj construction(Construction c) {
+        Json.Obj.Builder b = Json.Obj.builder();
+        for (Construction.Part part : c.provenance()) {
+            b.put(part.name(), json(part.value()));
+        }
+        return b.build();
+    }
+
+    private static Json json(Object value) {
+        if (value instanceof Integer i) {
+            return Json.Num.of(i);
+        }
+        if (value instanceof Boolean z) {
+            return new Json.Bool(z);
+        }
+        if (value instanceof String t) {
+            return new Json.Str(t);
+        }
+        return Json.Arr.ofStrings(((List<?>) value).stream().map(String.class::cast).toList());
     }
 
     private static Json.Obj provenance(Provenance p) {

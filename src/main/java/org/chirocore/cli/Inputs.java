@@ -50,7 +50,7 @@ final class Inputs {
         try {
             // The pulled hyperplane is where the obstruction sits: its elements are contracted first.
             return new Input(construction.build(), new Source.Constructed(construction),
-                    construction.hyperplaneVertices());
+                    construction.focus());
         } catch (IllegalArgumentException e) {
             // CubeConstruction.build reports every invalid part (dimension, vertex label,
             // hyperplane, general position) as an IllegalArgumentException with a full sentence.

@@ -293,7 +293,7 @@ public final class FamilyExploration {
             Attempt attempt = new Attempt(settings.seed(j), Settings.strategy(j));
             listener.stage(n, "run " + (j + 1) + " of " + settings.runs() + " (seed " + attempt + ")");
             SearchResult result = new UnsatCoreSearch(new SearchSettings(attempt.seed(), attempt.strategy(),
-                    settings.budget(), m.construction().hyperplaneVertices()), Progress.SILENT).reduce(m.matroid());
+                    settings.budget(), m.construction().focus()), Progress.SILENT).reduce(m.matroid());
             if (result instanceof SearchResult.Orientable) {
                 rejected.add(new Rejected(attempt, "orientable"));
                 continue;

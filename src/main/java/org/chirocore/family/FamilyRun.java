@@ -164,7 +164,7 @@ public final class FamilyRun {
         }
         listener.stage(n, "reducing");
         SearchSettings search = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
-                m.construction().hyperplaneVertices());
+                m.construction().focus());
         SearchResult result = new UnsatCoreSearch(search, Progress.SILENT).reduce(m.matroid());
         if (result instanceof SearchResult.Orientable) {
             return noCore(n, elements, rank, file, "orientable");
