@@ -202,15 +202,23 @@ public final class CertificateWriter {
 
     private static Json.Obj run(Certificate c) {
         SolveStats s = c.refutation().stats().solve();
-        return Json.Obj.builder()
-                .put("search", Json.Obj.builder()
-                        .put("seed", c.settings().seed())
-                        .put("strategy", c.settings().strategy().id())
-                        .put("decisions", c.searchStats().decisions())
-                        .put("grownTo", c.searchStats().grownTo())
-                        .put("millis", c.searchStats().millis())
-                        .build())
-                .put("refutation", Json.Obj.builder()
+        Json.Obj.Builder run = Json.Obj.builder();
+        if (c.discovery() instanceof Discovery.Searched d) {
+            run.put("search", Json.Obj.builder()
+                    .put("seed", d.seed())
+                    .put("strategy", d.strategy().id())
+                    .put("decisions", d.stats().decisions())
+                    .put("grownTo", d.stats().grownTo())
+                    .put("millis", d.stats().millis())
+                    .build());
+        } else {
+            Discovery.Predicted p = (Discovery.Predicted) c.discovery();
+            run.put("prediction", Json.Obj.builder()
+                    .put("decisions", p.decisions())
+                    .put("millis", p.millis())
+                    .build());
+        }
+        return run.put("refutation", Json.Obj.builder()
                         .put("bases", s.bases())
                         .put("relations", c.refutation().relations().size())
                         .put("clauses", s.clauses())
