@@ -4,6 +4,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 
 import org.chirocore.io.Json;
 
@@ -47,32 +48,38 @@ final class ExploreRunKind implements RunKind {
     }
 
     @Override
-    public List<Document.Block> summary(Path dir) {
+    public List<Document.Block> summary(Path dir, Function<Path, Document.Inline> classOf) {
         Json.Obj r = record(dir);
-        List<List<String>> rows = new ArrayList<>();
+        List<List<Document.Inline>> rows = new ArrayList<>();
         try {
             for (Json.Obj m : members(r)) {
                 int j = 0;
                 for (Json c : m.requireArray("classes").elements()) {
                     Json.Obj cls = c.asObject("a class");
-                    rows.add(List.of(Long.toString(m.requireLong("n")), Integer.toString(++j),
-                            Long.toString(cls.requireLong("elements")), Long.toString(cls.requireLong("rank")),
-                            Long.toString(cls.requireLong("bases")), Long.toString(cls.requireLong("frequency")),
-                            cls.requireString("status")));
+                    boolean certified = cls.has("certificate") && !(cls.find("certificate").orElseThrow() instanceof Json.Null);
+                    rows.add(List.of(text(m.requireLong("n")), text(++j), text(cls.requireLong("elements")),
+                            text(cls.requireLong("rank")), text(cls.requireLong("bases")),
+                            certified ? classOf.apply(dir.resolve(cls.requireString("certificate"))) : new Document.Text("-"),
+                            text(cls.requireLong("frequency")), new Document.Text(cls.requireString("status"))));
                 }
-                rows.add(List.of(Long.toString(m.requireLong("n")), "-", "-", "-", "-",
-                        Integer.toString(m.requireArray("rejected").size()), "runs rejected"));
+                rows.add(List.of(text(m.requireLong("n")), new Document.Text("-"), new Document.Text("-"),
+                        new Document.Text("-"), new Document.Text("-"), new Document.Text("-"),
+                        text(m.requireArray("rejected").size()), new Document.Text("runs rejected")));
             }
             return List.of(
                     Document.Paragraph.of("Seeded runs of the core search at each n (seed " + r.requireLong("seed") + ", "
                             + r.requireLong("runs") + " runs per n), their cores grouped by isomorphism class."),
                     new Document.Heading("Classes"),
-                    Document.Table.plain(List.of("n", "class", "elements", "rank", "bases", "runs", "status"), rows),
+                    new Document.Table(List.of("n", "class", "elements", "rank", "bases", "name", "runs", "status"), rows),
                     Document.Paragraph.of("A referee re-checks the certificates with:"),
                     RunFiles.verifyCommand(dir, "n=*.cert.json"));
         } catch (IllegalArgumentException e) {
             throw new ReportException(dir.resolve(RECORD) + ": cannot be read as an exploration: " + e.getMessage(), e);
         }
+    }
+
+    private static Document.Inline text(long value) {
+        return new Document.Text(Long.toString(value));
     }
 
     private static Json.Obj record(Path dir) {

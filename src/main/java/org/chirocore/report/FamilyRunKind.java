@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.stream.Stream;
 
 import org.chirocore.io.Json;
 
@@ -42,16 +43,17 @@ final class FamilyRunKind implements RunKind {
     }
 
     @Override
-    public List<Document.Block> summary(Path dir) {
+    public List<Document.Block> summary(Path dir, Function<Path, Document.Inline> classOf) {
         Json.Obj table = table(dir);
         try {
-            return summary(dir, table, members(table));
+            return summary(dir, table, members(table), classOf);
         } catch (IllegalArgumentException e) {
             throw new ReportException(dir.resolve(TABLE) + ": cannot be read as a family table: " + e.getMessage(), e);
         }
     }
 
-    private static List<Document.Block> summary(Path dir, Json.Obj table, List<Json.Obj> members) {
+    private static List<Document.Block> summary(Path dir, Json.Obj table, List<Json.Obj> members,
+            Function<Path, Document.Inline> classOf) {
         List<Document.Block> blocks = new ArrayList<>();
         blocks.add(Document.Paragraph.of(table.requireString("description")));
         blocks.add(new Document.Bullets(List.of(
@@ -61,13 +63,17 @@ final class FamilyRunKind implements RunKind {
                 List.of(new Document.Text("search: seed " + table.requireLong("seed") + ", strategy "
                         + table.requireString("strategy"))))));
         blocks.add(new Document.Heading("Table"));
-        blocks.add(Document.Table.plain(List.of("n", "elements", "rank", "core elements", "core rank", "bases", "non-bases",
-                "status"), members.stream().map(m -> {
+        blocks.add(new Document.Table(List.of("n", "elements", "rank", "core elements", "core rank", "bases", "non-bases",
+                "class", "status"), members.stream().map(m -> {
                     Optional<Json.Obj> core = m.find("core").map(c -> c.asObject("core"));
                     Json.Obj pulled = m.requireObject("pulled");
-                    return List.of(Long.toString(m.requireLong("n")), Long.toString(pulled.requireLong("elements")),
-                            Long.toString(pulled.requireLong("rank")), cell(core, "elements"), cell(core, "rank"),
-                            cell(core, "bases"), cell(core, "nonBases"), m.requireString("status"));
+                    List<Document.Inline> row = new ArrayList<>(Stream.of(Long.toString(m.requireLong("n")),
+                            Long.toString(pulled.requireLong("elements")), Long.toString(pulled.requireLong("rank")),
+                            cell(core, "elements"), cell(core, "rank"), cell(core, "bases"), cell(core, "nonBases"))
+                            .<Document.Inline>map(Document.Text::new).toList());
+                    row.add(m.has("certificate") ? classOf.apply(dir.resolve(m.requireString("certificate"))) : new Document.Text("-"));
+                    row.add(new Document.Text(m.requireString("status")));
+                    return row;
                 }).toList()));
         blocks.add(Document.Table.plain(List.of("n", "relations", "DRAT lemmas", "DRAT bytes", "search ms", "refutation ms",
                 "verify ms"), members.stream().map(m -> {
@@ -77,7 +83,8 @@ final class FamilyRunKind implements RunKind {
                             cell(proof, "dratBytes"), cell(millis, "search"), cell(millis, "refutation"), cell(millis, "verify"));
                 }).toList()));
         blocks.add(Document.Paragraph.of("Times in ms: search and refutation as recorded when the certificate was written, "
-                + "verification as rerun by the family run. The isomorphism class of each core is given below."));
+                + "verification as rerun by the family run. Class: the core's isomorphism class when the catalogue names it "
+                + "(docs/reports.md), after its certificate verified again for this report; details of each core below."));
         blocks.add(new Document.Heading("Charts"));
         blocks.add(new Document.Figure(LineChart.of("core-size", "Core size against n", "n", "elements",
                 List.of(series("core elements", members, m -> m.requireObject("core").requireLong("elements"))))));

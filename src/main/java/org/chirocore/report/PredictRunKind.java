@@ -3,6 +3,7 @@ package org.chirocore.report;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 
 /**
  * A checked prediction (docs/families.md, {@code family --predict}): one certificate
@@ -38,7 +39,7 @@ final class PredictRunKind implements RunKind {
     }
 
     @Override
-    public List<Document.Block> summary(Path dir) {
+    public List<Document.Block> summary(Path dir, Function<Path, Document.Inline> classOf) {
         return List.of(Document.Paragraph.of("Each certificate below states that the predicted minor of the member at its n "
                 + "is a minor-minimal non-orientable matroid; a refuted or undecided prediction leaves no certificate."),
                 Document.Paragraph.of("A referee re-checks the certificates with:"),

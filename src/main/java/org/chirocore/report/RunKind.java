@@ -2,6 +2,7 @@ package org.chirocore.report;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.function.Function;
 
 /**
  * A kind of run directory the report knows: how to recognise one, which of its certificates
@@ -26,8 +27,13 @@ public interface RunKind {
      */
     List<Member> certificates(Path dir);
 
-    /** What the run's own record says: settings, tables and charts. */
-    List<Document.Block> summary(Path dir);
+    /**
+     * What the run's own record says: settings, tables and charts.
+     *
+     * @param classOf the isomorphism class of a certificate's core, as a table cell: its symbol
+     *     when it is in the catalogue and the certificate verifies, otherwise words saying which
+     */
+    List<Document.Block> summary(Path dir, Function<Path, Document.Inline> classOf);
 
     /**
      * A certificate of a run.

@@ -3,7 +3,9 @@ package org.chirocore.report;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 import org.chirocore.check.Report;
@@ -40,12 +42,41 @@ public final class RunReport {
     /** The report on the run in {@code dir}. */
     public static Document of(Path dir) {
         RunKind kind = kindOf(dir);
-        List<Document.Block> blocks = new ArrayList<>(kind.summary(dir));
+        Map<Path, Checked> checked = new LinkedHashMap<>();
+        for (RunKind.Member m : kind.certificates(dir)) {
+            checked.put(m.file(), Checked.of(m.file()));
+        }
+        List<Document.Block> blocks = new ArrayList<>(kind.summary(dir, file -> {
+            Checked c = checked.get(file);
+            return c == null || c.summary() == null ? new Document.Text("not verified")
+                    : c.name().<Document.Inline>map(n -> new Document.Math(n.latex(), n.symbol()))
+                            .orElse(new Document.Text("unnamed"));
+        }));
         blocks.add(new Document.Heading("The cores"));
         for (RunKind.Member m : kind.certificates(dir)) {
-            blocks.addAll(member(m));
+            blocks.addAll(member(m, checked.get(m.file())));
         }
         return new Document(kind.title(dir), blocks);
+    }
+
+    /**
+     * A run's certificate after the verifier: its summary and name when it passed, otherwise why not.
+     *
+     * @param verdict the verifier's report, null when it failed
+     * @param summary what the certificate says, null when it failed
+     * @param name the core's isomorphism class in the catalogue
+     * @param failure why it is not described, empty when it passed
+     */
+    private record Checked(Report verdict, CertificateSummary summary, Optional<NamedMatroid> name, String failure) {
+        static Checked of(Path file) {
+            try {
+                Report verdict = CertificateReport.verified(file, Optional.empty());
+                CertificateSummary s = CertificateSummary.read(file);
+                return new Checked(verdict, s, Catalogue.identify(s.core()), "");
+            } catch (ReportException e) {
+                return new Checked(null, null, Optional.empty(), e.getMessage());
+            }
+        }
     }
 
     /**
@@ -88,22 +119,18 @@ public final class RunReport {
     }
 
     /** One certificate of the run: verified, named, described and drawn; or why not. */
-    private static List<Document.Block> member(RunKind.Member m) {
+    private static List<Document.Block> member(RunKind.Member m, Checked c) {
         List<Document.Block> blocks = new ArrayList<>();
         blocks.add(new Document.Heading(m.caption() + ": " + m.file().getFileName()));
-        Report verdict;
-        try {
-            verdict = CertificateReport.verified(m.file(), Optional.empty());
-        } catch (ReportException e) {
-            blocks.add(Document.Paragraph.of("Not described: " + e.getMessage()));
+        if (c.summary() == null) {
+            blocks.add(Document.Paragraph.of("Not described: " + c.failure()));
             return blocks;
         }
-        CertificateSummary s = CertificateSummary.read(m.file());
+        CertificateSummary s = c.summary();
         ExplicitMatroid core = s.core();
-        Optional<NamedMatroid> name = Catalogue.identify(core);
         blocks.add(Document.Paragraph.of(CertificateReport.statement(core) + " The certificate verifies ("
-                + verdict.checks().size() + " checks; content SHA-256 " + s.contentSha256().substring(0, 16) + "...)."));
-        blocks.add(CertificateReport.named(name));
+                + c.verdict().checks().size() + " checks; content SHA-256 " + s.contentSha256().substring(0, 16) + "...)."));
+        blocks.add(CertificateReport.named(c.name()));
         blocks.add(new Document.Paragraph(List.of(new Document.Text("Core vertices (sorted): "),
                 new Document.Mono(String.join(" ", CertificateReport.sortedCopy(core.labels()))))));
         blocks.add(CertificateReport.origin(s.origin(), core.size()));

@@ -63,11 +63,13 @@ class CatalogueTest {
     /**
      * The stored certificates' cores: fano and fano-dual were made from F7 and F7*
      * (certificates/inputs), ag23-minus-point from AG(2,3) minus a point; the corner family's
-     * description says its n = 3 core is the Fano plane (docs/families.md).
+     * description says its n = 3 core is the Fano plane (docs/families.md). That the corner
+     * core at n = 4 is AG(2,3)\\e has no outside source: it is recorded here as a regression check.
      */
     @ParameterizedTest(name = "{0}: {1}")
     @CsvSource({"certificates/fano.cert.json, F7", "certificates/fano-dual.cert.json, F7*",
         "certificates/ag23-minus-point.cert.json, 'AG(2,3)\\e'", "certificates/corner-n3.cert.json, F7",
+        "certificates/corner-n4.cert.json, 'AG(2,3)\\e'",
         "families/corner/n=3.cert.json, F7"})
     void storedCoresAreNamed(String file, String symbol) {
         ExplicitMatroid core = CertificateSummary.read(Path.of(file)).core();

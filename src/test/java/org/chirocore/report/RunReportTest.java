@@ -37,6 +37,11 @@ class RunReportTest {
                 .findFirst().orElseThrow();
         assertEquals(List.of("3", "4", "5", "6", "7", "8", "9", "10"), column(table, 0));
         assertEquals(List.of("7", "8", "7", "10", "8", "12", "15", "8"), column(table, 3), "core elements as in docs/families.md");
+        // the family's description names F7 at n = 3; the corner-n4 certificate's core is AG(2,3)\e (CatalogueTest)
+        Document.Math fano = (Document.Math) table.rows().get(0).get(7);
+        Document.Math ag = (Document.Math) table.rows().get(1).get(7);
+        assertAll(() -> assertEquals("F7", fano.text()), () -> assertEquals("F_7", fano.latex()),
+                () -> assertEquals("AG(2,3)\\e", ag.text()), () -> assertEquals("AG(2,3)\\setminus e", ag.latex()));
         String html = ReportFormat.HTML.render(doc, "corner").text();
         assertAll(
                 // three charts and one configuration per member (all cores have rank 3)
