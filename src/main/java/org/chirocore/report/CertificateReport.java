@@ -72,7 +72,9 @@ public final class CertificateReport {
             blocks.add(new Document.Paragraph(List.of(new Text("INPUT is the given matroid's file, the one with SHA-256 "),
                     new Mono(g.sha256()), new Text("; without --input the provenance check is not run."))));
         }
-        return new Document(title(core, name), blocks);
+        List<Inline> heading = new ArrayList<>(List.of(new Text(title(core, Optional.empty()))));
+        name.ifPresent(n -> heading.addAll(List.of(new Text(": " + n.name() + " "), new Document.Math(n.latex(), n.symbol()))));
+        return new Document(title(core, name), heading, blocks);
     }
 
     /**

@@ -7,13 +7,20 @@ import java.util.Objects;
  * A report as format-neutral content: a title and a list of blocks, rendered by a
  * {@link ReportFormat}. Text is plain (no markup); each renderer escapes it for its format.
  *
- * @param title the report's title
+ * @param title the report's title in plain text
+ * @param heading the same title as inline pieces (with mathematics where it has any)
  * @param blocks the content, in order
  */
-public record Document(String title, List<Block> blocks) {
+public record Document(String title, List<Inline> heading, List<Block> blocks) {
     public Document {
         Objects.requireNonNull(title, "The title is null.");
+        heading = List.copyOf(heading);
         blocks = List.copyOf(blocks);
+    }
+
+    /** A document whose title is plain text. */
+    public Document(String title, List<Block> blocks) {
+        this(title, List.of(new Text(title)), blocks);
     }
 
     /** A block of content. */

@@ -17,8 +17,8 @@ public enum ReportFormat {
     /** Markdown (CommonMark with pipe tables); pictures as SVG files beside it, linked. */
     MD {
         @Override
-        String begin(String title) {
-            return "# " + text(title) + "\n\n";
+        String begin(String title, String heading) {
+            return "# " + heading + "\n\n";
         }
 
         @Override
@@ -82,13 +82,13 @@ public enum ReportFormat {
      */
     TEX {
         @Override
-        String begin(String title) {
+        String begin(String title, String heading) {
             return "% Report written by chirocore: a fragment for the body of a LaTeX article.\n"
                     + "% Its pictures need \\usepackage{tikz} in the preamble (Debian: texlive-pictures); nothing else\n"
                     + "% beyond the LaTeX kernel (not even amsmath). It is set \\sloppy inside a group, so that long\n"
                     + "% hashes break at their allowed points instead of running into the margin.\n"
                     + "\\begingroup\\sloppy\n"
-                    + "\\section*{" + text(title) + "}\n\n";
+                    + "\\section*{" + heading + "}\n\n";
         }
 
         @Override
@@ -191,9 +191,9 @@ public enum ReportFormat {
     /** One self-contained HTML5 file: inline CSS and inline SVG, no external resources. */
     HTML {
         @Override
-        String begin(String title) {
+        String begin(String title, String heading) {
             return "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>" + text(title)
-                    + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n<h1>" + text(title) + "</h1>\n";
+                    + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n<h1>" + heading + "</h1>\n";
         }
 
         @Override
@@ -267,7 +267,7 @@ public enum ReportFormat {
      * @param stem the main file's name without extension, prefix of side files' names
      */
     public Rendered render(Document doc, String stem) {
-        StringBuilder out = new StringBuilder(begin(doc.title()));
+        StringBuilder out = new StringBuilder(begin(doc.title(), inline(doc.heading())));
         Map<String, String> files = new LinkedHashMap<>();
         for (Block b : doc.blocks()) {
             if (b instanceof Document.Heading h) {
@@ -310,7 +310,8 @@ public enum ReportFormat {
         return text(math.text());
     }
 
-    abstract String begin(String title);
+    /** The start of the document: {@code title} in plain text, {@code heading} rendered in the format. */
+    abstract String begin(String title, String heading);
 
     abstract String end();
 

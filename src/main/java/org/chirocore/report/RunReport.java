@@ -90,25 +90,24 @@ public final class RunReport {
     public static List<Path> writeAll(Path dir, ReportFormat format, Path out) throws IOException {
         RunKind kind = kindOf(dir);
         List<Path> written = new ArrayList<>();
-        List<String[]> links = new ArrayList<>();
+        List<List<Document.Inline>> items = new ArrayList<>();
         String ext = "." + format.extension();
         List<Path> run = ReportWriter.write(of(dir), format, out.resolve("run" + ext));
-        links.add(new String[] {"run" + ext, "the " + kind.name() + ": " + kind.title(dir)});
+        items.add(List.of(new Document.Link("run" + ext, "run" + ext), new Document.Text(": the " + kind.name() + ": "
+                + kind.title(dir))));
         List<Path> rest = new ArrayList<>(run);
         for (RunKind.Member m : kind.certificates(dir)) {
             String stem = m.file().getFileName().toString().replaceFirst("\\.cert\\.json$", "");
             try {
                 Document doc = CertificateReport.of(m.file(), Optional.empty());
                 rest.addAll(ReportWriter.write(doc, format, out.resolve(stem + ext)));
-                links.add(new String[] {stem + ext, m.caption() + ": " + doc.title()});
+                List<Document.Inline> item = new ArrayList<>(List.of(new Document.Link(stem + ext, stem + ext),
+                        new Document.Text(": " + m.caption() + ": ")));
+                item.addAll(doc.heading());
+                items.add(item);
             } catch (ReportException e) {
-                links.add(new String[] {null, m.caption() + ": no report, " + e.getMessage()});
+                items.add(List.of(new Document.Text(m.caption() + ": no report, " + e.getMessage())));
             }
-        }
-        List<List<Document.Inline>> items = new ArrayList<>();
-        for (String[] l : links) {
-            items.add(l[0] == null ? List.of(new Document.Text(l[1]))
-                    : List.of(new Document.Link(l[0], l[0]), new Document.Text(": " + l[1])));
         }
         Document index = new Document("Reports on " + RelativePaths.shown(dir), List.of(
                 Document.Paragraph.of("The " + kind.name() + " in " + RelativePaths.shown(dir) + " and the report on each of "

@@ -66,8 +66,11 @@ class RunReportTest {
     }
 
     @Test
-    void latexIsBalanced() {
-        assertEquals("", Structure.latexProblem(ReportFormat.TEX.render(RunReport.of(CORNER), "corner").text()));
+    void latexIsBalancedWithMathInMathMode() {
+        String tex = ReportFormat.TEX.render(RunReport.of(CORNER), "corner").text();
+        assertEquals("", Structure.latexProblem(tex));
+        assertFalse(tex.contains("\\textbackslash") || tex.contains("\\textasciicircum"), "math mode, not escaped text");
+        assertTrue(tex.contains("$AG(2,3)\\setminus e$") && tex.contains("$F_7$"), "the classes in math mode");
     }
 
     @Test

@@ -78,6 +78,8 @@ class StoredCertificateReportsTest {
             case TEX -> assertAll(
                     () -> assertEquals("", Structure.latexProblem(text)),
                     () -> assertFalse(text.contains("\\documentclass"), "a fragment has no preamble"),
+                    () -> assertFalse(text.contains("\\textbackslash") || text.contains("\\textasciicircum"),
+                            "mathematics (M\\e, 2^n, AG(2,3)\\e) is in math mode, not escaped text"),
                     () -> assertEquals(List.of(out), written));
             case MD -> {
                 for (Path side : written.subList(1, written.size())) {
