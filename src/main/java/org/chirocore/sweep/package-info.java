@@ -1,0 +1,7 @@
+/**
+ * The sweep over every general-position pull of the real n-cube up to the cube's symmetry group:
+ * hyperplane orbits, general-position pairs, the decision and certification of every pull, shard
+ * runs and their merge. Depends on {@code matroid}, {@code search}, {@code cert}, {@code check},
+ * {@code family} (the member certifier) and {@code io}; never on the CLI.
+ */
+package org.chirocore.sweep;
