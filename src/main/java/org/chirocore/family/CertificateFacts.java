@@ -34,7 +34,7 @@ public record CertificateFacts(String sha256, ExplicitMatroid core, Json.Obj con
      * @throws IllegalArgumentException when it is not a certificate written by this tool for a
      *     construction (a member missing or of the wrong type, invalid bases)
      */
-    static CertificateFacts read(Path file) throws IOException {
+    public static CertificateFacts read(Path file) throws IOException {
         Json.Obj doc = Json.parseUtf8(Files.readAllBytes(file)).asObject("the certificate");
         Json.Obj content = doc.requireObject("content");
         Json.Obj core = content.requireObject("core");

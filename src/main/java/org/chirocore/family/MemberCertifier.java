@@ -16,15 +16,15 @@ import org.chirocore.search.MinimalCore;
 /**
  * Certifies a minimal core of a family member, writes the certificate atomically and verifies
  * the written file with the independent verifier; a rejected certificate is removed. Shared by
- * family runs, explorations and predictions. Cost: what {@link Certification#of} and the
+ * family runs, explorations, predictions and sweeps. Cost: what {@link Certification#of} and the
  * verifier cost.
  */
-final class MemberCertifier {
+public final class MemberCertifier {
     private MemberCertifier() {
     }
 
     /** The outcome: a verified file, or a refutation that ran out of budget (no file). */
-    sealed interface Outcome {
+    public sealed interface Outcome {
     }
 
     /**
@@ -34,11 +34,11 @@ final class MemberCertifier {
      * @param facts what the file states, read back
      * @param verifyMillis the verifier's time
      */
-    record Written(Verification verification, CertificateFacts facts, long verifyMillis) implements Outcome {
+    public record Written(Verification verification, CertificateFacts facts, long verifyMillis) implements Outcome {
     }
 
     /** The refutation ran out of budget; nothing was written. */
-    record OutOfBudget(String reason) implements Outcome {
+    public record OutOfBudget(String reason) implements Outcome {
     }
 
     /**
@@ -48,7 +48,7 @@ final class MemberCertifier {
      * @throws IllegalStateException when the verifier rejects the file just written (a bug; the
      *     file and its DRAT side file are removed)
      */
-    static Outcome certify(MinimalCore core, CubeConstruction construction, Budget budget, Path file)
+    public static Outcome certify(MinimalCore core, CubeConstruction construction, Budget budget, Path file)
             throws IOException {
         Certification certification = Certification.of(core, new Source.Constructed(construction), budget);
         if (certification instanceof Certification.OutOfBudget o) {

@@ -39,6 +39,10 @@ class DependencyRulesTest {
         "report, org.sat4j", "report, org.chirocore.cli", "report, org.chirocore.matroid", "report, org.chirocore.orient",
         "report, org.chirocore.search", "report, org.chirocore.cert", "report, org.chirocore.family",
         "check, org.chirocore.report", "family, org.chirocore.report",
+        "sweep, org.sat4j", "sweep, org.chirocore.cli", "sweep, org.chirocore.report", "sweep, org.chirocore.proof",
+        "matroid, org.chirocore.sweep", "orient, org.chirocore.sweep", "search, org.chirocore.sweep",
+        "io, org.chirocore.sweep", "cert, org.chirocore.sweep", "check, org.chirocore.sweep",
+        "family, org.chirocore.sweep", "report, org.chirocore.sweep", "proof, org.chirocore.sweep",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));

@@ -1,0 +1,51 @@
+package org.chirocore.sweep;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+import org.chirocore.matroid.AffineCube;
+import org.chirocore.matroid.Duality;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Field;
+import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.MatrixMatroid;
+import org.chirocore.matroid.Matroid;
+
+/**
+ * Names for cores that are well-known excluded minors of orientability, recognised by an
+ * isomorphism that is found and checked, never by counts alone: the Fano plane F7 = PG(2, 2)
+ * (the seven nonzero vectors of GF(2)^3), its dual F7*, and the binary affine cube AG(3, 2).
+ * Cost: one isomorphism search per catalogue entry of the same size and rank.
+ */
+final class KnownCores {
+    private static final Map<String, ExplicitMatroid> CATALOGUE = catalogue();
+
+    private KnownCores() {
+    }
+
+    /** The name of {@code core} when it is isomorphic to a catalogue entry. */
+    static Optional<String> name(ExplicitMatroid core) {
+        for (Map.Entry<String, ExplicitMatroid> e : CATALOGUE.entrySet()) {
+            Matroid known = e.getValue();
+            if (known.size() == core.size() && known.rank() == core.rank()
+                    && new HyperplaneIsomorphismInspector(core, known).find().isPresent()) {
+                return Optional.of(e.getKey());
+            }
+        }
+        return Optional.empty();
+    }
+
+    private static Map<String, ExplicitMatroid> catalogue() {
+        List<long[]> columns = new ArrayList<>();
+        List<String> labels = new ArrayList<>();
+        for (int v = 1; v < 8; v++) {
+            columns.add(new long[] {v & 1, (v >> 1) & 1, (v >> 2) & 1});
+            labels.add(Integer.toString(v));
+        }
+        ExplicitMatroid fano = ExplicitMatroid.of(new MatrixMatroid(Field.gf(2), columns, labels));
+        return Map.of("F7", fano, "F7*", Duality.dual(fano),
+                "AG(3,2)", ExplicitMatroid.of(AffineCube.of(3, Field.gf(2))));
+    }
+}
