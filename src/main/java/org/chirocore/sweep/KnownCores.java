@@ -16,7 +16,9 @@ import org.chirocore.matroid.Matroid;
 /**
  * Names for cores that are well-known excluded minors of orientability, recognised by an
  * isomorphism that is found and checked, never by counts alone: the Fano plane F7 = PG(2, 2)
- * (the seven nonzero vectors of GF(2)^3), its dual F7*, and the binary affine cube AG(3, 2).
+ * (the seven nonzero vectors of GF(2)^3), its dual F7*, the binary affine cube AG(3, 2), and the
+ * ternary affine plane AG(2, 3) minus a point (its automorphism group is transitive, so which
+ * point does not matter).
  * Cost: one isomorphism search per catalogue entry of the same size and rank.
  */
 final class KnownCores {
@@ -45,7 +47,18 @@ final class KnownCores {
             labels.add(Integer.toString(v));
         }
         ExplicitMatroid fano = ExplicitMatroid.of(new MatrixMatroid(Field.gf(2), columns, labels));
+        List<long[]> plane = new ArrayList<>();
+        List<String> planeLabels = new ArrayList<>();
+        for (int x = 0; x < 3; x++) {
+            for (int y = 0; y < 3; y++) {
+                if (x + y > 0) {
+                    plane.add(new long[] {1, x, y});
+                    planeLabels.add(x + "" + y);
+                }
+            }
+        }
         return Map.of("F7", fano, "F7*", Duality.dual(fano),
-                "AG(3,2)", ExplicitMatroid.of(AffineCube.of(3, Field.gf(2))));
+                "AG(3,2)", ExplicitMatroid.of(AffineCube.of(3, Field.gf(2))),
+                "AG(2,3)\\e", ExplicitMatroid.of(new MatrixMatroid(Field.gf(3), plane, planeLabels)));
     }
 }

@@ -21,6 +21,7 @@ import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.orient.Budget;
@@ -237,16 +238,14 @@ public final class SweepRun {
             MinimalCore fromPulled = new MinimalCore(m.core(), path, m.deleted(), m.witnesses(), m.settings(),
                     m.stats());
             pulledVerdict = certify(fromPulled, pulled, level.resolve(id + ".pulled.cert.json"));
-            core = Optional.of(new PairResult.Core(m.core().size(), m.core().rank(), m.core().labels(),
-                    KnownCores.name(m.core())));
+            core = Optional.of(core(m.core()));
         } else {
             contractedVerdict = noCore(first, level, id + ".contracted");
             SearchResult second = new UnsatCoreSearch(search, Progress.SILENT).reduce(pulled.build());
             if (second instanceof SearchResult.Found f) {
                 MinimalCore m = f.core();
                 pulledVerdict = certify(m, pulled, level.resolve(id + ".pulled.cert.json"));
-                core = Optional.of(new PairResult.Core(m.core().size(), m.core().rank(), m.core().labels(),
-                        KnownCores.name(m.core())));
+                core = Optional.of(core(m.core()));
             } else {
                 pulledVerdict = noCore(second, level, id + ".pulled");
             }
@@ -292,7 +291,18 @@ public final class SweepRun {
         boolean same = earlier.index() == index
                 && certified(earlier.contractedVerdict(), level, contracted)
                 && certified(earlier.pulledVerdict(), level, pulled);
-        return same ? Optional.of(earlier) : Optional.empty();
+        if (!same) {
+            return Optional.empty();
+        }
+        // the core is read back from the certificate, so that its description follows this version
+        ExplicitMatroid m = CertificateFacts.read(level.resolve(earlier.contractedVerdict().file())).core();
+        return Optional.of(new PairResult(earlier.n(), index, earlier.normal(), earlier.offset(), earlier.hyperplane(),
+                earlier.pulled(), earlier.hyperplaneOrbit(), earlier.orbitSize(), earlier.pulledVerdict(),
+                earlier.contractedVerdict(), Optional.of(core(m))));
+    }
+
+    private static PairResult.Core core(ExplicitMatroid m) {
+        return new PairResult.Core(m.size(), m.rank(), m.labels(), KnownCores.name(m));
     }
 
     private boolean certified(Verdict v, Path level, CubeConstruction construction) throws IOException {
