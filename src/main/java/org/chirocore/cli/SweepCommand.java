@@ -73,7 +73,7 @@ final class SweepCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--n must lie within " + SweepRun.MIN_DIMENSION + ".."
                     + HyperplaneOrbits.MAX_DIMENSION + "; got \"" + range + "\".");
         }
-        Inputs.requireDirectoryOf(out.resolve(SweepRun.SWEEP_JSON));
+        Inputs.requireDirectoryOf(out);
         PrintWriter err = spec.commandLine().getErr();
         long started = System.nanoTime();
         SweepRun.Listener progress = line -> {
