@@ -48,7 +48,8 @@ public record PairResult(int n, int index, List<Integer> normal, int offset, Lis
         return id(n, normal, offset, pulled);
     }
 
-    static String id(int n, List<Integer> normal, int offset, String pulled) {
+    /** The id of the pair (n, a·x = b, O); see {@link #id()}. */
+    public static String id(int n, List<Integer> normal, int offset, String pulled) {
         StringBuilder s = new StringBuilder("n").append(n).append("_a");
         for (int i = 0; i < normal.size(); i++) {
             s.append(i == 0 ? "" : "-").append(normal.get(i));
