@@ -1,6 +1,7 @@
 package org.chirocore.sweep;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -182,7 +183,12 @@ public final class SweepRun {
             for (int i : mine) {
                 futures.add(pool.submit(() -> {
                     long start = System.nanoTime();
-                    PairResult r = pair(n, i, general.get(i));
+                    PairResult r;
+                    try {
+                        r = pair(n, i, general.get(i));
+                    } catch (IOException e) {
+                        throw new UncheckedIOException(e);
+                    }
                     listener.line("n = " + n + ": pair " + (done.incrementAndGet()) + " of " + mine.size() + " "
                             + r.id() + ": pulled " + r.pulledVerdict().text() + ", contracted "
                             + r.contractedVerdict().text() + r.core().map(c -> ", core " + c.elements()
@@ -198,7 +204,14 @@ public final class SweepRun {
             Thread.currentThread().interrupt();
             throw new IllegalStateException("The sweep was interrupted.", e);
         } catch (ExecutionException e) {
-            throw rethrow(e.getCause());
+            // a task throws only unchecked exceptions, an I/O failure wrapped
+            if (e.getCause() instanceof UncheckedIOException io) {
+                throw io.getCause();
+            }
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw (RuntimeException) e.getCause();
         } finally {
             pool.shutdownNow();
         }
@@ -324,18 +337,5 @@ public final class SweepRun {
 
     private static long millis(long start) {
         return (System.nanoTime() - start) / 1_000_000;
-    }
-
-    private static RuntimeException rethrow(Throwable cause) throws IOException {
-        if (cause instanceof IOException io) {
-            throw io;
-        }
-        if (cause instanceof RuntimeException r) {
-            return r;
-        }
-        if (cause instanceof Error e) {
-            throw e;
-        }
-        return new IllegalStateException("A sweep pair failed unexpectedly.", cause);
     }
 }
