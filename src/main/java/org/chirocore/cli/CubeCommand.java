@@ -75,7 +75,8 @@ final class CubeCommand implements Callable<Integer> {
         out.println("skew facets: " + r.skewFacets());
         out.println("rectangles: " + r.rectangles());
         out.println("hyperplanes: " + (r.hyperplanes().isPresent() ? String.valueOf(r.hyperplanes().getAsInt())
-                : "not enumerated (only for the real cube with n <= " + CubeGeometry.MAX_ENUMERATED_DIMENSION + ")"));
+                : "not enumerated (listed one by one only for the real cube with n <= "
+                        + CubeGeometry.MAX_ENUMERATED_DIMENSION + "; --orbits counts them up to symmetry)"));
         r.hyperplane().ifPresent(h -> {
             out.println("H: " + h.equation().orElse("(not the vertex set of a real hyperplane)"));
             out.println("H vertices: " + Format.labels(h.vertices()));
