@@ -11,7 +11,6 @@ import java.util.TreeMap;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.family.CertificateFacts;
 import org.chirocore.family.Shard;
 import org.chirocore.io.Json;
 
@@ -157,7 +156,7 @@ public final class SweepMerge {
         }
         Json.Obj recorded;
         try {
-            recorded = CertificateFacts.read(target).construction();
+            recorded = RecordedCertificate.read(target).construction();
         } catch (IllegalArgumentException e) {
             throw new SweepException(where + ": the certificate " + source + " is not one the sweep writes: "
                     + e.getMessage(), e);

@@ -14,9 +14,10 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 
 import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Provenance;
+import org.chirocore.cert.Source;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.family.CertificateFacts;
-import org.chirocore.family.MemberCertifier;
 import org.chirocore.family.Shard;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
@@ -26,10 +27,11 @@ import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.orient.Budget;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.pipeline.Subject;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
-import org.chirocore.search.SearchSettings;
 import org.chirocore.search.Strategy;
 import org.chirocore.search.UnsatCoreSearch;
 
@@ -236,29 +238,36 @@ public final class SweepRun {
                 return reused.get();
             }
         }
-        SearchSettings search = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
-                contracted.hyperplaneVertices());
+        CertifiedReduction.Settings pipeline = new CertifiedReduction.Settings(settings.seed(), settings.strategy(),
+                settings.budget());
+        Subject contractedSubject = Subject.of(contracted);
         Verdict contractedVerdict;
         Verdict pulledVerdict;
         Optional<PairResult.Core> core = Optional.empty();
-        SearchResult first = new UnsatCoreSearch(search, Progress.SILENT).reduce(contracted.build());
+        SearchResult first = new UnsatCoreSearch(pipeline.search(contractedSubject), Progress.SILENT)
+                .reduce(contractedSubject.matroid());
         if (first instanceof SearchResult.Found f) {
             MinimalCore m = f.core();
-            contractedVerdict = certify(m, contracted, level.resolve(id + ".contracted.cert.json"));
+            contractedVerdict = certify(CoreFinding.searched(m, contractedSubject.source()),
+                    level.resolve(id + ".contracted.cert.json"));
+            // M'/O is a minor of M': the same core, with O contracted first on the path from M'
             List<String> path = new ArrayList<>();
             path.add(c.vertex());
             path.addAll(m.contracted());
-            MinimalCore fromPulled = new MinimalCore(m.core(), path, m.deleted(), m.witnesses(), m.settings(),
-                    m.stats());
-            pulledVerdict = certify(fromPulled, pulled, level.resolve(id + ".pulled.cert.json"));
+            CoreFinding searched = CoreFinding.searched(m, contractedSubject.source());
+            CoreFinding fromPulled = new CoreFinding(m.core(), new Provenance(new Source.Constructed(pulled), path,
+                    m.deleted()), searched.witnesses(), searched.discovery());
+            pulledVerdict = certify(fromPulled, level.resolve(id + ".pulled.cert.json"));
             core = Optional.of(core(m.core()));
         } else {
             contractedVerdict = noCore(first, level, id + ".contracted");
-            SearchResult second = new UnsatCoreSearch(search, Progress.SILENT).reduce(pulled.build());
+            Subject pulledSubject = Subject.of(pulled);
+            SearchResult second = new UnsatCoreSearch(pipeline.search(pulledSubject), Progress.SILENT)
+                    .reduce(pulledSubject.matroid());
             if (second instanceof SearchResult.Found f) {
-                MinimalCore m = f.core();
-                pulledVerdict = certify(m, pulled, level.resolve(id + ".pulled.cert.json"));
-                core = Optional.of(core(m.core()));
+                pulledVerdict = certify(CoreFinding.searched(f.core(), pulledSubject.source()),
+                        level.resolve(id + ".pulled.cert.json"));
+                core = Optional.of(core(f.core().core()));
             } else {
                 pulledVerdict = noCore(second, level, id + ".pulled");
             }
@@ -270,10 +279,11 @@ public final class SweepRun {
         return result;
     }
 
-    private Verdict certify(MinimalCore core, CubeConstruction construction, Path file) throws IOException {
-        MemberCertifier.Outcome outcome = MemberCertifier.certify(core, construction, settings.budget(), file);
-        if (outcome instanceof MemberCertifier.OutOfBudget o) {
-            return new Verdict.Unknown("proving the core ran out of budget: " + o.reason());
+    /** Certifies, writes and verifies through the one certified pipeline. */
+    private Verdict certify(CoreFinding found, Path file) throws IOException {
+        CertifiedReduction.Outcome outcome = CertifiedReduction.certify(found, settings.budget(), file);
+        if (outcome instanceof CertifiedReduction.Unknown u) {
+            return new Verdict.Unknown(u.reason());
         }
         return new Verdict.NonOrientable(file.getFileName().toString());
     }
@@ -308,7 +318,7 @@ public final class SweepRun {
             return Optional.empty();
         }
         // the core is read back from the certificate, so that its description follows this version
-        ExplicitMatroid m = CertificateFacts.read(level.resolve(earlier.contractedVerdict().file())).core();
+        ExplicitMatroid m = RecordedCertificate.read(level.resolve(earlier.contractedVerdict().file())).core();
         return Optional.of(new PairResult(earlier.n(), index, earlier.normal(), earlier.offset(), earlier.hyperplane(),
                 earlier.pulled(), earlier.hyperplaneOrbit(), earlier.orbitSize(), earlier.pulledVerdict(),
                 earlier.contractedVerdict(), Optional.of(core(m))));
@@ -327,9 +337,9 @@ public final class SweepRun {
             return false;
         }
         try {
-            CertificateFacts facts = CertificateFacts.read(file);
-            return facts.construction().equals(CertificateWriter.construction(construction))
-                    && facts.seed() == settings.seed() && facts.strategy().equals(settings.strategy().id());
+            RecordedCertificate recorded = RecordedCertificate.read(file);
+            return recorded.construction().equals(CertificateWriter.construction(construction))
+                    && recorded.seed() == settings.seed() && recorded.strategy().equals(settings.strategy().id());
         } catch (IllegalArgumentException notOurs) {
             return false;
         }

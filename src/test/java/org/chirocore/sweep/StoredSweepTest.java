@@ -13,7 +13,6 @@ import java.util.stream.Stream;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
-import org.chirocore.family.CertificateFacts;
 import org.chirocore.io.Json;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -71,7 +70,7 @@ class StoredSweepTest {
                 assertTrue(c.status() == Report.Status.PASS, file + ": " + c);
             }
             assertEquals(CertificateWriter.construction(SweepRun.construction(pair.n(), pair.normal(), pair.offset(),
-                    pair.pulled(), contract)), CertificateFacts.read(file).construction(), file.toString());
+                    pair.pulled(), contract)), RecordedCertificate.read(file).construction(), file.toString());
         }
     }
 }
