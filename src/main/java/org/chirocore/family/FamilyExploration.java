@@ -9,6 +9,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Source;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ElementSets;
@@ -16,6 +18,7 @@ import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.matroid.MatroidShape;
 import org.chirocore.orient.Budget;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
@@ -85,13 +88,45 @@ public final class FamilyExploration {
         }
     }
 
-    /**
-     * A run whose core was not accepted, or that found none.
-     *
-     * @param attempt the run
-     * @param reason "filtered: …", "orientable" or "unknown: …"
-     */
-    public record Rejected(Attempt attempt, String reason) {
+    /** A run whose core was not accepted, or that found none. */
+    public sealed interface Rejected {
+        /** The run. */
+        Attempt attempt();
+
+        /** Why, as the report states it: "filtered: …", "orientable" or "unknown: …". */
+        String reason();
+
+        /**
+         * The run's core failed a constraint.
+         *
+         * @param why which constraint, in words
+         */
+        record Filtered(Attempt attempt, String why) implements Rejected {
+            @Override
+            public String reason() {
+                return "filtered: " + why;
+            }
+        }
+
+        /** The member is orientable: the run found no core. */
+        record Orientable(Attempt attempt) implements Rejected {
+            @Override
+            public String reason() {
+                return "orientable";
+            }
+        }
+
+        /**
+         * A budget ran out; nothing is claimed.
+         *
+         * @param why why, in words
+         */
+        record Unknown(Attempt attempt, String why) implements Rejected {
+            @Override
+            public String reason() {
+                return "unknown: " + why;
+            }
+        }
     }
 
     /**
@@ -293,19 +328,19 @@ public final class FamilyExploration {
             Attempt attempt = new Attempt(settings.seed(j), Settings.strategy(j));
             listener.stage(n, "run " + (j + 1) + " of " + settings.runs() + " (seed " + attempt + ")");
             SearchResult result = new UnsatCoreSearch(new SearchSettings(attempt.seed(), attempt.strategy(),
-                    settings.budget(), m.construction().hyperplaneVertices()), Progress.SILENT).reduce(m.matroid());
+                    settings.budget(), m.construction().focus()), Progress.SILENT).reduce(m.matroid());
             if (result instanceof SearchResult.Orientable) {
-                rejected.add(new Rejected(attempt, "orientable"));
+                rejected.add(new Rejected.Orientable(attempt));
                 continue;
             }
             if (result instanceof SearchResult.Unknown u) {
-                rejected.add(new Rejected(attempt, "unknown: " + u.reason()));
+                rejected.add(new Rejected.Unknown(attempt, u.reason()));
                 continue;
             }
             MinimalCore core = ((SearchResult.Found) result).core();
             String filter = filter(core.core(), kept);
             if (filter != null) {
-                rejected.add(new Rejected(attempt, "filtered: " + filter));
+                rejected.add(new Rejected.Filtered(attempt, filter));
                 continue;
             }
             int cls = classOf(core.core(), representatives, shapes);
@@ -321,14 +356,14 @@ public final class FamilyExploration {
         for (int c = 0; c < representatives.size(); c++) {
             String name = certificateName(n, c + 1);
             listener.stage(n, "certifying and verifying class " + (c + 1));
-            MemberCertifier.Outcome outcome = MemberCertifier.certify(representatives.get(c), m.construction(),
-                    settings.budget(), dir.resolve(name));
-            classes.add(outcome instanceof MemberCertifier.Written w
-                    ? new CoreClass(representatives.get(c).core(), attempts.get(c), Optional.of(Map.entry(name,
-                            w.facts())), w.verification().text())
-                    : new CoreClass(representatives.get(c).core(), attempts.get(c), Optional.empty(),
-                            "unknown: proving the core ran out of budget: "
-                                    + ((MemberCertifier.OutOfBudget) outcome).reason()));
+            MinimalCore representative = representatives.get(c);
+            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(representative,
+                    new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name));
+            classes.add(outcome instanceof CertifiedReduction.Verified
+                    ? new CoreClass(representative.core(), attempts.get(c), Optional.of(Map.entry(name,
+                            CertificateFacts.read(dir.resolve(name)))), "verified")
+                    : new CoreClass(representative.core(), attempts.get(c), Optional.empty(),
+                            "unknown: " + ((CertifiedReduction.Unknown) outcome).reason()));
         }
         return new Member(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
     }
