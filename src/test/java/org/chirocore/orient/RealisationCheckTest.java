@@ -12,6 +12,7 @@ import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.MatrixMatroid;
 import org.chirocore.matroid.Realisation;
+import org.chirocore.pipeline.IndependentCheck;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -20,8 +21,8 @@ import org.junit.jupiter.params.provider.CsvSource;
  * A matrix over Q as its own orientation witness. The theorem relied on: the signs of the maximal
  * minors of a real matrix form a chirotope whose support is the column matroid's bases (Björner,
  * Las Vergnas, Sturmfels, White, Ziegler, <i>Oriented Matroids</i>, 2nd ed., §3.5, from memory).
- * Every orientable answer here is re-checked the long way, by {@link WitnessCheck} against every
- * 3-term Grassmann–Plücker relation.
+ * Every orientable answer here is re-checked the long way, against every 3-term Grassmann–Plücker
+ * relation, by {@link WitnessCheck} and by the independent checker.
  */
 class RealisationCheckTest {
 
@@ -34,6 +35,7 @@ class RealisationCheckTest {
         assertEquals(index.basisCount(), r.bases());
         Chirotope signs = RealisationCheck.chirotope(r.witness());
         assertEquals(Optional.empty(), WitnessCheck.defect(m, signs));
+        IndependentCheck.assertOrients(m, signs);
     }
 
     /**
