@@ -77,7 +77,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 throw new ParameterException(spec.commandLine(), "--keep: " + e.getMessage());
             }
         }
-        FamilyExploration.Report report;
+        FamilyExploration.Findings report;
         Optional<ShapeFollow.Shape> shape;
         try {
             shape = follow == null ? Optional.empty() : Optional.of(ShapeFollow.Shape.parse(follow));
@@ -94,13 +94,13 @@ final class FamilyExploreCommand implements Callable<Integer> {
             throw new BadInputException(out + ": cannot write the exploration's files: " + e, e);
         }
         PrintWriter w = spec.commandLine().getOut();
-        for (FamilyExploration.Member m : report.members()) {
+        for (FamilyExploration.MemberFindings m : report.members()) {
             w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
                     + " of cores, " + m.rejected().size() + " of " + runs + " runs filtered or without a core");
             for (FamilyExploration.CoreClass c : m.classes()) {
                 w.println("  " + Format.shape(c.core().rank(), c.core().size(), c.core().basisCount()) + " x "
                         + c.attempts().size() + "; " + c.status()
-                        + c.certificate().map(f -> "; " + out.resolve(f.getKey())).orElse(""));
+                        + c.certificate().map(f -> "; " + out.resolve(f.file())).orElse(""));
             }
         }
         w.println("wrote " + out.resolve(FamilyExploration.EXPLORE_MD) + " and "
@@ -108,7 +108,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 + shape.map(x -> ", " + out.resolve(ShapeFollow.FOLLOW_MD) + " and " + out.resolve(ShapeFollow.FOLLOW_JSON))
                         .orElse(""));
         boolean unknown = report.members().stream().anyMatch(m -> m.classes().stream()
-                .anyMatch(c -> c.certificate().isEmpty()) || m.rejected().stream()
+                .anyMatch(c -> c.certification() instanceof FamilyExploration.ClassCertificate.Unknown) || m.rejected().stream()
                 .anyMatch(r -> r instanceof FamilyExploration.Rejected.Unknown));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
     }

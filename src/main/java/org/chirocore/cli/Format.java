@@ -5,12 +5,21 @@ import java.util.Optional;
 
 import org.chirocore.matroid.NamedMatroid;
 
+import org.chirocore.pipeline.CertifiedReduction;
+
 /** Wording shared by the commands' summaries. */
 final class Format {
     private Format() {
     }
 
     /** "rank 3 on 7 elements". */
+    /** "verified by the independent checker in T ms", naming any check that did not run. */
+    static String verified(CertifiedReduction.Checked checked) {
+        return "verified by the independent checker in " + checked.verifyMillis() + " ms"
+                + (checked.notChecked().isEmpty() ? ""
+                        : "; not checked: " + String.join(", ", checked.notChecked()) + " (run verify with --input)");
+    }
+
     static String shape(int rank, int elements) {
         return "rank " + rank + " on " + elements + " element" + (elements == 1 ? "" : "s");
     }

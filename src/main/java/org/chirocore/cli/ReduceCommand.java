@@ -72,7 +72,8 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
             description = "Where to write the certificate of the core (written atomically; a large proof goes "
-                    + "beside it as NAME.drat.gz). Nothing is written unless a core is found.")
+                    + "beside it as NAME.drat.gz) and checked by the independent verifier. Nothing is written unless "
+                    + "a core is found.")
     private Path out;
 
     @Option(names = "--witness-out", paramLabel = "FILE",
@@ -150,8 +151,6 @@ final class ReduceCommand implements Callable<Integer> {
         CertificateWriter.Written written = v.written();
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
                 + written.dratFile().map(d -> " and " + d).orElse(""));
-        w.println("verified by the independent checker in " + v.verifyMillis() + " ms"
-                + (v.notChecked().isEmpty() ? "" : "; not checked: " + String.join(", ", v.notChecked())
-                        + " (run verify with --input)"));
+        w.println(Format.verified(v.verification()));
     }
 }

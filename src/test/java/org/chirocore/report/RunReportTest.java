@@ -107,6 +107,17 @@ class RunReportTest {
     }
 
     @Test
+    void sweepIsReportedWithItsClasses() {
+        Path sweep = Path.of("certificates/sweep");
+        assertTrue(RunReport.kindOf(sweep) instanceof SweepRunKind);
+        String tex = ReportFormat.TEX.render(RunReport.of(sweep), "sweep").text();
+        // docs/sweep.md: the n = 3 pair's core is F7; AG(2,3)\e occurs among the others
+        assertAll(() -> assertEquals("", Structure.latexProblem(tex)),
+                () -> assertTrue(tex.contains("$F_7$") && tex.contains("$AG(2,3)\\setminus e$"), "classes named"),
+                () -> assertEquals(23, count(tex, "\\subsection*{n = "), "one section per pair (23 pairs, docs/sweep.md)"));
+    }
+
+    @Test
     void aDirectoryOfNoKnownKindIsRefused(@TempDir Path dir) {
         ReportException e = assertThrows(ReportException.class, () -> RunReport.of(dir));
         assertTrue(e.getMessage().contains("not a run directory"), e.getMessage());

@@ -131,11 +131,11 @@ class StoredCertificateReportsTest {
     }
 
     static Stream<Path> latexSubjects() throws IOException {
-        return Stream.concat(certificates().stream(), Stream.of(Path.of("families/corner")));
+        return Stream.concat(certificates().stream(), Stream.of(Path.of("families/corner"), Path.of("certificates/sweep")));
     }
 
     /**
-     * Compiles the LaTeX report of every stored certificate and of the corner family inside a
+     * Compiles the LaTeX report of every stored certificate, of the corner family and of the stored sweep inside a
      * plain article with tikz, when pdflatex is installed (texlive-latex-base and
      * texlive-pictures); the log must show no overfull box. Skipped, saying so, without pdflatex;
      * the structural test above runs always.
