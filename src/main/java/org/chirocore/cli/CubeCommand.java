@@ -8,13 +8,13 @@ import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.CubeReport;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -36,7 +36,8 @@ final class CubeCommand implements Callable<Integer> {
 
     @Option(names = "--save", paramLabel = "FILE",
             description = "Write the pulled matroid (needs --hyperplane and --pull) to FILE as a matroid file with "
-                    + "its bases, at most 64 elements.")
+                    + "its bases: at most " + Limits.ELEMENTS + " elements and " + Limits.EXPLICIT_SUBSETS
+                    + " subsets of the rank's size (n <= 5).")
     private Path save;
 
     @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
@@ -69,10 +70,8 @@ final class CubeCommand implements Callable<Integer> {
         if (save != null) {
             Inputs.requireDirectoryOf(save);
             Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
-            if (m.size() > ExplicitMatroid.MAX_ELEMENTS) {
-                throw new ParameterException(spec.commandLine(), "--save writes at most " + ExplicitMatroid.MAX_ELEMENTS
-                        + " elements as bases; this matroid has " + m.size() + ".");
-            }
+            // Checked before the C(n, r) rank tests of the enumeration, which are the long part.
+            Limits.requireExplicit(m.size(), m.rank(), "--save " + save + ": the pulled matroid");
             Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(m)));
             out.println("wrote " + save + " (rank " + m.rank() + " on " + m.size() + " elements)");
         }

@@ -12,6 +12,8 @@ import java.util.TreeMap;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
 import org.chirocore.search.Strategy;
@@ -82,7 +84,9 @@ public final class FamilyMerge {
     private static Json.Obj readTable(Path shard) throws IOException {
         Path file = shard.resolve(FamilyRun.TABLE_JSON);
         try {
-            return Json.parseUtf8(Files.readAllBytes(file)).asObject("the table");
+            return Json.parseUtf8(InputFiles.read(file)).asObject("the table");
+        } catch (IOException e) {
+            throw new FamilyException(file + ": cannot read the shard's table: " + IoMessages.plain(e), e);
         } catch (IllegalArgumentException e) {
             throw new FamilyException(file + ": " + e.getMessage(), e);
         }

@@ -10,6 +10,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
 
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -71,7 +73,7 @@ public final class FamilyPrediction {
         public static Prediction read(Path file) {
             String source = file.toString();
             try {
-                Json.Obj o = Json.parseUtf8(Files.readAllBytes(file)).asObject("the prediction");
+                Json.Obj o = Json.parseUtf8(InputFiles.read(file)).asObject("the prediction");
                 o.requireOnly(FIELDS);
                 if (o.has("members") == o.has("rule")) {
                     throw new FamilyException(source + ": give either \"members\" (a core per n) or \"rule\" "
@@ -108,7 +110,7 @@ public final class FamilyPrediction {
                 }
                 return new Prediction(source, o.requireString("family"), candidates);
             } catch (IOException e) {
-                throw new FamilyException(source + ": cannot read the file: " + e.getMessage(), e);
+                throw new FamilyException(source + ": cannot read the file: " + IoMessages.plain(e), e);
             } catch (FamilyException e) {
                 throw e;
             } catch (IllegalArgumentException e) {
