@@ -2,6 +2,7 @@ package org.chirocore.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.io.MatroidFiles;
@@ -34,6 +35,9 @@ final class CubeCommand implements Callable<Integer> {
     @Mixin
     private ConstructionOptions construction;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--save", paramLabel = "FILE",
             description = "Write the pulled matroid (needs --hyperplane and --pull) to FILE as a matroid file with "
                     + "its bases: at most " + Limits.ELEMENTS + " elements and " + Limits.EXPLICIT_SUBSETS
@@ -46,6 +50,7 @@ final class CubeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        output.checkFiles(List.of(), save);
         CubeReport r;
         try {
             r = CubeReport.of(n, construction.field(), construction.hyperplane(), construction.pull());
@@ -68,7 +73,6 @@ final class CubeCommand implements Callable<Integer> {
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
         if (save != null) {
-            Inputs.requireDirectoryOf(save);
             Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
             // Checked before the C(n, r) rank tests of the enumeration, which are the long part.
             Limits.requireExplicit(m.size(), m.rank(), "--save " + save + ": the pulled matroid");

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
@@ -90,12 +91,17 @@ final class FamilyCommand implements Callable<Integer> {
                     + "family-merge.")
     private String shard;
 
+    @Option(names = "--progress", description = "Print progress lines on standard error even when it is not a "
+            + "terminal (e.g. a batch job's log file).")
+    private boolean progress;
+
     @Mixin
     private BudgetOptions budget;
 
     @Override
     public Integer call() {
         int[] bounds = bounds();
+        OutputOptions.checkRunDirectory(out, Arrays.asList(file, predict));
         if (threads < 1) {
             throw new ParameterException(spec.commandLine(), "--threads must be at least 1, not " + threads + ".");
         }
@@ -128,27 +134,16 @@ final class FamilyCommand implements Callable<Integer> {
         try {
             FamilyDefinition family = FamilyDefinition.read(file);
             FamilyRun.Settings settings = new FamilyRun.Settings(seed, Strategy.CONTRACT_FIRST, budget.budget(), threads);
-            table = new FamilyRun(family, out, settings, FamilyConsole.ifInteractive(spec.commandLine().getErr()))
-                    .run(bounds[0], bounds[1], shard());
+            table = new FamilyRun(family, out, settings, console()).run(bounds[0], bounds[1], shard());
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot write the family's files: " + e, e);
         }
+        // The member lines were printed by the console as each member completed.
         PrintWriter w = spec.commandLine().getOut();
-        boolean unknown = false;
-        for (FamilyTable.Row row : table.rows()) {
-            MemberResult m = row.member();
-            if (m instanceof MemberResult.Certified c) {
-                w.println("n = " + m.n() + ": core " + Format.shape(c.facts().core().rank(), c.facts().core().size(),
-                        c.facts().core().basisCount()) + "; " + c.verification().text()
-                        + (c.reused() ? " (reused)" : "") + "; " + out.resolve(c.certificate()));
-            } else {
-                String reason = ((MemberResult.NoCore) m).reason();
-                unknown |= reason.startsWith("unknown");
-                w.println("n = " + m.n() + ": " + reason);
-            }
-        }
+        boolean unknown = table.rows().stream().anyMatch(row -> row.member() instanceof MemberResult.NoCore c
+                && c.reason().startsWith("unknown"));
         w.println("wrote " + out.resolve(FamilyRun.TABLE_MD) + " and " + out.resolve(FamilyRun.TABLE_JSON));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
     }
@@ -176,7 +171,7 @@ final class FamilyCommand implements Callable<Integer> {
             FamilyDefinition family = FamilyDefinition.read(file);
             FamilyExploration.Settings settings = new FamilyExploration.Settings(seed, explore, budget.budget(), rules,
                     targetRank == null ? OptionalInt.empty() : OptionalInt.of(targetRank));
-            report = new FamilyExploration(family, out, settings, FamilyConsole.ifInteractive(spec.commandLine().getErr()))
+            report = new FamilyExploration(family, out, settings, console())
                     .run(bounds[0], bounds[1]);
             if (shape.isPresent()) {
                 ShapeFollow.write(out, shape.get(), ShapeFollow.follow(report, shape.get()));
@@ -234,6 +229,11 @@ final class FamilyCommand implements Callable<Integer> {
             }
         }
         return exit;
+    }
+
+    /** Member lines on standard output as they complete; progress on standard error. */
+    private FamilyConsole console() {
+        return FamilyConsole.of(spec.commandLine().getOut(), spec.commandLine().getErr(), progress, out);
     }
 
     /** The part of --n to run: --shard, or all of it. */

@@ -1,7 +1,6 @@
 package org.chirocore.cli;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
@@ -9,6 +8,7 @@ import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Source;
 import org.chirocore.io.AtomicFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.io.MatroidFileException;
 import org.chirocore.io.MatroidFiles;
@@ -59,24 +59,12 @@ final class Inputs {
         }
     }
 
-    /**
-     * Fails early when {@code file}'s directory does not exist, so a long search is not wasted on
-     * an output that cannot be written.
-     */
-    static void requireDirectoryOf(Path file) {
-        Path parent = file.toAbsolutePath().getParent();
-        if (parent == null || !Files.isDirectory(parent)) {
-            throw new BadInputException(file + ": cannot write the file: the directory " + parent + " does not exist",
-                    null);
-        }
-    }
-
     /** Writes {@code certificate} to {@code file} atomically (and its proof beside it when large). */
     static CertificateWriter.Written write(Path file, Certificate certificate) {
         try {
             return CertificateWriter.write(certificate, file);
         } catch (IOException e) {
-            throw new BadInputException(file + ": cannot write the certificate: " + e, e);
+            throw new BadInputException(file + ": cannot write the certificate: " + IoMessages.plain(e), e);
         }
     }
 
@@ -85,7 +73,7 @@ final class Inputs {
         try {
             AtomicFiles.writeJson(file, json);
         } catch (IOException e) {
-            throw new BadInputException(file + ": cannot write the file: " + e, e);
+            throw new BadInputException(file + ": cannot write the file: " + IoMessages.plain(e), e);
         }
     }
 
@@ -94,7 +82,7 @@ final class Inputs {
         try {
             AtomicFiles.writeString(file, text);
         } catch (IOException e) {
-            throw new BadInputException(file + ": cannot write the file: " + e, e);
+            throw new BadInputException(file + ": cannot write the file: " + IoMessages.plain(e), e);
         }
     }
 }

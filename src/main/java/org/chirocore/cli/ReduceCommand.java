@@ -2,6 +2,7 @@ package org.chirocore.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.Callable;
 
@@ -70,6 +71,9 @@ final class ReduceCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--out", paramLabel = "FILE", required = true,
             description = "Where to write the certificate of the core (written atomically; a large proof goes "
                     + "beside it as NAME.drat.gz). Nothing is written unless a core is found.")
@@ -81,11 +85,8 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        output.checkFiles(Arrays.asList(file), out, witnessOut);
         Inputs.Input input = input();
-        Inputs.requireDirectoryOf(out);
-        if (witnessOut != null) {
-            Inputs.requireDirectoryOf(witnessOut);
-        }
         SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
                 focus ? input.focus() : List.of());
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());

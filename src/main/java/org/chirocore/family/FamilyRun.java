@@ -63,13 +63,21 @@ public final class FamilyRun {
         }
     }
 
-    /** Receives the stage each member is in ("reducing", "certifying", …); called from worker threads. */
+    /**
+     * Receives the stage each member is in ("reducing", "certifying", …) and each member's result
+     * as soon as it is complete, so a batch job's log holds every finished member even when the
+     * job is stopped; called from worker threads.
+     */
     @FunctionalInterface
     public interface Listener {
         /** A listener that ignores everything. */
         Listener SILENT = (n, stage) -> { };
 
         void stage(int n, String stage);
+
+        /** The member's result, its certificate (if any) written and verified; by default ignored. */
+        default void finished(MemberResult member) {
+        }
     }
 
     private final FamilyDefinition family;
@@ -131,7 +139,11 @@ public final class FamilyRun {
         try {
             List<Future<MemberResult>> futures = new ArrayList<>();
             for (FamilyDefinition.Member m : members) {
-                futures.add(pool.submit(() -> member(m)));
+                futures.add(pool.submit(() -> {
+                    MemberResult result = member(m);
+                    listener.finished(result);
+                    return result;
+                }));
             }
             for (Future<MemberResult> f : futures) {
                 results.add(f.get());
@@ -145,7 +157,7 @@ public final class FamilyRun {
             pool.shutdownNow();
         }
         FamilyTable table = FamilyTable.of(family, settings, results);
-        table.write(dir);
+        table.write(dir, from, to, shard);
         return table;
     }
 
