@@ -37,7 +37,9 @@ final class OutputOptions {
             try {
                 OutputCheck.file(output, present(inputs), force);
                 // Two outputs under one name would overwrite each other.
-                OutputCheck.file(output, given, true);
+                for (Path earlier : given) {
+                    OutputCheck.distinct(earlier, output);
+                }
             } catch (OutputRefusedException e) {
                 throw new BadInputException(e.getMessage(), e);
             }

@@ -77,9 +77,8 @@ public final class AtomicFiles {
      */
     public static void copy(Path source, Path target) throws IOException {
         replace(target, temp -> {
-            try (InputStream in = Files.newInputStream(source);
-                    FileChannel channel = FileChannel.open(temp, StandardOpenOption.CREATE_NEW,
-                            StandardOpenOption.WRITE)) {
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
+                    InputStream in = Files.newInputStream(source)) {
                 byte[] buffer = new byte[1 << 16];
                 for (int read = in.read(buffer); read >= 0; read = in.read(buffer)) {
                     ByteBuffer b = ByteBuffer.wrap(buffer, 0, read);

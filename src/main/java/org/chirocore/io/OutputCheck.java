@@ -77,6 +77,17 @@ public final class OutputCheck {
         }
     }
 
+    /**
+     * Checks that two outputs of one command are different files.
+     *
+     * @throws OutputRefusedException when {@code a} and {@code b} name the same file
+     */
+    public static void distinct(Path a, Path b) {
+        if (real(a).equals(real(b))) {
+            throw new OutputRefusedException(b + ": names the same file as " + a + "; give each output its own name.");
+        }
+    }
+
     private static void notAnInput(Path output, Collection<Path> inputs) {
         Optional<Path> real = real(output);
         for (Path input : inputs) {
