@@ -68,8 +68,10 @@ public final class OutputCheck {
         }
         writable(existing, dir);
         for (String name : names) {
+            notAnInput(dir.resolve(name), inputs);
+        }
+        for (String name : names) {
             Path file = dir.resolve(name);
-            notAnInput(file, inputs);
             if (Files.exists(file) && !overwrite) {
                 throw new OutputRefusedException(file + ": the file already exists; give --force to replace it, or "
                         + "choose another directory.");
