@@ -15,7 +15,7 @@ import java.util.zip.GZIPOutputStream;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
-import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.Construction;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.GpRelation;
@@ -131,15 +131,26 @@ public final class CertificateWriter {
         }
     }
 
-    /** The {@code provenance.construction} member describing {@code c}. */
-    public static Json.Obj construction(CubeConstruction c) {
-        return Json.Obj.builder()
-                .put("cube", c.n())
-                .put("field", c.field().name())
-                .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices()))
-                .put("pulled", c.pulledVertex())
-                .put("contractPulled", c.contractPulled())
-                .build();
+    /** The {@code provenance.construction} member describing {@code c}: its parts, in order. */
+    public static Json.Obj construction(Construction c) {
+        Json.Obj.Builder b = Json.Obj.builder();
+        for (Construction.Part part : c.provenance()) {
+            b.put(part.name(), json(part.value()));
+        }
+        return b.build();
+    }
+
+    private static Json json(Object value) {
+        if (value instanceof Integer i) {
+            return Json.Num.of(i);
+        }
+        if (value instanceof Boolean z) {
+            return new Json.Bool(z);
+        }
+        if (value instanceof String t) {
+            return new Json.Str(t);
+        }
+        return Json.Arr.ofStrings(((List<?>) value).stream().map(String.class::cast).toList());
     }
 
     private static Json.Obj provenance(Provenance p) {
@@ -191,15 +202,23 @@ public final class CertificateWriter {
 
     private static Json.Obj run(Certificate c) {
         SolveStats s = c.refutation().stats().solve();
-        return Json.Obj.builder()
-                .put("search", Json.Obj.builder()
-                        .put("seed", c.settings().seed())
-                        .put("strategy", c.settings().strategy().id())
-                        .put("decisions", c.searchStats().decisions())
-                        .put("grownTo", c.searchStats().grownTo())
-                        .put("millis", c.searchStats().millis())
-                        .build())
-                .put("refutation", Json.Obj.builder()
+        Json.Obj.Builder run = Json.Obj.builder();
+        if (c.discovery() instanceof Discovery.Searched d) {
+            run.put("search", Json.Obj.builder()
+                    .put("seed", d.seed())
+                    .put("strategy", d.strategy().id())
+                    .put("decisions", d.stats().decisions())
+                    .put("grownTo", d.stats().grownTo())
+                    .put("millis", d.stats().millis())
+                    .build());
+        } else {
+            Discovery.Predicted p = (Discovery.Predicted) c.discovery();
+            run.put("prediction", Json.Obj.builder()
+                    .put("decisions", p.decisions())
+                    .put("millis", p.millis())
+                    .build());
+        }
+        return run.put("refutation", Json.Obj.builder()
                         .put("bases", s.bases())
                         .put("relations", c.refutation().relations().size())
                         .put("clauses", s.clauses())

@@ -1,21 +1,21 @@
 package org.chirocore.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Arrays;
-import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.Certification;
+import org.chirocore.cert.Discovery;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.Refutation;
-import org.chirocore.search.MinimalCore;
-import org.chirocore.search.SearchResult;
-import org.chirocore.search.SearchSettings;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.pipeline.Subject;
 import org.chirocore.search.Strategy;
-import org.chirocore.search.UnsatCoreSearch;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -27,7 +27,8 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code chirocore reduce}: reduces a matroid file or a cube construction to a minor-minimal
- * non-orientable minor and writes its certificate (docs/certificate-format.md). An orientable
+ * non-orientable minor, writes its certificate (docs/certificate-format.md) and verifies the written
+ * file with the independent checker, all through {@link CertifiedReduction}. An orientable
  * input or an exhausted budget gives no certificate: a certificate only ever states minimal
  * non-orientability.
  */
@@ -86,37 +87,37 @@ final class ReduceCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         output.checkFiles(Arrays.asList(file), out, witnessOut);
-        Inputs.Input input = input();
-        SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
-                focus ? input.focus() : List.of());
+        Subject input = input();
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
-        SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
-        progress.finish();
+        CertifiedReduction.Outcome outcome;
+        try {
+            outcome = new CertifiedReduction(new CertifiedReduction.Settings(seed, strategy, budget.budget()), progress)
+                    .run(focus ? input : input.withoutFocus(), out);
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot write the certificate: " + IoMessages.plain(e), e);
+        } finally {
+            progress.finish();
+        }
         PrintWriter w = spec.commandLine().getOut();
         String from = Format.shape(input.matroid().rank(), input.matroid().size());
-        if (result instanceof SearchResult.Found f) {
-            Certification certification = Certification.of(f.core(), input.source(), settings.budget());
-            if (certification instanceof Certification.OutOfBudget o) {
-                w.println("unknown: a core was found, but proving it for the certificate ran out of budget: "
-                        + o.reason() + "; no certificate written");
-                return ExitCodes.UNKNOWN;
-            }
-            Certificate certificate = ((Certification.Certified) certification).certificate();
-            summarise(w, from, f.core(), certificate, Inputs.write(out, certificate));
-        } else if (result instanceof SearchResult.Orientable o) {
+        if (outcome instanceof CertifiedReduction.Verified v) {
+            summarise(w, from, v);
+            return ExitCodes.OK;
+        }
+        if (outcome instanceof CertifiedReduction.Orientable o) {
             w.println("orientable: " + from + "; no non-orientable minor to find, no certificate written");
             if (witnessOut != null) {
                 Inputs.write(witnessOut, ResultJson.chirotope(o.witness()));
                 w.println("wrote the witness to " + witnessOut);
             }
-        } else if (result instanceof SearchResult.Unknown u) {
-            w.println("unknown: " + u.reason() + "; no certificate written");
+            return ExitCodes.OK;
         }
-        return ExitCodes.of(result);
+        w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
+        return ExitCodes.UNKNOWN;
     }
 
     /** The input chosen by exactly one of FILE and --cube. */
-    private Inputs.Input input() {
+    private Subject input() {
         if ((file == null) == (cube == null)) {
             throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
                     + (file == null ? "neither was given." : "both were given."));
@@ -131,20 +132,27 @@ final class ReduceCommand implements Callable<Integer> {
         return Inputs.read(file);
     }
 
-    private static void summarise(PrintWriter w, String from, MinimalCore core, Certificate certificate,
-            CertificateWriter.Written written) {
-        w.println("non-orientable core: " + Format.shape(core.core().rank(), core.core().size(),
-                core.core().basisCount()) + " (from " + from + ")");
-        w.println("contracted: " + Format.labels(core.contracted()));
-        w.println("deleted: " + Format.labels(core.deleted()));
-        w.println("witnesses: " + core.witnesses().size()
+    private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {
+        Certificate certificate = v.certificate();
+        ExplicitMatroid core = certificate.core();
+        w.println("non-orientable core: " + Format.shape(core.rank(), core.size(), core.basisCount()) + " (from "
+                + from + ")");
+        w.println("contracted: " + Format.labels(certificate.provenance().contracted()));
+        w.println("deleted: " + Format.labels(certificate.provenance().deleted()));
+        w.println("witnesses: " + 2 * certificate.minimality().size()
                 + " (every single-element deletion and contraction is orientable)");
-        w.println("search: " + core.stats().millis() + " ms, " + core.stats().decisions() + " decisions");
+        if (certificate.discovery() instanceof Discovery.Searched s) {
+            w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
+        }
         Refutation proof = certificate.refutation();
         w.println("proof: " + proof.relations().size() + " relations, " + proof.stats().lemmas() + " lemmas, "
                 + proof.stats().deletions() + " deletions, " + proof.drat().length() + " bytes of DRAT, "
                 + proof.stats().solve().millis() + " ms");
+        CertificateWriter.Written written = v.written();
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
                 + written.dratFile().map(d -> " and " + d).orElse(""));
+        w.println("verified by the independent checker in " + v.verifyMillis() + " ms"
+                + (v.notChecked().isEmpty() ? "" : "; not checked: " + String.join(", ", v.notChecked())
+                        + " (run verify with --input)"));
     }
 }

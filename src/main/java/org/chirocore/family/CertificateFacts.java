@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
@@ -16,16 +17,25 @@ import org.chirocore.matroid.ExplicitMatroid;
  * @param sha256 the content digest
  * @param core the core
  * @param construction the {@code provenance.construction} member
- * @param seed the search seed recorded in {@code run}
- * @param strategy the search strategy recorded in {@code run}
+ * @param search the seed and strategy recorded in {@code run}, empty for a predicted core
  * @param relations the number of 3-term relations of the proof
  * @param lemmas the DRAT lemmas
  * @param dratBytes the size of the DRAT proof
- * @param searchMillis the reduction's wall-clock time, as recorded when it was written
+ * @param searchMillis the wall-clock time of finding the core (the reduction's, or the check of
+ *     a predicted core), as recorded when it was written
  * @param refutationMillis the proof-logging refutation's wall-clock time, as recorded
  */
-public record CertificateFacts(String sha256, ExplicitMatroid core, Json.Obj construction, long seed, String strategy,
+public record CertificateFacts(String sha256, ExplicitMatroid core, Json.Obj construction, Optional<Search> search,
         int relations, long lemmas, long dratBytes, long searchMillis, long refutationMillis) {
+
+    /**
+     * The search that found a core, as recorded.
+     *
+     * @param seed its seed
+     * @param strategy its strategy's name
+     */
+    public record Search(long seed, String strategy) {
+    }
 
     /**
      * Reads the facts of the certificate in {@code file}.
@@ -54,12 +64,19 @@ public record CertificateFacts(String sha256, ExplicitMatroid core, Json.Obj con
             bases.add(basis);
         }
         Json.Obj run = doc.requireObject("run");
-        Json.Obj search = run.requireObject("search");
         Json.Obj refutation = run.requireObject("refutation");
+        Optional<Search> search = Optional.empty();
+        Json.Obj found;
+        if (run.has("search")) {
+            found = run.requireObject("search");
+            search = Optional.of(new Search(found.requireLong("seed"), found.requireString("strategy")));
+        } else {
+            found = run.requireObject("prediction");
+        }
         return new CertificateFacts(doc.requireString("sha256"),
                 ExplicitMatroid.fromBases(labels, core.requireInt("rank"), bases),
-                content.requireObject("provenance").requireObject("construction"), search.requireLong("seed"),
-                search.requireString("strategy"), refutation.requireInt("relations"), refutation.requireLong("lemmas"),
-                refutation.requireLong("dratBytes"), search.requireLong("millis"), refutation.requireLong("millis"));
+                content.requireObject("provenance").requireObject("construction"), search,
+                refutation.requireInt("relations"), refutation.requireLong("lemmas"),
+                refutation.requireLong("dratBytes"), found.requireLong("millis"), refutation.requireLong("millis"));
     }
 }

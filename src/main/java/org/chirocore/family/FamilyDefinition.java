@@ -9,6 +9,7 @@ import java.util.Set;
 import java.util.function.Supplier;
 
 import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.Source;
 import org.chirocore.io.InputFiles;
 import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
@@ -18,6 +19,7 @@ import org.chirocore.matroid.Field;
 import org.chirocore.matroid.GeneralPositionException;
 import org.chirocore.matroid.InvalidHyperplaneException;
 import org.chirocore.matroid.Matroid;
+import org.chirocore.pipeline.Subject;
 
 /**
  * A family of cube constructions, one per cube dimension n in a range: the field, a rule for the
@@ -59,6 +61,10 @@ public record FamilyDefinition(String source, String name, String description, F
      * @param matroid the pulled cube, contracted by O when the family says so
      */
     public record Member(CubeConstruction construction, Matroid matroid) {
+        /** The member as the pipeline's subject: its matroid, provenance and focus (H's vertices). */
+        public Subject subject() {
+            return new Subject(matroid, new Source.Constructed(construction), construction.focus());
+        }
     }
 
     /**

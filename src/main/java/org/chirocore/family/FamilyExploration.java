@@ -9,6 +9,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Source;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ElementSets;
@@ -16,6 +18,7 @@ import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.matroid.MatroidShape;
 import org.chirocore.orient.Budget;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
@@ -293,7 +296,7 @@ public final class FamilyExploration {
             Attempt attempt = new Attempt(settings.seed(j), Settings.strategy(j));
             listener.stage(n, "run " + (j + 1) + " of " + settings.runs() + " (seed " + attempt + ")");
             SearchResult result = new UnsatCoreSearch(new SearchSettings(attempt.seed(), attempt.strategy(),
-                    settings.budget(), m.construction().hyperplaneVertices()), Progress.SILENT).reduce(m.matroid());
+                    settings.budget(), m.construction().focus()), Progress.SILENT).reduce(m.matroid());
             if (result instanceof SearchResult.Orientable) {
                 rejected.add(new Rejected(attempt, "orientable"));
                 continue;
@@ -321,14 +324,14 @@ public final class FamilyExploration {
         for (int c = 0; c < representatives.size(); c++) {
             String name = certificateName(n, c + 1);
             listener.stage(n, "certifying and verifying class " + (c + 1));
-            MemberCertifier.Outcome outcome = MemberCertifier.certify(representatives.get(c), m.construction(),
-                    settings.budget(), dir.resolve(name));
-            classes.add(outcome instanceof MemberCertifier.Written w
-                    ? new CoreClass(representatives.get(c).core(), attempts.get(c), Optional.of(Map.entry(name,
-                            w.facts())), w.verification().text())
-                    : new CoreClass(representatives.get(c).core(), attempts.get(c), Optional.empty(),
-                            "unknown: proving the core ran out of budget: "
-                                    + ((MemberCertifier.OutOfBudget) outcome).reason()));
+            MinimalCore representative = representatives.get(c);
+            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(representative,
+                    new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name));
+            classes.add(outcome instanceof CertifiedReduction.Verified
+                    ? new CoreClass(representative.core(), attempts.get(c), Optional.of(Map.entry(name,
+                            CertificateFacts.read(dir.resolve(name)))), Verification.VERIFIED.text())
+                    : new CoreClass(representative.core(), attempts.get(c), Optional.empty(),
+                            "unknown: " + ((CertifiedReduction.Unknown) outcome).reason()));
         }
         return new Member(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
     }

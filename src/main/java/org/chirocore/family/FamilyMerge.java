@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -184,7 +185,7 @@ public final class FamilyMerge {
         }
         CertificateFacts facts = CertificateFacts.read(target);
         if (!facts.construction().equals(CertificateWriter.construction(family.construction(n)))
-                || facts.seed() != seed || !facts.strategy().equals(strategy.id())) {
+                || !facts.search().equals(Optional.of(new CertificateFacts.Search(seed, strategy.id())))) {
             throw new FamilyException(source + ": the certificate of n = " + n + " records another construction, "
                     + "seed or strategy than " + family.source() + " with seed " + seed + " and " + strategy.id() + ".");
         }

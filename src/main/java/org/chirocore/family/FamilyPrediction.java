@@ -10,6 +10,10 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
 
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Discovery;
+import org.chirocore.cert.Provenance;
+import org.chirocore.cert.Source;
 import org.chirocore.io.InputFiles;
 import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
@@ -19,11 +23,8 @@ import org.chirocore.matroid.Minor;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.Orientability;
-import org.chirocore.search.MinimalCore;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.MinimalityProof;
-import org.chirocore.search.SearchSettings;
-import org.chirocore.search.SearchStats;
-import org.chirocore.search.Strategy;
 
 /**
  * Checks a predicted core of each member of a family without searching: the prediction names,
@@ -216,6 +217,7 @@ public final class FamilyPrediction {
         used.addAll(contract);
         List<String> deleted = m.labels().stream().filter(l -> !used.contains(l)).toList();
         ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, indices(m, contract), indices(m, deleted)));
+        long start = System.nanoTime();
         Orientability answer = new LazySatDecider(budget).decide(minor);
         if (answer instanceof Orientability.Unknown u) {
             return new Unknown(n, u.reason());
@@ -235,17 +237,15 @@ public final class FamilyPrediction {
             return new Refuted(n, "not minimal: contracting " + minor.labels().get(c.element()) + " leaves a "
                     + "non-orientable minor");
         }
-        // the minimality check's order is the element order, contractions first; seed 0 stands for it
-        MinimalCore found = new MinimalCore(minor, contract, deleted, ((MinimalityProof.Minimal) proof).witnesses(),
-                new SearchSettings(0, Strategy.CONTRACT_FIRST, budget), new SearchStats(1 + 2 * minor.size(),
-                        minor.size(), 0));
+        CoreFinding found = new CoreFinding(minor, new Provenance(new Source.Constructed(member.construction()),
+                contract, deleted), ((MinimalityProof.Minimal) proof).witnesses(),
+                new Discovery.Predicted(1 + 2 * minor.size(), (System.nanoTime() - start) / 1_000_000));
         String name = certificateName(n);
-        MemberCertifier.Outcome written = MemberCertifier.certify(found, member.construction(), budget,
-                dir.resolve(name));
-        if (written instanceof MemberCertifier.OutOfBudget o) {
-            return new Unknown(n, "proving the core ran out of budget: " + o.reason());
+        CertifiedReduction.Outcome written = CertifiedReduction.certify(found, budget, dir.resolve(name));
+        if (written instanceof CertifiedReduction.Unknown u) {
+            return new Unknown(n, u.reason());
         }
-        return new Confirmed(n, name, ((MemberCertifier.Written) written).facts());
+        return new Confirmed(n, name, CertificateFacts.read(dir.resolve(name)));
     }
 
     /** The labels of {@code rules} at n, each an element of {@code m}, none twice, none in {@code kept}. */

@@ -15,11 +15,9 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
 import org.chirocore.orient.Budget;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.Progress;
-import org.chirocore.search.SearchResult;
-import org.chirocore.search.SearchSettings;
 import org.chirocore.search.Strategy;
-import org.chirocore.search.UnsatCoreSearch;
 
 /**
  * Runs a family over a range of n: for each n, builds the member (checking that H is a
@@ -174,26 +172,19 @@ public final class FamilyRun {
                 return reused.get();
             }
         }
-        listener.stage(n, "reducing");
-        SearchSettings search = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
-                m.construction().hyperplaneVertices());
-        SearchResult result = new UnsatCoreSearch(search, Progress.SILENT).reduce(m.matroid());
-        if (result instanceof SearchResult.Orientable) {
+        listener.stage(n, "reducing, certifying and verifying");
+        CertifiedReduction.Outcome outcome = new CertifiedReduction(new CertifiedReduction.Settings(settings.seed(),
+                settings.strategy(), settings.budget()), Progress.SILENT).run(m.subject(), file);
+        if (outcome instanceof CertifiedReduction.Orientable) {
             return noCore(n, elements, rank, file, "orientable");
         }
-        if (result instanceof SearchResult.Unknown u) {
+        if (outcome instanceof CertifiedReduction.Unknown u) {
             return noCore(n, elements, rank, file, "unknown: " + u.reason());
         }
-        listener.stage(n, "certifying and verifying");
-        MemberCertifier.Outcome outcome = MemberCertifier.certify(((SearchResult.Found) result).core(),
-                m.construction(), settings.budget(), file);
-        if (outcome instanceof MemberCertifier.OutOfBudget o) {
-            return noCore(n, elements, rank, file, "unknown: proving the core ran out of budget: " + o.reason());
-        }
-        MemberCertifier.Written w = (MemberCertifier.Written) outcome;
-        listener.stage(n, w.verification().text());
-        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), w.verification(), false,
-                w.facts(), w.verifyMillis());
+        CertifiedReduction.Verified v = (CertifiedReduction.Verified) outcome;
+        listener.stage(n, Verification.VERIFIED.text());
+        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), Verification.VERIFIED,
+                false, CertificateFacts.read(file), v.verifyMillis());
     }
 
     /** The existing certificate as this run's result, when it verifies and matches the member. */
@@ -211,7 +202,8 @@ public final class FamilyRun {
             return Optional.empty();
         }
         boolean same = facts.construction().equals(CertificateWriter.construction(m.construction()))
-                && facts.seed() == settings.seed() && facts.strategy().equals(settings.strategy().id());
+                && facts.search().equals(Optional.of(new CertificateFacts.Search(settings.seed(),
+                        settings.strategy().id())));
         return same ? Optional.of(new MemberResult.Certified(m.construction().n(), m.matroid().size(),
                 m.matroid().rank(), file.getFileName().toString(), verification, true, facts, report.millis()))
                 : Optional.empty();

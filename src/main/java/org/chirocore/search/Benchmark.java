@@ -48,7 +48,7 @@ public final class Benchmark {
         CubeConstruction construction = CubeConstruction.corner(n);
         Matroid m = construction.build();
         SearchSettings focused = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
-                construction.hyperplaneVertices());
+                construction.focus());
         Optional<Orientability> decision = n <= MAX_DECIDED_DIMENSION
                 ? Optional.of(new LazySatDecider(settings.budget()).decide(m))
                 : Optional.empty();

@@ -10,6 +10,7 @@ import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.LazySatDecider;
+import org.chirocore.orient.OrientabilityDecider;
 import org.chirocore.orient.Orientability;
 import org.chirocore.orient.OrientationSession;
 import org.chirocore.orient.WitnessCheck;
@@ -62,17 +63,17 @@ public final class MinimalityProof {
     public record Unknown(String reason) implements Result {
     }
 
-    private final Budget budget;
+    private final OrientabilityDecider decider;
     private final Strategy strategy;
     private final Progress progress;
     private int decisions;
 
     /**
-     * A check spending at most {@code budget} per decision, trying contractions or deletions first
-     * as {@code strategy} says, reporting each step to {@code progress}.
+     * A check deciding the contractions with {@code decider}, trying contractions or deletions
+     * first as {@code strategy} says, reporting each step to {@code progress}.
      */
-    public MinimalityProof(Budget budget, Strategy strategy, Progress progress) {
-        this.budget = budget;
+    public MinimalityProof(OrientabilityDecider decider, Strategy strategy, Progress progress) {
+        this.decider = decider;
         this.strategy = strategy;
         this.progress = progress;
     }
@@ -87,7 +88,7 @@ public final class MinimalityProof {
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
         }
-        return new MinimalityProof(budget, Strategy.CONTRACT_FIRST, Progress.SILENT)
+        return new MinimalityProof(new LazySatDecider(budget), Strategy.CONTRACT_FIRST, Progress.SILENT)
                 .check(m, new OrientationSession(BasisIndex.of(m), true, budget), order);
     }
 
@@ -128,7 +129,7 @@ public final class MinimalityProof {
                     deletion[e] = WitnessCheck.checked(new Minor(m, new int[0], single), w);
                 } else if (op == Operation.CONTRACTION && !loop) {
                     ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, single, new int[0]));
-                    Orientability answer = new LazySatDecider(budget).decide(minor);
+                    Orientability answer = decider.decide(minor);
                     decisions++;
                     if (answer instanceof Orientability.Unknown u) {
                         return new Unknown(u.reason());

@@ -16,6 +16,7 @@ import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.Orientability;
+import org.chirocore.orient.OrientabilityDecider;
 import org.chirocore.orient.OrientationSession;
 import org.chirocore.orient.WitnessCheck;
 
@@ -40,11 +41,22 @@ public final class UnsatCoreSearch implements CoreSearch {
     public static final long SCAN_LIMIT = 50_000_000;
 
     private final SearchSettings settings;
+    private final OrientabilityDecider decider;
     private final Progress progress;
 
-    public UnsatCoreSearch(SearchSettings settings, Progress progress) {
+    /**
+     * A search with {@code settings} that decides whole matroids with {@code decider} (the
+     * selector sessions of the deletion steps are the search's own), reporting to {@code progress}.
+     */
+    public UnsatCoreSearch(SearchSettings settings, OrientabilityDecider decider, Progress progress) {
         this.settings = settings;
+        this.decider = decider;
         this.progress = progress;
+    }
+
+    /** A search deciding with the lazy SAT decider under the settings' budget. */
+    public UnsatCoreSearch(SearchSettings settings, Progress progress) {
+        this(settings, new LazySatDecider(settings.budget()), progress);
     }
 
     /** Mutable state of one reduction. */
@@ -177,7 +189,7 @@ public final class UnsatCoreSearch implements CoreSearch {
         ExplicitMatroid found;
         if (enumerable(candidate)) {
             ExplicitMatroid explicit = ExplicitMatroid.of(candidate);
-            Orientability answer = new LazySatDecider(settings.budget()).decide(explicit);
+            Orientability answer = decider.decide(explicit);
             run.decisions++;
             found = answer instanceof Orientability.NonOrientable ? explicit : null;
         } else {
@@ -221,7 +233,7 @@ public final class UnsatCoreSearch implements CoreSearch {
             order.add(e);
         }
         Collections.shuffle(order, run.random);
-        MinimalityProof proof = new MinimalityProof(settings.budget(), settings.strategy(), progress);
+        MinimalityProof proof = new MinimalityProof(decider, settings.strategy(), progress);
         MinimalityProof.Result result = proof.check(m, session, order);
         run.decisions += proof.decisions();
         return result;

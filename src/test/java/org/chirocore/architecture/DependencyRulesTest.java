@@ -39,6 +39,12 @@ class DependencyRulesTest {
         "report, org.sat4j", "report, org.chirocore.cli", "report, org.chirocore.matroid", "report, org.chirocore.orient",
         "report, org.chirocore.search", "report, org.chirocore.cert", "report, org.chirocore.family",
         "check, org.chirocore.report", "family, org.chirocore.report",
+        "pipeline, org.sat4j", "pipeline, org.chirocore.cli", "pipeline, org.chirocore.family",
+        "pipeline, org.chirocore.report", "pipeline, org.chirocore.proof",
+        "matroid, org.chirocore.pipeline", "orient, org.chirocore.pipeline", "search, org.chirocore.pipeline",
+        "io, org.chirocore.pipeline", "cert, org.chirocore.pipeline", "check, org.chirocore.pipeline",
+        "report, org.chirocore.pipeline",
+        "family, org.chirocore.cert.Certification", "cli, org.chirocore.cert.Certification",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));

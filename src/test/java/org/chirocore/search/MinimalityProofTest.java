@@ -2,13 +2,14 @@ package org.chirocore.search;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.Budget;
-import org.chirocore.orient.WitnessCheck;
+import org.chirocore.pipeline.IndependentCheck;
 import org.junit.jupiter.api.Test;
 
 class MinimalityProofTest {
@@ -23,9 +24,10 @@ class MinimalityProofTest {
         assertEquals(14, minimal.witnesses().size());
         for (int e = 0; e < fano.size(); e++) {
             int[] single = {e};
-            // the witnesses are re-checked against the minors they claim to orient
-            WitnessCheck.checked(new Minor(fano, new int[0], single), minimal.witnesses().get(2 * e).witness());
-            WitnessCheck.checked(new Minor(fano, single, new int[0]), minimal.witnesses().get(2 * e + 1).witness());
+            // the independent checker accepts each witness for the minor it claims to orient
+            IndependentCheck.assertOrients(new Minor(fano, new int[0], single), minimal.witnesses().get(2 * e).witness());
+            IndependentCheck.assertOrients(new Minor(fano, single, new int[0]),
+                    minimal.witnesses().get(2 * e + 1).witness());
         }
     }
 
@@ -37,6 +39,6 @@ class MinimalityProofTest {
         MinimalityProof.NonOrientableContraction c = assertInstanceOf(MinimalityProof.NonOrientableContraction.class,
                 MinimalityProof.check(ag32, Budget.UNLIMITED));
         assertEquals(0, c.element());
-        assertEquals(true, new HyperplaneIsomorphismInspector(c.minor(), NamedMatroids.fano()).find().isPresent());
+        assertTrue(new HyperplaneIsomorphismInspector(c.minor(), NamedMatroids.fano()).find().isPresent());
     }
 }
