@@ -20,6 +20,7 @@ import org.chirocore.family.FamilyTable;
 import org.chirocore.family.MemberResult;
 import org.chirocore.family.Shard;
 import org.chirocore.family.VertexRule;
+import org.chirocore.io.IoMessages;
 import org.chirocore.search.Strategy;
 
 import picocli.CommandLine.Command;
@@ -98,6 +99,9 @@ final class FamilyCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private OutputOptions output;
+
     @Override
     public Integer call() {
         int[] bounds = bounds();
@@ -134,11 +138,13 @@ final class FamilyCommand implements Callable<Integer> {
         try {
             FamilyDefinition family = FamilyDefinition.read(file);
             FamilyRun.Settings settings = new FamilyRun.Settings(seed, Strategy.CONTRACT_FIRST, budget.budget(), threads);
-            table = new FamilyRun(family, out, settings, console()).run(bounds[0], bounds[1], shard());
+            FamilyRun run = new FamilyRun(family, out, settings, console());
+            output.checkReplacing(run.otherRun());
+            table = run.run(bounds[0], bounds[1], shard());
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the family's files: " + e, e);
+            throw new BadInputException(out + ": cannot write the family's files: " + IoMessages.plain(e), e);
         }
         // The member lines were printed by the console as each member completed.
         PrintWriter w = spec.commandLine().getOut();
@@ -179,7 +185,7 @@ final class FamilyCommand implements Callable<Integer> {
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the exploration's files: " + e, e);
+            throw new BadInputException(out + ": cannot write the exploration's files: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
         for (FamilyExploration.Member m : report.members()) {
@@ -211,7 +217,7 @@ final class FamilyCommand implements Callable<Integer> {
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the prediction's certificates: " + e, e);
+            throw new BadInputException(out + ": cannot write the prediction's certificates: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
         int exit = ExitCodes.OK;

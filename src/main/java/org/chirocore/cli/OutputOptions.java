@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 
 import org.chirocore.io.OutputCheck;
 import org.chirocore.io.OutputRefusedException;
@@ -71,6 +72,19 @@ final class OutputOptions {
             OutputCheck.directory(dir, present(inputs), List.of(), true);
         } catch (OutputRefusedException e) {
             throw new BadInputException(e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Refuses, unless --force was given, to replace files that belong to something else.
+     *
+     * @param other why existing files would be replaced, if they would
+     * @throws BadInputException with that reason when {@code other} is present and --force was not given
+     */
+    void checkReplacing(Optional<String> other) {
+        if (other.isPresent() && !force) {
+            throw new BadInputException(other.get() + "; its files would be replaced: give --force to replace them, "
+                    + "or choose another output directory.", null);
         }
     }
 

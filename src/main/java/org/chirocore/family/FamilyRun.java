@@ -14,6 +14,8 @@ import java.util.concurrent.Future;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.Progress;
@@ -89,6 +91,34 @@ public final class FamilyRun {
         this.dir = dir;
         this.settings = settings;
         this.listener = listener;
+    }
+
+    /**
+     * Why the directory holds another run, whose certificates this run would replace: its table
+     * records another family, definition, seed or strategy, or is not a family table at all.
+     * Empty when the directory is new or holds an earlier part of this same run (resuming).
+     */
+    public Optional<String> otherRun() {
+        Path file = dir.resolve(TABLE_JSON);
+        if (!Files.exists(file)) {
+            return Optional.empty();
+        }
+        try {
+            Json.Obj table = Json.parseUtf8(InputFiles.read(file)).asObject("the table");
+            String family = table.requireString("family");
+            boolean sameDefinition = table.requireString("definitionSha256").equals(this.family.sha256());
+            long seed = table.requireLong("seed");
+            String strategy = table.requireString("strategy");
+            if (family.equals(this.family.name()) && sameDefinition && seed == settings.seed()
+                    && strategy.equals(settings.strategy().id())) {
+                return Optional.empty();
+            }
+            return Optional.of(file + " records a run of family \"" + family + "\""
+                    + (sameDefinition ? "" : " (another definition)") + " with seed " + seed + " and strategy "
+                    + strategy + ", not this one");
+        } catch (IOException | IllegalArgumentException e) {
+            return Optional.of(file + " is not a family table");
+        }
     }
 
     /** The certificate's file name of the member at n: {@code n=K.cert.json}. */

@@ -127,6 +127,9 @@ class BadInputCorpusTest {
                 bad(2, "corner.json: is also an input", "family @corner.json --n 3 --out @corner.json"),
                 bad(2, "badfamily.json", "family @badfamily.json --n 3 --out @fam"),
                 bad(2, "--threads", "family " + CORNER + " --n 3 --threads 0 --out @fam"),
+                bad(2, "table.json records a run of family \"corner\" with seed 0 and strategy contract-first, not "
+                        + "this one; its files would be replaced: give --force",
+                        "family " + CORNER + " --n 3..4 --seed 1 --out @shard0"),
                 // family-merge
                 bad(2, "noshard" + java.io.File.separator + "table.json", "family-merge " + CORNER + " @noshard --out @merged"),
                 bad(2, "shard 1/2 of n = 3..4 is missing", "family-merge " + CORNER + " @shard0 --out @merged"),
