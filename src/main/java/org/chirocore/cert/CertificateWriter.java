@@ -5,16 +5,14 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPOutputStream;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
+import org.chirocore.io.Sha256;
 import org.chirocore.matroid.Construction;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.orient.BasisIndex;
@@ -117,18 +115,9 @@ public final class CertificateWriter {
                 .build();
     }
 
-    /** SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */
+    /** The content digest: SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */
     public static String sha256(Json value) {
-        return sha256(value.toText().getBytes(StandardCharsets.UTF_8));
-    }
-
-    /** SHA-256, lower-case hex, of {@code bytes}. */
-    public static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("Every Java platform provides SHA-256.", e);
-        }
+        return Sha256.hex(value);
     }
 
     /** The {@code provenance.construction} member describing {@code c}: its parts, in order. */
@@ -187,7 +176,7 @@ public final class CertificateWriter {
                 .put("relations", new Json.Arr(relations));
         if (dratFile.isPresent()) {
             b.put("dratFile", dratFile.get())
-                    .put("dratSha256", sha256(r.drat().getBytes(StandardCharsets.US_ASCII)));
+                    .put("dratSha256", Sha256.hex(r.drat().getBytes(StandardCharsets.US_ASCII)));
         } else {
             b.put("drat", r.drat());
         }

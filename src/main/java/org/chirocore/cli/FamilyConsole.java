@@ -49,10 +49,10 @@ final class FamilyConsole implements FamilyRun.Listener {
     public synchronized void finished(MemberResult m) {
         if (m instanceof MemberResult.Certified c) {
             out.println("n = " + m.n() + ": core " + Format.shape(c.facts().core().rank(), c.facts().core().size(),
-                    c.facts().core().basisCount()) + "; " + c.verification().text()
-                    + (c.reused() ? " (reused)" : "") + "; " + dir.resolve(c.certificate()));
+                    c.facts().core().basisCount()) + "; " + c.status() + (c.reused() ? " (reused)" : "") + "; "
+                    + dir.resolve(c.certificate()));
         } else {
-            out.println("n = " + m.n() + ": " + ((MemberResult.NoCore) m).reason());
+            out.println("n = " + m.n() + ": " + m.status());
         }
         out.flush();
     }

@@ -54,9 +54,8 @@ final class ReduceCommand implements Callable<Integer> {
             description = "Contract the pulled vertex before reducing (default: yes).")
     private boolean contractPulled;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "0",
-            description = "Seed of the element order (default: ${DEFAULT-VALUE}).")
-    private long seed;
+    @Mixin
+    private SeedOption seed;
 
     @Option(names = "--strategy", paramLabel = "STRATEGY", defaultValue = "contract-first",
             converter = Converters.StrategyConverter.class, completionCandidates = Converters.StrategyNames.class,
@@ -91,7 +90,7 @@ final class ReduceCommand implements Callable<Integer> {
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CertifiedReduction.Outcome outcome;
         try {
-            outcome = new CertifiedReduction(new CertifiedReduction.Settings(seed, strategy, budget.budget()), progress)
+            outcome = new CertifiedReduction(new CertifiedReduction.Settings(seed.seed(), strategy, budget.budget()), progress)
                     .run(focus ? input : input.withoutFocus(), out);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot write the certificate: " + IoMessages.plain(e), e);

@@ -1,12 +1,10 @@
 package org.chirocore.family;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Optional;
 
+import org.chirocore.cert.CertificateReader;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 
@@ -42,27 +40,12 @@ public record CertificateFacts(String sha256, ExplicitMatroid core, Json.Obj con
      *
      * @throws IOException when the file cannot be read
      * @throws IllegalArgumentException when it is not a certificate written by this tool for a
-     *     construction (a member missing or of the wrong type, invalid bases)
+     *     construction (format, version or digest wrong, a member missing or of the wrong type,
+     *     invalid bases)
      */
     static CertificateFacts read(Path file) throws IOException {
-        Json.Obj doc = Json.parseUtf8(Files.readAllBytes(file)).asObject("the certificate");
+        Json.Obj doc = CertificateReader.readChecked(file);
         Json.Obj content = doc.requireObject("content");
-        Json.Obj core = content.requireObject("core");
-        List<String> labels = new ArrayList<>();
-        Json.Arr labelArray = core.requireArray("labels");
-        for (int k = 0; k < labelArray.size(); k++) {
-            labels.add(labelArray.get(k).asString("core.labels[" + k + "]"));
-        }
-        List<int[]> bases = new ArrayList<>();
-        Json.Arr basisArray = core.requireArray("bases");
-        for (int k = 0; k < basisArray.size(); k++) {
-            Json.Arr b = basisArray.get(k).asArray("core.bases[" + k + "]");
-            int[] basis = new int[b.size()];
-            for (int j = 0; j < basis.length; j++) {
-                basis[j] = b.get(j).asInt("core.bases[" + k + "][" + j + "]");
-            }
-            bases.add(basis);
-        }
         Json.Obj run = doc.requireObject("run");
         Json.Obj refutation = run.requireObject("refutation");
         Optional<Search> search = Optional.empty();
@@ -74,7 +57,7 @@ public record CertificateFacts(String sha256, ExplicitMatroid core, Json.Obj con
             found = run.requireObject("prediction");
         }
         return new CertificateFacts(doc.requireString("sha256"),
-                ExplicitMatroid.fromBases(labels, core.requireInt("rank"), bases),
+                CertificateReader.core(content.requireObject("core")),
                 content.requireObject("provenance").requireObject("construction"), search,
                 refutation.requireInt("relations"), refutation.requireLong("lemmas"),
                 refutation.requireLong("dratBytes"), found.requireLong("millis"), refutation.requireLong("millis"));

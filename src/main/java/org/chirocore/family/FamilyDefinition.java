@@ -8,11 +8,11 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Supplier;
 
-import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Source;
 import org.chirocore.io.InputFiles;
 import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
+import org.chirocore.io.Sha256;
 import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.Field;
@@ -103,7 +103,7 @@ public record FamilyDefinition(String source, String name, String description, F
                 hyperplane(source, o.requireObject("hyperplane")),
                 in(source, "pulled", () -> VertexRule.parse(o.requireString("pulled"))),
                 o.requireBoolean("contractPulled"), range.get(0).asInt("range[0]"), range.get(1).asInt("range[1]"),
-                CertificateWriter.sha256(json));
+                Sha256.hex(json));
     }
 
     /**

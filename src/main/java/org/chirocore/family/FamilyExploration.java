@@ -88,13 +88,45 @@ public final class FamilyExploration {
         }
     }
 
-    /**
-     * A run whose core was not accepted, or that found none.
-     *
-     * @param attempt the run
-     * @param reason "filtered: …", "orientable" or "unknown: …"
-     */
-    public record Rejected(Attempt attempt, String reason) {
+    /** A run whose core was not accepted, or that found none. */
+    public sealed interface Rejected {
+        /** The run. */
+        Attempt attempt();
+
+        /** Why, as the report states it: "filtered: …", "orientable" or "unknown: …". */
+        String reason();
+
+        /**
+         * The run's core failed a constraint.
+         *
+         * @param why which constraint, in words
+         */
+        record Filtered(Attempt attempt, String why) implements Rejected {
+            @Override
+            public String reason() {
+                return "filtered: " + why;
+            }
+        }
+
+        /** The member is orientable: the run found no core. */
+        record Orientable(Attempt attempt) implements Rejected {
+            @Override
+            public String reason() {
+                return "orientable";
+            }
+        }
+
+        /**
+         * A budget ran out; nothing is claimed.
+         *
+         * @param why why, in words
+         */
+        record Unknown(Attempt attempt, String why) implements Rejected {
+            @Override
+            public String reason() {
+                return "unknown: " + why;
+            }
+        }
     }
 
     /**
@@ -298,17 +330,17 @@ public final class FamilyExploration {
             SearchResult result = new UnsatCoreSearch(new SearchSettings(attempt.seed(), attempt.strategy(),
                     settings.budget(), m.construction().focus()), Progress.SILENT).reduce(m.matroid());
             if (result instanceof SearchResult.Orientable) {
-                rejected.add(new Rejected(attempt, "orientable"));
+                rejected.add(new Rejected.Orientable(attempt));
                 continue;
             }
             if (result instanceof SearchResult.Unknown u) {
-                rejected.add(new Rejected(attempt, "unknown: " + u.reason()));
+                rejected.add(new Rejected.Unknown(attempt, u.reason()));
                 continue;
             }
             MinimalCore core = ((SearchResult.Found) result).core();
             String filter = filter(core.core(), kept);
             if (filter != null) {
-                rejected.add(new Rejected(attempt, "filtered: " + filter));
+                rejected.add(new Rejected.Filtered(attempt, filter));
                 continue;
             }
             int cls = classOf(core.core(), representatives, shapes);
@@ -329,7 +361,7 @@ public final class FamilyExploration {
                     new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name));
             classes.add(outcome instanceof CertifiedReduction.Verified
                     ? new CoreClass(representative.core(), attempts.get(c), Optional.of(Map.entry(name,
-                            CertificateFacts.read(dir.resolve(name)))), Verification.VERIFIED.text())
+                            CertificateFacts.read(dir.resolve(name)))), "verified")
                     : new CoreClass(representative.core(), attempts.get(c), Optional.empty(),
                             "unknown: " + ((CertifiedReduction.Unknown) outcome).reason()));
         }

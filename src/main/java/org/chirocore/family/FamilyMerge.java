@@ -167,7 +167,7 @@ public final class FamilyMerge {
         int elements = pulled.requireInt("elements");
         int rank = pulled.requireInt("rank");
         if (!row.has("certificate")) {
-            return new MemberResult.NoCore(n, elements, rank, row.requireString("status"));
+            return MemberResult.withoutCore(n, elements, rank, row.requireString("status"));
         }
         String name = FamilyRun.certificateName(n);
         Path source = shard.resolve(name);
@@ -189,7 +189,6 @@ public final class FamilyMerge {
             throw new FamilyException(source + ": the certificate of n = " + n + " records another construction, "
                     + "seed or strategy than " + family.source() + " with seed " + seed + " and " + strategy.id() + ".");
         }
-        return new MemberResult.Certified(n, elements, rank, name, Verification.of(report), true, facts,
-                report.millis());
+        return new MemberResult.Certified(n, elements, rank, name, true, facts, report.millis());
     }
 }

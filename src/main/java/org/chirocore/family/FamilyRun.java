@@ -206,22 +206,22 @@ public final class FamilyRun {
         CertifiedReduction.Outcome outcome = new CertifiedReduction(new CertifiedReduction.Settings(settings.seed(),
                 settings.strategy(), settings.budget()), Progress.SILENT).run(m.subject(), file);
         if (outcome instanceof CertifiedReduction.Orientable) {
-            return noCore(n, elements, rank, file, "orientable");
+            return noCore(file, new MemberResult.Orientable(n, elements, rank));
         }
         if (outcome instanceof CertifiedReduction.Unknown u) {
-            return noCore(n, elements, rank, file, "unknown: " + u.reason());
+            return noCore(file, new MemberResult.Unknown(n, elements, rank, u.reason()));
         }
         CertifiedReduction.Verified v = (CertifiedReduction.Verified) outcome;
-        listener.stage(n, Verification.VERIFIED.text());
-        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), Verification.VERIFIED,
-                false, CertificateFacts.read(file), v.verifyMillis());
+        MemberResult.Certified certified = new MemberResult.Certified(n, elements, rank,
+                file.getFileName().toString(), false, CertificateFacts.read(file), v.verifyMillis());
+        listener.stage(n, certified.status());
+        return certified;
     }
 
     /** The existing certificate as this run's result, when it verifies and matches the member. */
     private Optional<MemberResult> reuse(FamilyDefinition.Member m, Path file) throws IOException {
         Report report = CertificateVerifier.verify(file);
-        Verification verification = Verification.of(report);
-        if (verification == Verification.FAILED) {
+        if (!report.passed()) {
             return Optional.empty();
         }
         CertificateFacts facts;
@@ -235,15 +235,15 @@ public final class FamilyRun {
                 && facts.search().equals(Optional.of(new CertificateFacts.Search(settings.seed(),
                         settings.strategy().id())));
         return same ? Optional.of(new MemberResult.Certified(m.construction().n(), m.matroid().size(),
-                m.matroid().rank(), file.getFileName().toString(), verification, true, facts, report.millis()))
+                m.matroid().rank(), file.getFileName().toString(), true, facts, report.millis()))
                 : Optional.empty();
     }
 
     /** No core at n; a stale certificate under the member's name is removed so the directory stays truthful. */
-    private MemberResult noCore(int n, int elements, int rank, Path file, String reason) throws IOException {
+    private MemberResult noCore(Path file, MemberResult result) throws IOException {
         Files.deleteIfExists(file);
-        listener.stage(n, reason);
-        return new MemberResult.NoCore(n, elements, rank, reason);
+        listener.stage(result.n(), result.status());
+        return result;
     }
 
     private static RuntimeException rethrow(Throwable cause) throws IOException {

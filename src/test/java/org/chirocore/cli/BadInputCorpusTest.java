@@ -51,7 +51,7 @@ class BadInputCorpusTest {
         Files.createDirectories(dir.resolve("exported"));
         write("exported/fano.cert.cnf", "p cnf 0 0\n");
         Files.createDirectories(dir.resolve("noshard"));
-        CliRun shard = CliRun.of("family", CORNER, "--n", "3..4", "--shard", "0/2", "--out", path("shard0"));
+        CliRun shard = CliRun.of("family", "run", CORNER, "--n", "3..4", "--shard", "0/2", "--out", path("shard0"));
         assertEquals(0, shard.exit(), shard.err());
     }
 
@@ -119,17 +119,22 @@ class BadInputCorpusTest {
                 bad(2, "--field", "cube 3 --field 4"),
                 bad(2, "existing.json: the file already exists", "cube 3 --hyperplane 1,1,1=1 --pull 111 --save @existing.json"),
                 // family
-                bad(2, "missing.json: cannot read the file", "family @missing.json --n 3 --out @fam"),
-                bad(2, "3..99", "family " + CORNER + " --n 3..99 --out @fam"),
-                bad(2, "--n", "family " + CORNER + " --n three --out @fam"),
-                bad(2, "--shard", "family " + CORNER + " --n 3 --shard 3/3 --out @fam"),
-                bad(2, "existing.json: is a file, not a directory", "family " + CORNER + " --n 3 --out @existing.json"),
-                bad(2, "corner.json: is also an input", "family @corner.json --n 3 --out @corner.json"),
-                bad(2, "badfamily.json", "family @badfamily.json --n 3 --out @fam"),
-                bad(2, "--threads", "family " + CORNER + " --n 3 --threads 0 --out @fam"),
+                bad(2, "missing.json: cannot read the file", "family run @missing.json --n 3 --out @fam"),
+                bad(2, "3..99", "family run " + CORNER + " --n 3..99 --out @fam"),
+                bad(2, "--n", "family run " + CORNER + " --n three --out @fam"),
+                bad(2, "--shard", "family run " + CORNER + " --n 3 --shard 3/3 --out @fam"),
+                bad(2, "existing.json: is a file, not a directory", "family run " + CORNER + " --n 3 --out @existing.json"),
+                bad(2, "corner.json: is also an input", "family run @corner.json --n 3 --out @corner.json"),
+                bad(2, "badfamily.json", "family run @badfamily.json --n 3 --out @fam"),
+                bad(2, "--threads", "family run " + CORNER + " --n 3 --threads 0 --out @fam"),
+                bad(2, "--runs", "family explore " + CORNER + " --n 3 --runs 0 --out @fam"),
+                bad(2, "notjson.json", "family predict " + CORNER + " --n 3 --prediction @notjson.json --out @fam"),
+                bad(2, "notjson.json: is also an input", "family predict " + CORNER + " --n 3 --prediction @notjson.json "
+                        + "--out @notjson.json"),
+                bad(2, "Missing subcommand", "family"),
                 bad(2, "table.json records a run of family \"corner\" with seed 0 and strategy contract-first, not "
                         + "this one; its files would be replaced: give --force",
-                        "family " + CORNER + " --n 3..4 --seed 1 --out @shard0"),
+                        "family run " + CORNER + " --n 3..4 --seed 1 --out @shard0"),
                 // family-merge
                 bad(2, "noshard" + java.io.File.separator + "table.json", "family-merge " + CORNER + " @noshard --out @merged"),
                 bad(2, "shard 1/2 of n = 3..4 is missing", "family-merge " + CORNER + " @shard0 --out @merged"),

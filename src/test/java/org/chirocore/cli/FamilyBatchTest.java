@@ -50,10 +50,10 @@ class FamilyBatchTest {
     @Test
     void progressLinesAreForcedIntoALog() {
         Path out = dir.resolve("corner");
-        CliRun quiet = CliRun.of("family", "families/corner.json", "--n", "3", "--out", out.toString());
+        CliRun quiet = CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", out.toString());
         assertEquals(0, quiet.exit(), quiet.err());
         assertEquals("", quiet.err(), "no terminal, no --progress: no progress lines");
-        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--out", out.toString(), "--progress");
+        CliRun run = CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", out.toString(), "--progress");
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.err().contains("n = 3: checking the existing certificate"), run.err());
         assertTrue(run.out().startsWith("n = 3: core rank 3 on 7 elements, 28 bases; verified (reused)"), run.out());
@@ -62,11 +62,11 @@ class FamilyBatchTest {
     @Test
     void anotherRunsDirectoryIsReplacedOnlyWithForce() {
         Path out = dir.resolve("seed0");
-        assertEquals(0, CliRun.of("family", "families/corner.json", "--n", "3", "--out", out.toString()).exit());
-        CliRun refused = CliRun.of("family", "families/corner.json", "--n", "3", "--seed", "1", "--out", out.toString());
+        assertEquals(0, CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", out.toString()).exit());
+        CliRun refused = CliRun.of("family", "run", "families/corner.json", "--n", "3", "--seed", "1", "--out", out.toString());
         assertEquals(2, refused.exit());
         assertTrue(refused.err().contains("with seed 0 and strategy contract-first, not this one"), refused.err());
-        CliRun forced = CliRun.of("family", "families/corner.json", "--n", "3", "--seed", "1", "--out", out.toString(),
+        CliRun forced = CliRun.of("family", "run", "families/corner.json", "--n", "3", "--seed", "1", "--out", out.toString(),
                 "--force");
         assertEquals(0, forced.exit(), forced.err());
         assertTrue(forced.out().startsWith("n = 3: core"), forced.out());
