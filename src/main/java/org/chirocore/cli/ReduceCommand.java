@@ -85,7 +85,8 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        output.checkFiles(Arrays.asList(file), out, witnessOut);
+        // A large proof goes beside the certificate, so its name is an output too.
+        output.checkFiles(Arrays.asList(file), out, CertificateWriter.dratFile(out), witnessOut);
         Subject input = input();
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CertifiedReduction.Outcome outcome;

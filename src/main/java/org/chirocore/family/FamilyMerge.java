@@ -172,11 +172,10 @@ public final class FamilyMerge {
         String name = FamilyRun.certificateName(n);
         Path source = shard.resolve(name);
         Path target = out.resolve(name);
-        String dratName = CertificateWriter.baseName(source) + ".drat.gz";
         if (!source.toAbsolutePath().normalize().equals(target.toAbsolutePath().normalize())) {
             AtomicFiles.copy(source, target);
-            if (Files.exists(shard.resolve(dratName))) {
-                AtomicFiles.copy(shard.resolve(dratName), out.resolve(dratName));
+            if (Files.exists(CertificateWriter.dratFile(source))) {
+                AtomicFiles.copy(CertificateWriter.dratFile(source), CertificateWriter.dratFile(target));
             }
         }
         Report report = CertificateVerifier.verify(target);
