@@ -89,6 +89,9 @@ class BadInputCorpusTest {
                 // reduce: outputs that would destroy data or cannot be written, bad constructions
                 bad(2, "fano.json: is also an input", "reduce @fano.json --out @fano.json"),
                 bad(2, "does not exist", "reduce " + FANO + " --out @nodir/x.cert.json"),
+                // refused before the 16-cube's reduction (tens of seconds) starts
+                bad(2, "nodir", "reduce --cube 16 --hyperplane 1,1,1,1,1,1,1,1,1,1,1,1,1,1,1,1=1 --pull 1111111111111111 "
+                        + "--out @nodir/c16.json"),
                 bad(2, "existing.json: the file already exists; give --force", "reduce " + FANO + " --out @existing.json"),
                 bad(2, "noshard: is a directory", "reduce " + FANO + " --out @noshard"),
                 bad(2, "big.json: too large", "reduce @big.json --out @new.cert.json"),
