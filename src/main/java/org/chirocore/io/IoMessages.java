@@ -7,6 +7,8 @@ import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.NotDirectoryException;
+import java.util.List;
+import java.util.Map;
 
 /**
  * Plain-word descriptions of file errors for messages to people: what went wrong ("permission
@@ -14,6 +16,15 @@ import java.nio.file.NotDirectoryException;
  * class names and without the names of temporary files, which mean nothing to the reader.
  */
 public final class IoMessages {
+    /** Words for the exceptions whose reason is often missing, the general file-system failure last. */
+    private static final List<Map.Entry<Class<? extends IOException>, String>> KINDS = List.of(
+            Map.entry(NoSuchFileException.class, "no such file or directory"),
+            Map.entry(AccessDeniedException.class, "permission denied"),
+            Map.entry(FileAlreadyExistsException.class, "the file already exists"),
+            Map.entry(DirectoryNotEmptyException.class, "it is a directory that is not empty"),
+            Map.entry(NotDirectoryException.class, "not a directory"),
+            Map.entry(FileSystemException.class, "the file system refused it"));
+
     private IoMessages() {
     }
 
@@ -30,23 +41,10 @@ public final class IoMessages {
     }
 
     private static String kind(IOException e) {
-        if (e instanceof NoSuchFileException) {
-            return "no such file or directory";
-        }
-        if (e instanceof AccessDeniedException) {
-            return "permission denied";
-        }
-        if (e instanceof FileAlreadyExistsException) {
-            return "the file already exists";
-        }
-        if (e instanceof DirectoryNotEmptyException) {
-            return "it is a directory that is not empty";
-        }
-        if (e instanceof NotDirectoryException) {
-            return "not a directory";
-        }
-        if (e instanceof FileSystemException) {
-            return "the file system refused it";
+        for (Map.Entry<Class<? extends IOException>, String> kind : KINDS) {
+            if (kind.getKey().isInstance(e)) {
+                return kind.getValue();
+            }
         }
         String message = e.getMessage();
         return message == null || message.isBlank() ? "input or output failed" : message;
