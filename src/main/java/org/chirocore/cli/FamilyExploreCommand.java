@@ -79,7 +79,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 throw new ParameterException(spec.commandLine(), "--keep: " + e.getMessage());
             }
         }
-        FamilyExploration.Report report;
+        FamilyExploration.Findings report;
         Optional<ShapeFollow.Shape> shape;
         try {
             shape = follow == null ? Optional.empty() : Optional.of(ShapeFollow.Shape.parse(follow));
@@ -96,7 +96,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
             throw new BadInputException(out + ": cannot write the exploration's files: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
-        for (FamilyExploration.Member m : report.members()) {
+        for (FamilyExploration.MemberFindings m : report.members()) {
             w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
                     + " of cores, " + m.rejected().size() + " of " + runs + " runs filtered or without a core");
             for (FamilyExploration.CoreClass c : m.classes()) {

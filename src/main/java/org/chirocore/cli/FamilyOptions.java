@@ -73,17 +73,6 @@ final class FamilyOptions {
      * @throws ParameterException when --n is neither
      */
     int[] bounds() {
-        String[] parts = range.trim().split("\\.\\.", -1);
-        try {
-            int a = Integer.parseInt(parts[0].trim());
-            int b = parts.length == 2 ? Integer.parseInt(parts[1].trim()) : a;
-            if (parts.length <= 2 && a <= b) {
-                return new int[] {a, b};
-            }
-        } catch (NumberFormatException e) {
-            // reported below
-        }
-        throw new ParameterException(mixee.commandLine(), "--n must be A..B with integers A <= B, or one integer; got \""
-                + range + "\".");
+        return Converters.range(mixee, "--n", range);
     }
 }

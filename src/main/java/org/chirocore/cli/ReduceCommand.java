@@ -151,8 +151,6 @@ final class ReduceCommand implements Callable<Integer> {
         CertificateWriter.Written written = v.written();
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
                 + written.dratFile().map(d -> " and " + d).orElse(""));
-        w.println("verified by the independent checker in " + v.verifyMillis() + " ms"
-                + (v.notChecked().isEmpty() ? "" : "; not checked: " + String.join(", ", v.notChecked())
-                        + " (run verify with --input)"));
+        w.println(Format.verified(v.verification()));
     }
 }

@@ -154,8 +154,8 @@ public final class FamilyExploration {
      * @param classes the isomorphism classes, in order of first appearance
      * @param rejected the runs that were filtered out or found no core
      */
-    public record Member(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
-        public Member {
+    public record MemberFindings(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
+        public MemberFindings {
             classes = List.copyOf(classes);
             rejected = List.copyOf(rejected);
         }
@@ -168,8 +168,8 @@ public final class FamilyExploration {
      * @param settings the settings
      * @param members one per n, in increasing n
      */
-    public record Report(FamilyDefinition family, Settings settings, List<Member> members) {
-        public Report {
+    public record Findings(FamilyDefinition family, Settings settings, List<MemberFindings> members) {
+        public Findings {
             members = List.copyOf(members);
         }
 
@@ -188,7 +188,7 @@ public final class FamilyExploration {
             }
             settings.targetRank().ifPresent(r -> b.append("; accepted cores have rank ").append(r));
             b.append(".\n\nEvery core is fully minor-minimal; constraints only filter the runs' cores.\n");
-            for (Member m : members) {
+            for (MemberFindings m : members) {
                 b.append("\n## n = ").append(m.n()).append(" (").append(m.elements()).append(" elements, rank ")
                         .append(m.rank()).append(")\n\n");
                 b.append("| class | elements | rank | bases | non-bases | frequency | runs (seed strategy) "
@@ -215,7 +215,7 @@ public final class FamilyExploration {
         /** The report as JSON. */
         public Json.Obj toJson() {
             List<Json> ms = new ArrayList<>();
-            for (Member m : members) {
+            for (MemberFindings m : members) {
                 List<Json> classes = new ArrayList<>();
                 for (CoreClass c : m.classes()) {
                     classes.add(Json.Obj.builder()
@@ -276,7 +276,7 @@ public final class FamilyExploration {
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException when the verifier rejects a certificate just written (a bug)
      */
-    public Report run(int from, int to) throws IOException {
+    public Findings run(int from, int to) throws IOException {
         if (from > to) {
             throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
         }
@@ -289,11 +289,11 @@ public final class FamilyExploration {
             kept.add(keptLabels(m, n));
         }
         Files.createDirectories(dir);
-        List<Member> members = new ArrayList<>();
+        List<MemberFindings> members = new ArrayList<>();
         for (int k = 0; k < built.size(); k++) {
             members.add(explore(built.get(k), kept.get(k)));
         }
-        Report report = new Report(family, settings, members);
+        Findings report = new Findings(family, settings, members);
         AtomicFiles.writeString(dir.resolve(EXPLORE_MD), report.toMarkdown());
         AtomicFiles.writeJson(dir.resolve(EXPLORE_JSON), report.toJson());
         return report;
@@ -318,7 +318,7 @@ public final class FamilyExploration {
         return labels;
     }
 
-    private Member explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
+    private MemberFindings explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
         int n = m.construction().n();
         List<MinimalCore> representatives = new ArrayList<>();
         List<MatroidShape> shapes = new ArrayList<>();
@@ -365,7 +365,7 @@ public final class FamilyExploration {
                     : new CoreClass(representative.core(), attempts.get(c), Optional.empty(),
                             "unknown: " + ((CertifiedReduction.Unknown) outcome).reason()));
         }
-        return new Member(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
+        return new MemberFindings(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
     }
 
     /** Why {@code core} is not accepted, or null when it is. */

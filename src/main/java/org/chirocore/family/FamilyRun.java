@@ -213,7 +213,7 @@ public final class FamilyRun {
         }
         CertifiedReduction.Verified v = (CertifiedReduction.Verified) outcome;
         MemberResult.Certified certified = new MemberResult.Certified(n, elements, rank,
-                file.getFileName().toString(), false, CertificateFacts.read(file), v.verifyMillis());
+                file.getFileName().toString(), false, CertificateFacts.read(file), v.verification().verifyMillis());
         listener.stage(n, certified.status());
         return certified;
     }

@@ -88,10 +88,10 @@ public final class ShapeFollow {
     }
 
     /** The followed shape over the exploration's members, in increasing n. */
-    public static List<Row> follow(FamilyExploration.Report report, Shape shape) {
+    public static List<Row> follow(FamilyExploration.Findings report, Shape shape) {
         List<Row> rows = new ArrayList<>();
         Optional<ExplicitMatroid> previous = Optional.empty();
-        for (FamilyExploration.Member m : report.members()) {
+        for (FamilyExploration.MemberFindings m : report.members()) {
             Optional<FamilyExploration.CoreClass> chosen = Optional.empty();
             for (FamilyExploration.CoreClass c : m.classes()) {
                 if (shape.fits(c.core(), m.n())

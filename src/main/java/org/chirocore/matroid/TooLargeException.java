@@ -5,7 +5,7 @@ package org.chirocore.matroid;
  * sentence naming the item, its size and the limit. The command line reports it as bad input
  * (exit code 2), never as memory exhaustion.
  */
-public final class TooLargeException extends IllegalArgumentException {
+public class TooLargeException extends IllegalArgumentException {
     private static final long serialVersionUID = 1L;
 
     public TooLargeException(String message) {

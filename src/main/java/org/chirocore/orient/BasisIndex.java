@@ -6,7 +6,6 @@ import java.util.List;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
-import org.chirocore.matroid.TooLargeException;
 
 /**
  * The bases of a matroid numbered as SAT variables: variable k (1-based) is the k-th basis in
@@ -34,7 +33,7 @@ public final class BasisIndex {
         this.rank = m.rank();
         long subsets = ElementSets.binomial(size, rank);
         if (size > Limits.ELEMENTS || subsets > MAX_SUBSETS) {
-            throw new TooLargeException("A matroid of rank " + rank + " on " + size + " elements has "
+            throw new EnumerationLimitException("A matroid of rank " + rank + " on " + size + " elements has "
                     + (subsets == Long.MAX_VALUE ? "too many" : Long.toString(subsets)) + " candidate bases; at most "
                     + MAX_SUBSETS + " on at most 64 elements are enumerated. Reduce it to a smaller minor first.");
         }
@@ -60,7 +59,7 @@ public final class BasisIndex {
     /**
      * Enumerates the bases of {@code m}.
      *
-     * @throws IllegalArgumentException when {@code m} has more than 64 elements or more than
+     * @throws EnumerationLimitException when {@code m} has more than 64 elements or more than
      *     {@link #MAX_SUBSETS} candidate subsets
      */
     public static BasisIndex of(Matroid m) {

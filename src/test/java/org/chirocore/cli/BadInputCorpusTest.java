@@ -86,6 +86,9 @@ class BadInputCorpusTest {
                 bad(2, "colour.json: unknown field \"colour\"", "orient @colour.json"),
                 bad(2, "--conflicts", "orient " + FANO + " --conflicts lots"),
                 bad(2, "Missing required parameter: 'FILE'", "orient"),
+                bad(2, "fano.json: is also an input", "orient @fano.json --witness-out @fano.json"),
+                bad(2, "existing.json: the file already exists; give --force", "orient " + FANO
+                        + " --witness-out @existing.json"),
                 // reduce: outputs that would destroy data or cannot be written, bad constructions
                 bad(2, "fano.json: is also an input", "reduce @fano.json --out @fano.json"),
                 bad(2, "does not exist", "reduce " + FANO + " --out @nodir/x.cert.json"),
@@ -154,6 +157,10 @@ class BadInputCorpusTest {
                 bad(2, "--max-n is 18", "bench --max-n 18"),
                 bad(2, "--max-n", "bench --max-n 2"),
                 bad(2, "--conflicts", "bench --conflicts x"),
+                // sweep
+                bad(2, "--n", "sweep --n 3..99 --out @sweep"),
+                bad(2, "existing.json: is a file, not a directory", "sweep --n 3 --out @existing.json"),
+                bad(2, "noshard", "sweep-merge @noshard --out @sweepmerged"),
                 // no such command
                 bad(2, "frobnicate", "frobnicate"));
     }
@@ -174,7 +181,7 @@ class BadInputCorpusTest {
     void theCorpusCoversEveryCommandWithAtLeastFortyCases() {
         assertTrue(corpus().count() >= 40);
         for (String command : new String[] {"orient", "reduce", "verify", "explain", "export", "cube", "family",
-                "family-merge", "report", "bench"}) {
+                "family-merge", "report", "bench", "sweep", "sweep-merge"}) {
             assertTrue(corpus().anyMatch(a -> ((String) a.get()[0]).startsWith(command + " ")), command);
         }
     }
