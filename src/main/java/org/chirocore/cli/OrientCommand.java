@@ -7,12 +7,16 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.MatrixMatroid;
 import org.chirocore.matroid.Matroid;
+import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.EnumerationLimitException;
 import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.Orientability;
+import org.chirocore.orient.OrientabilityDecider;
 import org.chirocore.orient.RealisationCheck;
 import org.chirocore.orient.Realised;
+import org.chirocore.orient.RepairingDecider;
 import org.chirocore.orient.SolveStats;
 
 import picocli.CommandLine.Command;
@@ -52,6 +56,12 @@ final class OrientCommand implements Callable<Integer> {
             description = "Write the witness as signs per basis even when a realisation is at hand.")
     private boolean witnessSigns;
 
+    @Option(names = "--start", paramLabel = "REALISATION",
+            description = "For the SAT search: start from the determinant signs of this realisation (a matroid file "
+                    + "with a matrix over Q of exactly rank rows, on the same labels) and repair them locally; the "
+                    + "search runs only when the repair does not reach a chirotope.")
+    private Path start;
+
     @Option(names = "--no-realisation",
             description = "Decide a matrix over Q by the SAT search too, ignoring its determinant signs.")
     private boolean noRealisation;
@@ -63,13 +73,29 @@ final class OrientCommand implements Callable<Integer> {
     public Integer call() {
         output.checkFiles(List.of(file), witnessOut);
         Matroid m = Inputs.read(file).matroid();
+        OrientabilityDecider search = new LazySatDecider(budget.budget());
+        if (start != null) {
+            search = new RepairingDecider(RepairingDecider.of(startRealisation(m)), search);
+        }
         try {
             Optional<Realised> realised = noRealisation ? Optional.empty() : Realised.decide(m);
-            return realised.isPresent() ? report(m, realised.get()) : report(m,
-                    new LazySatDecider(budget.budget()).decide(m));
+            return realised.isPresent() ? report(m, realised.get()) : report(m, search.decide(m));
         } catch (EnumerationLimitException e) {
             throw new BadInputException(file + ": " + e.getMessage(), e);
         }
+    }
+
+    private Realisation startRealisation(Matroid m) {
+        Matroid s = Inputs.read(start).matroid();
+        if (!(s instanceof MatrixMatroid matrix) || !matrix.field().isRational() || matrix.rows() != matrix.rank()) {
+            throw new BadInputException(start + ": a start must be a realisation: a matrix over Q with exactly \"rank\" "
+                    + "rows", null);
+        }
+        if (!s.labels().equals(m.labels()) || s.rank() != m.rank()) {
+            throw new BadInputException(start + ": the start has rank " + s.rank() + " on " + s.labels()
+                    + ", but " + file + " has rank " + m.rank() + " on " + m.labels(), null);
+        }
+        return Realisation.of(matrix).orElseThrow();
     }
 
     private int report(Matroid m, Realised r) {

@@ -18,8 +18,9 @@ import org.chirocore.orient.Realised;
  * Times the corner construction ({@link CubeConstruction#corner}: H spanned by the unit vectors,
  * the all-ones vertex pulled to it and contracted) for one dimension: a plain orientability
  * decision of the whole matroid (only up to {@link #MAX_DECIDED_DIMENSION}, beyond which it is
- * far slower than the reduction) and a reduction to a minimal core. It measures and asserts
- * nothing; the figures are for people comparing changes.
+ * far slower than the reduction) and a reduction to a minimal core; and orientable instances
+ * ({@link #orientable}), decided by their realisation or by the SAT search. It measures and
+ * asserts nothing; the figures are for people comparing changes.
  */
 public final class Benchmark {
     /**
@@ -27,6 +28,9 @@ public final class Benchmark {
      * C(63, 6) ≈ 67 million 6-subsets, more than the basis index enumerates.
      */
     public static final int MAX_DECIDED_DIMENSION = 5;
+
+    /** Time limit of the SAT search on the 5-cube when the budget sets none: ten minutes. */
+    public static final long DEFAULT_SEARCH_MILLIS = 600_000;
 
     private Benchmark() {
     }
@@ -64,9 +68,6 @@ public final class Benchmark {
         long millis = (System.nanoTime() - start) / 1_000_000;
         return new Row(n, m.size(), m.rank(), decision, reduction, millis);
     }
-
-    /** Time limit of the SAT search on the 5-cube when the budget sets none: ten minutes. */
-    public static final long DEFAULT_SEARCH_MILLIS = 600_000;
 
     /**
      * One orientable instance's figures.

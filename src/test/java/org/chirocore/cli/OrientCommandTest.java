@@ -140,4 +140,31 @@ class OrientCommandTest {
         assertEquals(1, run.err().strip().lines().count(), "one line, no stack trace: " + run.err());
         assertTrue(Files.notExists(dir.resolve("w.json")));
     }
+
+    /**
+     * The non-Fano matroid given by its six lines (the seven vectors over Q: every line of the
+     * Fano plane but {3, 4, 5} [Ox, Appendix, F7^-]) has no matrix, so it goes to the search; with
+     * the matrix as a start, the local repair finishes in one pass and no relation is needed.
+     */
+    @Test
+    void startFromARealisationSkipsTheSearch() throws IOException {
+        Path file = Files.writeString(dir.resolve("nf-bases.json"), "{\"rank\": 3, \"elements\": 7, \"nonbases\": "
+                + "[[0, 1, 3], [0, 2, 4], [1, 2, 5], [0, 5, 6], [1, 4, 6], [2, 3, 6]]}");
+        Path start = matrixFile(dir, "nf.json", "Q");
+        CliRun run = CliRun.of("orient", file.toString(), "--start", start.toString(), "--json");
+        assertEquals(0, run.exit(), run.err());
+        Json.Obj o = Json.parse(run.out()).asObject("output");
+        assertEquals("orientable", o.requireString("verdict"));
+        assertEquals(29, o.requireInt("bases"));
+        assertEquals(0, o.requireObject("stats").requireInt("relations"));
+        assertEquals(1, o.requireObject("stats").requireInt("rounds"));
+    }
+
+    @Test
+    void startOnOtherElementsIsBadInput() throws IOException {
+        Path file = Files.writeString(dir.resolve("u24.json"), "{\"rank\": 2, \"elements\": 4, \"nonbases\": []}");
+        CliRun run = CliRun.of("orient", file.toString(), "--start", matrixFile(dir, "nf.json", "Q").toString());
+        assertEquals(2, run.exit(), run.out() + run.err());
+        assertTrue(run.err().contains("nf.json: the start has rank 3"), run.err());
+    }
 }
