@@ -2,7 +2,7 @@ package org.chirocore.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
+import java.util.Arrays;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
@@ -71,7 +71,7 @@ final class OrientCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        output.checkFiles(List.of(file), witnessOut);
+        output.checkFiles(Arrays.asList(file, start), witnessOut);
         Matroid m = Inputs.read(file).matroid();
         OrientabilityDecider search = new LazySatDecider(budget.budget());
         if (start != null) {

@@ -87,6 +87,7 @@ class BadInputCorpusTest {
                 bad(2, "--conflicts", "orient " + FANO + " --conflicts lots"),
                 bad(2, "Missing required parameter: 'FILE'", "orient"),
                 bad(2, "fano.json: is also an input", "orient @fano.json --witness-out @fano.json"),
+                bad(2, "fano.json: is also an input", "orient " + FANO + " --start @fano.json --witness-out @fano.json"),
                 bad(2, "existing.json: the file already exists; give --force", "orient " + FANO
                         + " --witness-out @existing.json"),
                 // reduce: outputs that would destroy data or cannot be written, bad constructions
