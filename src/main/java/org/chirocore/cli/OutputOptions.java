@@ -54,22 +54,22 @@ final class OutputOptions {
      * @throws BadInputException naming the directory or file when it may not be written
      */
     void checkDirectory(Path dir, Collection<Path> inputs, Collection<String> names) {
-        try {
-            OutputCheck.directory(dir, present(inputs), names, force);
-        } catch (OutputRefusedException e) {
-            throw new BadInputException(e.getMessage(), e);
-        }
+        directory(dir, inputs, names, force);
     }
 
     /**
-     * Checks a family run's directory, which is resumable: the run's own files in it are replaced
+     * Checks a family run's (or sweep's) directory, which is resumable: the run's own files in it are replaced
      * by design, so only the directory itself is checked (not an input, creatable, writable).
      *
      * @throws BadInputException naming the directory when it cannot be used
      */
     static void checkRunDirectory(Path dir, Collection<Path> inputs) {
+        directory(dir, inputs, List.of(), true);
+    }
+
+    private static void directory(Path dir, Collection<Path> inputs, Collection<String> names, boolean overwrite) {
         try {
-            OutputCheck.directory(dir, present(inputs), List.of(), true);
+            OutputCheck.directory(dir, present(inputs), names, overwrite);
         } catch (OutputRefusedException e) {
             throw new BadInputException(e.getMessage(), e);
         }
