@@ -100,7 +100,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
             for (FamilyExploration.CoreClass c : m.classes()) {
                 w.println("  " + Format.shape(c.core().rank(), c.core().size(), c.core().basisCount()) + " x "
                         + c.attempts().size() + "; " + c.status()
-                        + c.certificate().map(f -> "; " + out.resolve(f.getKey())).orElse(""));
+                        + c.certificate().map(f -> "; " + out.resolve(f.file())).orElse(""));
             }
         }
         w.println("wrote " + out.resolve(FamilyExploration.EXPLORE_MD) + " and "
@@ -108,7 +108,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 + shape.map(x -> ", " + out.resolve(ShapeFollow.FOLLOW_MD) + " and " + out.resolve(ShapeFollow.FOLLOW_JSON))
                         .orElse(""));
         boolean unknown = report.members().stream().anyMatch(m -> m.classes().stream()
-                .anyMatch(c -> c.certificate().isEmpty()) || m.rejected().stream()
+                .anyMatch(c -> c.certification() instanceof FamilyExploration.ClassCertificate.Unknown) || m.rejected().stream()
                 .anyMatch(r -> r instanceof FamilyExploration.Rejected.Unknown));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
     }

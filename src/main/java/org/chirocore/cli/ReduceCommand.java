@@ -71,7 +71,8 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
             description = "Where to write the certificate of the core (written atomically; a large proof goes "
-                    + "beside it as NAME.drat.gz). Nothing is written unless a core is found.")
+                    + "beside it as NAME.drat.gz) and checked by the independent verifier. Nothing is written unless "
+                    + "a core is found.")
     private Path out;
 
     @Option(names = "--witness-out", paramLabel = "FILE",

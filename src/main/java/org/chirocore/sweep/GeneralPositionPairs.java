@@ -3,8 +3,6 @@ package org.chirocore.sweep;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 
 import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.PulledMatroid;
@@ -28,14 +26,7 @@ import org.chirocore.matroid.PulledMatroid;
  * when a violation turns up early).
  */
 public final class GeneralPositionPairs {
-    private static final Map<Integer, AffineCube> CUBES = new ConcurrentHashMap<>();
-
     private GeneralPositionPairs() {
-    }
-
-    /** The real n-cube, built once per n. */
-    static AffineCube cube(int n) {
-        return CUBES.computeIfAbsent(n, AffineCube::real);
     }
 
     /**
@@ -64,7 +55,7 @@ public final class GeneralPositionPairs {
             }
         }
         boolean flips = 2L * h.offset() == sum;
-        AffineCube cube = cube(n);
+        AffineCube cube = AffineCube.real(n);
         int[] hyperplane = h.representative().elements();
         List<PullCandidate> out = new ArrayList<>();
         int[] counts = new int[classes.size()];

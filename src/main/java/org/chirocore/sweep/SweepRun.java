@@ -22,6 +22,7 @@ import org.chirocore.family.Shard;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Field;
@@ -248,13 +249,12 @@ public final class SweepRun {
                 .reduce(contractedSubject.matroid());
         if (first instanceof SearchResult.Found f) {
             MinimalCore m = f.core();
-            contractedVerdict = certify(CoreFinding.searched(m, contractedSubject.source()),
-                    level.resolve(id + ".contracted.cert.json"));
+            CoreFinding searched = CoreFinding.searched(m, contractedSubject.source());
+            contractedVerdict = certify(searched, level.resolve(id + ".contracted.cert.json"));
             // M'/O is a minor of M': the same core, with O contracted first on the path from M'
             List<String> path = new ArrayList<>();
             path.add(c.vertex());
             path.addAll(m.contracted());
-            CoreFinding searched = CoreFinding.searched(m, contractedSubject.source());
             CoreFinding fromPulled = new CoreFinding(m.core(), new Provenance(new Source.Constructed(pulled), path,
                     m.deleted()), searched.witnesses(), searched.discovery());
             pulledVerdict = certify(fromPulled, level.resolve(id + ".pulled.cert.json"));
@@ -273,7 +273,7 @@ public final class SweepRun {
             }
         }
         PairResult result = new PairResult(n, index, h.normal(), h.offset(), c.hyperplane().representative()
-                .vertices().stream().map(v -> GeneralPositionPairs.cube(n).label(v)).toList(), c.vertex(),
+                .vertices().stream().map(v -> AffineCube.real(n).label(v)).toList(), c.vertex(),
                 h.orbitSize(), c.orbitSize(), pulledVerdict, contractedVerdict, core);
         AtomicFiles.writeJson(record, result.toJson());
         return result;

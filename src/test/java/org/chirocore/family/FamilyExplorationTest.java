@@ -44,9 +44,9 @@ class FamilyExplorationTest {
             for (int j = 0; j < m.classes().size(); j++) {
                 FamilyExploration.CoreClass c = m.classes().get(j);
                 String name = FamilyExploration.certificateName(m.n(), j + 1);
-                assertEquals(name, c.certificate().orElseThrow().getKey());
+                assertEquals(name, c.certificate().orElseThrow().file());
                 assertTrue(CertificateVerifier.verify(dir.resolve(name)).passed(), name);
-                assertEquals(c.core(), c.certificate().get().getValue().core());
+                assertEquals(c.core(), c.certificate().get().facts().core());
                 // classes are pairwise non-isomorphic
                 for (int k = 0; k < j; k++) {
                     assertTrue(new HyperplaneIsomorphismInspector(m.classes().get(k).core(), c.core()).find().isEmpty());
