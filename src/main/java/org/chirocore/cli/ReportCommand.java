@@ -3,11 +3,15 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 
+import org.chirocore.io.IoMessages;
 import org.chirocore.report.CertificateReport;
 import org.chirocore.report.Document;
 import org.chirocore.report.ReportException;
@@ -19,6 +23,7 @@ import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -52,6 +57,9 @@ final class ReportCommand implements Callable<Integer> {
     @Option(names = "--index", description = "With --run: --out is a directory, and the run's report (run.EXT), "
             + "a report on each of its certificates that verifies, and index.EXT linking them are written into it.")
     private boolean index;
+
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--input", paramLabel = "FILE", description = "The matroid file of a given-matroid provenance: "
             + "the provenance is verified too and the file is named in the verify command.")
@@ -92,6 +100,12 @@ final class ReportCommand implements Callable<Integer> {
         if (index && subject.family == null) {
             throw new BadInputException("--index applies to --run DIR, not to a certificate", null);
         }
+        if (index) {
+            String ext = "." + format.extension();
+            output.checkDirectory(out, reportInputs(), List.of("index" + ext, "run" + ext));
+        } else {
+            output.checkFiles(reportInputs(), out);
+        }
         try {
             List<Path> written;
             if (index) {
@@ -106,8 +120,21 @@ final class ReportCommand implements Callable<Integer> {
         } catch (ReportException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot be written: " + e, e);
+            throw new BadInputException(out + ": cannot be written: " + IoMessages.plain(e), e);
         }
         return ExitCodes.OK;
+    }
+
+    /** The files the report reads: the certificate and --input, or the family directory's files. */
+    private List<Path> reportInputs() {
+        List<Path> inputs = new ArrayList<>(Arrays.asList(subject.certificate, input));
+        if (subject.family != null) {
+            try (Stream<Path> files = Files.list(subject.family)) {
+                files.forEach(inputs::add);
+            } catch (IOException e) {
+                throw new BadInputException(subject.family + ": cannot list the directory: " + IoMessages.plain(e), e);
+            }
+        }
+        return inputs;
     }
 }
