@@ -14,7 +14,6 @@ import org.chirocore.family.FamilyExploration;
 import org.chirocore.family.ShapeFollow;
 import org.chirocore.family.VertexRule;
 import org.chirocore.io.IoMessages;
-import org.chirocore.matroid.Catalogue;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -101,8 +100,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
             w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
                     + " of cores, " + m.rejected().size() + " of " + runs + " runs filtered or without a core");
             for (FamilyExploration.CoreClass c : m.classes()) {
-                w.println("  " + Format.shape(c.core().rank(), c.core().size(), c.core().basisCount())
-                        + Catalogue.identify(c.core()).map(name -> " (" + name.symbol() + ")").orElse("") + " x "
+                w.println("  " + Format.core(c.core()) + " x "
                         + c.attempts().size() + "; " + c.status()
                         + c.certificate().map(f -> "; " + out.resolve(f.file())).orElse(""));
             }

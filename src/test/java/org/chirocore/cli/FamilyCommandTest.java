@@ -19,7 +19,7 @@ class FamilyCommandTest {
         Path out = dir.resolve("corner");
         CliRun run = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
-        assertTrue(run.out().contains("n = 3: core rank 3 on 7 elements, 28 bases; verified"), run.out());
+        assertTrue(run.out().contains("n = 3: core rank 3 on 7 elements, 28 bases (F7); verified"), run.out());
         assertTrue(Files.exists(out.resolve("table.md")) && Files.exists(out.resolve("n=4.cert.json")));
         CliRun again = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--out", out.toString());
         assertTrue(again.out().contains("verified (reused)"), again.out());
@@ -67,7 +67,7 @@ class FamilyCommandTest {
         CliRun run = CliRun.of("family", "predict", "families/corner.json", "--n", "3", "--prediction",
                 "families/corner.predict.json", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
-        assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases; verified"),
+        assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases (F7); verified"),
                 run.out());
         assertEquals(2, CliRun.of("family", "predict", "families/corner.json", "--n", "3..4", "--prediction",
                 "families/corner.predict.json", "--out", out.toString()).exit());
