@@ -21,11 +21,6 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         List<int[]> normalised, List<Relation> relations, Optional<String> drat, String dratFile, String dratSha256,
         Optional<String> lrat, List<Witness> witnesses, Json.Obj provenance) {
 
-    static final int MAX_ELEMENTS = 64;
-    static final int MAX_BASES = 10_000_000;
-    static final int MAX_RELATIONS = 10_000_000;
-    static final int MAX_LABEL = 256;
-
     /** A listed relation [[x...], a, b, c, d]. */
     record Relation(int[] x, int a, int b, int c, int d) {
         @Override
@@ -66,10 +61,10 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         if (rank < 0 || rank > labels.size()) {
             throw new JsonValueException("core.rank must be between 0 and the number of labels " + labels.size() + ", found " + rank);
         }
-        List<int[]> bases = sets(core.requireArray("bases"), "core.bases", MAX_BASES);
+        List<int[]> bases = sets(core.requireArray("bases"), "core.bases", Limits.MAX_BASES);
         Json.Obj non = content.requireObject("nonOrientability");
         non.requireOnly(List.of("normalised", "relations", "drat", "dratFile", "dratSha256", "lrat"));
-        List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", MAX_ELEMENTS + 1);
+        List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", Limits.MAX_ELEMENTS + 1);
         List<Relation> relations = relations(non.requireArray("relations"));
         Optional<String> drat = non.find("drat").map(d -> d.asString("nonOrientability.drat"));
         Optional<String> lrat = non.find("lrat").map(d -> d.asString("nonOrientability.lrat"));
@@ -85,14 +80,14 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
     }
 
     private static List<String> labels(Json.Arr array) {
-        if (array.size() > MAX_ELEMENTS) {
-            throw new JsonValueException("core.labels has " + array.size() + " elements; at most " + MAX_ELEMENTS + " are allowed");
+        if (array.size() > Limits.MAX_ELEMENTS) {
+            throw new JsonValueException("core.labels has " + array.size() + " elements; at most " + Limits.MAX_ELEMENTS + " are allowed");
         }
         List<String> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {
             String label = array.get(i).asString("core.labels[" + i + "]");
-            if (label.isEmpty() || label.length() > MAX_LABEL) {
-                throw new JsonValueException("core.labels[" + i + "] must have 1 to " + MAX_LABEL + " characters");
+            if (label.isEmpty() || label.length() > Limits.MAX_LABEL) {
+                throw new JsonValueException("core.labels[" + i + "] must have 1 to " + Limits.MAX_LABEL + " characters");
             }
             out.add(label);
         }
@@ -115,8 +110,8 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
     }
 
     private static int[] ints(Json.Arr array, String what) {
-        if (array.size() > MAX_ELEMENTS) {
-            throw new JsonValueException(what + " has " + array.size() + " entries; at most " + MAX_ELEMENTS + " are allowed");
+        if (array.size() > Limits.MAX_ELEMENTS) {
+            throw new JsonValueException(what + " has " + array.size() + " entries; at most " + Limits.MAX_ELEMENTS + " are allowed");
         }
         int[] out = new int[array.size()];
         for (int i = 0; i < out.length; i++) {
@@ -126,8 +121,8 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
     }
 
     private static List<Relation> relations(Json.Arr array) {
-        if (array.size() > MAX_RELATIONS) {
-            throw new JsonValueException("nonOrientability.relations has " + array.size() + " entries; at most " + MAX_RELATIONS + " are allowed");
+        if (array.size() > Limits.MAX_RELATIONS) {
+            throw new JsonValueException("nonOrientability.relations has " + array.size() + " entries; at most " + Limits.MAX_RELATIONS + " are allowed");
         }
         List<Relation> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {

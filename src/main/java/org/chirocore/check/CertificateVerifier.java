@@ -1,7 +1,14 @@
 package org.chirocore.check;
 
+import java.io.BufferedReader;
+import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.OutputStream;
+import java.nio.charset.CodingErrorAction;
+import java.nio.file.LinkOption;
+import java.security.DigestInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -44,8 +51,6 @@ public final class CertificateVerifier {
     public static final String PROVENANCE = "provenance";
     /** The check names, in the spec's order. */
     public static final List<String> CHECKS = List.of(FORMAT, HASH, CORE, NORMALISATION, RELATIONS, DRAT, MINIMALITY, PROVENANCE);
-    /** Largest certificate or (uncompressed) DRAT file read, in bytes. */
-    static final int MAX_BYTES = 1 << 30;
 
     private CertificateVerifier() {
     }
@@ -59,10 +64,30 @@ public final class CertificateVerifier {
     public static Report verify(Path file, Optional<Path> input) {
         Path dir = file.toAbsolutePath().getParent();
         try {
-            return verify(readCapped(Files.newInputStream(file), file.getFileName().toString()), dir, input, file.toString());
+            return verify(readRegularFile(file, Limits.MAX_CERTIFICATE_BYTES), dir, input, file.toString());
         } catch (IOException e) {
             return new Report(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
                     "the file could not be read"), 0);
+        }
+    }
+
+    /**
+     * The bytes of {@code file}, which must be a regular file (not a directory, FIFO or device) of
+     * at most {@code max} bytes; both are checked before reading.
+     */
+    static byte[] readRegularFile(Path file, long max) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new IOException(Files.exists(file) ? "not a regular file" : "no such file");
+        }
+        if (Files.size(file) > max) {
+            throw new IOException("the file has " + Files.size(file) + " bytes, more than the verifier's limit of " + max);
+        }
+        try (InputStream in = Files.newInputStream(file)) {
+            byte[] bytes = in.readNBytes((int) max + 1);
+            if (bytes.length > max) {
+                throw new IOException("the file grew beyond the verifier's limit of " + max + " bytes while being read");
+            }
+            return bytes;
         }
     }
 
@@ -88,9 +113,9 @@ public final class CertificateVerifier {
         } catch (JsonValueException e) {
             checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
             return new Report(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
-        } catch (RuntimeException e) {
-            // a bug of the verifier must still give a FAIL line, never an accepted certificate
-            checks.add(new Check(FORMAT, Status.FAIL, "internal error of the verifier: " + e));
+        } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
+            // a bug or exhausted resources must still give a FAIL line, never an accepted certificate
+            checks.add(new Check(FORMAT, Status.FAIL, failure(e)));
             return new Report(source, notRun(checks, "the file could not be read"), elapsed(start));
         }
         checks.add(new Check(FORMAT, Status.PASS, "chirocore-certificate version 1, rank " + certificate.rank() + " on "
@@ -161,28 +186,67 @@ public final class CertificateVerifier {
             return new Check(name, Status.FAIL, "cannot read: " + e);
         } catch (ArithmeticException e) {
             return new Check(name, Status.FAIL, "exact 64-bit arithmetic overflowed (" + e.getMessage() + "); not checked");
-        } catch (RuntimeException e) {
-            // a bug of the verifier must still give a FAIL line, never an accepted certificate
-            return new Check(name, Status.FAIL, "internal error of the verifier: " + e);
+        } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
+            // a bug or exhausted resources must still give a FAIL line, never an accepted certificate
+            return new Check(name, Status.FAIL, failure(e));
         }
+    }
+
+    /** The FAIL detail for an unexpected exception or an exhausted resource. */
+    private static String failure(Throwable e) {
+        if (e instanceof OutOfMemoryError) {
+            return "the verifier ran out of memory (" + e.getMessage() + "); not checked";
+        }
+        if (e instanceof StackOverflowError) {
+            return "the verifier ran out of stack; not checked";
+        }
+        return "internal error of the verifier: " + e;
     }
 
     /** The SHA-256 of {@code bytes} as 64 lower-case hex digits. */
     static String sha256(byte[] bytes) {
+        return HexFormat.of().formatHex(sha256().digest(bytes));
+    }
+
+    private static MessageDigest sha256() {
         try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("Every Java platform has SHA-256.", e);
         }
     }
 
-    private static byte[] readCapped(InputStream in, String name) throws IOException {
-        try (InputStream stream = in) {
-            byte[] bytes = stream.readNBytes(MAX_BYTES + 1);
-            if (bytes.length > MAX_BYTES) {
-                throw new IOException(name + " is larger than " + MAX_BYTES + " bytes");
+    /** A stream that fails with a message naming {@code what} once more than {@code max} bytes are read from it. */
+    private static final class CappedInputStream extends FilterInputStream {
+        private final long max;
+        private final String what;
+        private long count;
+
+        CappedInputStream(InputStream in, long max, String what) {
+            super(in);
+            this.max = max;
+            this.what = what;
+        }
+
+        @Override
+        public int read() throws IOException {
+            int b = super.read();
+            count(b < 0 ? 0 : 1);
+            return b;
+        }
+
+        @Override
+        public int read(byte[] buffer, int offset, int length) throws IOException {
+            int n = super.read(buffer, offset, length);
+            count(Math.max(n, 0));
+            return n;
+        }
+
+        private void count(int n) throws IOException {
+            count += n;
+            if (count > max) {
+                throw new IOException(what + " has more than " + max + " bytes, the verifier's limit");
             }
-            return bytes;
         }
     }
 
@@ -312,26 +376,51 @@ public final class CertificateVerifier {
                 }
                 return "the empty clause is derived (LRAT hints checked)";
             }
-            String proof = c.drat().isPresent() ? c.drat().get() : dratFile();
-            DratChecker.Outcome outcome = DratChecker.check(cnf, proof);
+            DratChecker.Outcome outcome = c.drat().isPresent() ? DratChecker.check(cnf, c.drat().get()) : dratFile();
             if (!outcome.valid()) {
                 throw new Failure(outcome.failure());
             }
             return "the empty clause is derived (" + outcome.summary() + ")";
         }
 
-        private String dratFile() throws Failure, IOException {
+        /**
+         * Checks the proof in the file named by {@code dratFile}: a regular file (not a symbolic
+         * link, FIFO or device) beside the certificate, gzip-compressed when its name ends in .gz,
+         * at most {@link Limits#MAX_PROOF_BYTES} bytes before and after decompression, streamed
+         * through the checker; a valid proof is then hashed to its end and the hash compared.
+         */
+        private DratChecker.Outcome dratFile() throws Failure, IOException {
             String name = c.dratFile();
             if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals("..") || name.equals(".")) {
-                throw new Failure("dratFile \"" + name + "\" must be a plain file name beside the certificate");
+                throw new Failure("dratFile \"" + Text.printable(name) + "\" must be a plain file name beside the certificate");
             }
             Path file = baseDir.resolve(name);
-            InputStream in = Files.newInputStream(file);
-            byte[] bytes = readCapped(name.endsWith(".gz") ? new GZIPInputStream(in) : in, name);
-            if (!sha256(bytes).equals(c.dratSha256())) {
-                throw new Failure("the uncompressed " + name + " hashes to " + sha256(bytes) + ", not the recorded " + c.dratSha256());
+            if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
+                throw new Failure("the proof file " + Text.printable(name) + (Files.isSymbolicLink(file)
+                        ? " is a symbolic link; it must be a regular file beside the certificate" : " is not a regular file beside the certificate"));
             }
-            return new String(bytes, StandardCharsets.UTF_8);
+            if (Files.size(file) > Limits.MAX_PROOF_BYTES) {
+                throw new Failure("the proof file " + Text.printable(name) + " has " + Files.size(file)
+                        + " bytes, more than the verifier's limit of " + Limits.MAX_PROOF_BYTES);
+            }
+            MessageDigest sha = sha256();
+            DratChecker.Outcome outcome;
+            try (InputStream raw = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS);
+                    InputStream in = new DigestInputStream(new CappedInputStream(name.endsWith(".gz") ? new GZIPInputStream(raw) : raw,
+                            Limits.MAX_PROOF_BYTES, "the uncompressed " + Text.printable(name)), sha)) {
+                outcome = DratChecker.check(cnf, new BufferedReader(new InputStreamReader(in,
+                        StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT))));
+                if (!outcome.valid()) {
+                    return outcome;
+                }
+                in.transferTo(OutputStream.nullOutputStream());
+            }
+            String actual = HexFormat.of().formatHex(sha.digest());
+            if (!actual.equals(c.dratSha256())) {
+                throw new Failure("the uncompressed " + Text.printable(name) + " hashes to " + actual + ", not the recorded "
+                        + Text.printable(c.dratSha256()));
+            }
+            return outcome;
         }
 
         /** Each witness has one sign per basis of its minor and satisfies all its 3-term relations ([BLSWZ, Thm. 3.6.2]). */

@@ -1,59 +1,109 @@
 package org.chirocore.check;
 
-import java.util.ArrayList;
-import java.util.List;
+import java.io.IOException;
+import java.io.Reader;
+import java.util.Arrays;
 
-/** Splitting DRAT and LRAT text into numbered lines of integers, with messages that name the line. */
+/**
+ * Reads DRAT and LRAT text as a stream of numbered lines of integers, with messages that name the
+ * line. The text is never held whole: one line at a time, at most {@link #MAX_NUMBERS} integers.
+ */
 final class ProofLines {
-    private ProofLines() {
-    }
+    /** Most integers on one proof line (a clause and its hints). */
+    static final int MAX_NUMBERS = 1 << 24;
 
     /** A proof step that is wrong; the message names its line. */
     static final class ProofError extends Exception {
         private static final long serialVersionUID = 1L;
 
-        ProofError(int line, String message) {
+        ProofError(long line, String message) {
             super("line " + line + ": " + message);
         }
     }
 
-    /** One non-blank line: its 1-based number, whether it starts with "d", and its integers. */
-    record Line(int number, boolean deletion, long[] numbers) {
+    /** One non-blank line: its 1-based number, whether it is a deletion, and its integers. */
+    record Line(long number, boolean deletion, long[] numbers) {
     }
+
+    private final Reader in;
+    private final int deletionAt;
+    private long number;
+    private long lastNonBlank = 1;
 
     /**
-     * The non-blank lines of {@code text}. A deletion is marked by a "d" as token number
-     * {@code deletionAt} (0 in DRAT, where it may also be glued to the first literal; 1 in LRAT), which
-     * is dropped from the numbers.
+     * @param deletionAt the token that marks a deletion by "d": 0 in DRAT (where it may also be glued
+     *     to the first literal), 1 in LRAT; it is dropped from the numbers
      */
-    static List<Line> parse(String text, int deletionAt) throws ProofError {
-        List<Line> out = new ArrayList<>();
-        int number = 0;
-        for (String raw : text.split("\n", -1)) {
-            number++;
-            String line = raw.strip();
-            if (line.isEmpty()) {
-                continue;
-            }
-            List<String> tokens = new ArrayList<>(List.of(line.split("\\s+")));
-            boolean deletion = tokens.size() > deletionAt && tokens.get(deletionAt).startsWith("d");
-            if (deletion && tokens.get(deletionAt).equals("d")) {
-                tokens.remove(deletionAt);
-            } else if (deletion) {
-                tokens.set(deletionAt, tokens.get(deletionAt).substring(1));
-            }
-            long[] numbers = new long[tokens.size()];
-            for (int i = 0; i < numbers.length; i++) {
-                numbers[i] = integer(number, tokens.get(i));
-            }
-            out.add(new Line(number, deletion, numbers));
-        }
-        return out;
+    ProofLines(Reader in, int deletionAt) {
+        this.in = in;
+        this.deletionAt = deletionAt;
     }
 
-    private static long integer(int line, String token) throws ProofError {
-        if (!token.matches("-?[0-9]{1,10}")) {
-            throw new ProofError(line, "\"" + (token.length() > 20 ? token.substring(0, 20) + "…" : token)
+    /** The number of the last non-blank line read, for a message about the end of the proof. */
+    long lastLine() {
+        return lastNonBlank;
+    }
+
+    /** The next non-blank line, or null at the end of the text. */
+    Line next() throws ProofError, IOException {
+        while (true) {
+            int c = read();
+            if (c < 0) {
+                return null;
+            }
+            number++;
+            long[] numbers = new long[8];
+            int count = 0;
+            int token = 0;
+            boolean deletion = false;
+            StringBuilder t = new StringBuilder();
+            while (c >= 0 && c != '\n') {
+                if (c == ' ' || c == '\t' || c == '\r') {
+                    c = read();
+                    continue;
+                }
+                t.setLength(0);
+                while (c >= 0 && c != '\n' && c != ' ' && c != '\t' && c != '\r') {
+                    if (t.length() <= 20) {
+                        t.append((char) c);
+                    }
+                    c = read();
+                }
+                String word = t.toString();
+                if (token++ == deletionAt && word.startsWith("d")) {
+                    deletion = true;
+                    word = word.substring(1);
+                    if (word.isEmpty()) {
+                        continue;
+                    }
+                }
+                if (count == numbers.length) {
+                    if (count == MAX_NUMBERS) {
+                        throw new ProofError(number, "more than " + MAX_NUMBERS + " numbers on one line");
+                    }
+                    numbers = Arrays.copyOf(numbers, Math.min(2 * count, MAX_NUMBERS));
+                }
+                numbers[count++] = integer(word);
+            }
+            if (token > 0) {
+                lastNonBlank = number;
+                return new Line(number, deletion, Arrays.copyOf(numbers, count));
+            }
+        }
+    }
+
+    private int read() throws IOException {
+        return in.read();
+    }
+
+    private long integer(String token) throws ProofError {
+        int digits = token.startsWith("-") ? token.length() - 1 : token.length();
+        boolean valid = digits >= 1 && digits <= 10;
+        for (int i = token.length() - digits; i < token.length() && valid; i++) {
+            valid = token.charAt(i) >= '0' && token.charAt(i) <= '9';
+        }
+        if (!valid) {
+            throw new ProofError(number, "\"" + Text.printable(token.length() > 20 ? token.substring(0, 20) + "…" : token)
                     + "\" is not an integer of at most 10 digits");
         }
         return Long.parseLong(token);
@@ -83,27 +133,30 @@ final class ProofLines {
         throw new ProofError(line.number(), "missing the closing 0");
     }
 
-    /** {@code lits} without repeated literals, first occurrences kept in order; a tautology is an error. */
-    static int[] distinct(Line line, int[] lits) throws ProofError {
-        List<Integer> out = new ArrayList<>();
-        for (int lit : lits) {
-            if (out.contains(-lit)) {
-                throw new ProofError(line.number(), "the clause contains both " + lit + " and " + -lit);
+    /**
+     * {@code lits} without repeated literals, first occurrences kept in order; a tautology is an
+     * error. {@code seen} is a scratch array indexed by variable, all zero on entry and on return.
+     */
+    static int[] distinct(Line line, int[] lits, byte[] seen) throws ProofError {
+        int[] out = new int[lits.length];
+        int count = 0;
+        try {
+            for (int lit : lits) {
+                byte sign = (byte) (lit > 0 ? 1 : -1);
+                byte before = seen[Math.abs(lit)];
+                if (before == -sign) {
+                    throw new ProofError(line.number(), "the clause contains both " + lit + " and " + -lit);
+                }
+                if (before == 0) {
+                    seen[Math.abs(lit)] = sign;
+                    out[count++] = lit;
+                }
             }
-            if (!out.contains(lit)) {
-                out.add(lit);
+        } finally {
+            for (int lit : lits) {
+                seen[Math.abs(lit)] = 0;
             }
         }
-        return out.stream().mapToInt(Integer::intValue).toArray();
-    }
-
-    /** Whether {@code clause} contains {@code lit}. */
-    static boolean contains(int[] clause, int lit) {
-        for (int l : clause) {
-            if (l == lit) {
-                return true;
-            }
-        }
-        return false;
+        return Arrays.copyOf(out, count);
     }
 }
