@@ -20,11 +20,11 @@ import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPInputStream;
 
-import org.chirocore.check.Certificate.Relation;
-import org.chirocore.check.Certificate.Witness;
+import org.chirocore.check.ParsedCertificate.Relation;
+import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.Relations.Term;
-import org.chirocore.check.Report.Check;
-import org.chirocore.check.Report.Status;
+import org.chirocore.check.Verdict.Check;
+import org.chirocore.check.Verdict.Status;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonFormatException;
 import org.chirocore.io.JsonValueException;
@@ -56,17 +56,17 @@ public final class CertificateVerifier {
     }
 
     /** Verifies the certificate in {@code file}; a given-matroid provenance is reported as not run. */
-    public static Report verify(Path file) {
+    public static Verdict verify(Path file) {
         return verify(file, Optional.empty());
     }
 
     /** Verifies the certificate in {@code file}, reading a given matroid's file from {@code input} if present. */
-    public static Report verify(Path file, Optional<Path> input) {
+    public static Verdict verify(Path file, Optional<Path> input) {
         Path dir = file.toAbsolutePath().getParent();
         try {
             return verify(readRegularFile(file, Limits.MAX_CERTIFICATE_BYTES), dir, input, file.toString());
         } catch (IOException e) {
-            return new Report(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
+            return new Verdict(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
                     "the file could not be read"), 0);
         }
     }
@@ -97,26 +97,26 @@ public final class CertificateVerifier {
      * @param baseDir the directory in which a {@code dratFile} is looked up
      * @param input the matroid file of a given-matroid provenance, if any
      */
-    public static Report verify(byte[] bytes, Path baseDir, Optional<Path> input) {
+    public static Verdict verify(byte[] bytes, Path baseDir, Optional<Path> input) {
         return verify(bytes, baseDir, input, "(" + bytes.length + " bytes)");
     }
 
-    private static Report verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
+    private static Verdict verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
         long start = System.nanoTime();
         List<Check> checks = new ArrayList<>();
-        Certificate certificate;
+        ParsedCertificate certificate;
         try {
-            certificate = Certificate.read(Json.parseUtf8(bytes));
+            certificate = ParsedCertificate.read(Json.parseUtf8(bytes));
         } catch (JsonFormatException e) {
             checks.add(new Check(FORMAT, Status.FAIL, "not valid JSON: " + e.getMessage()));
-            return new Report(source, notRun(checks, "the file is not JSON"), elapsed(start));
+            return new Verdict(source, notRun(checks, "the file is not JSON"), elapsed(start));
         } catch (JsonValueException e) {
             checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
-            return new Report(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
+            return new Verdict(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
         } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
             // a bug or exhausted resources must still give a FAIL line, never an accepted certificate
             checks.add(new Check(FORMAT, Status.FAIL, failure(e)));
-            return new Report(source, notRun(checks, "the file could not be read"), elapsed(start));
+            return new Verdict(source, notRun(checks, "the file could not be read"), elapsed(start));
         }
         checks.add(new Check(FORMAT, Status.PASS, "chirocore-certificate version 1, rank " + certificate.rank() + " on "
                 + certificate.labels().size() + " elements, " + certificate.bases().size() + " bases"));
@@ -125,7 +125,7 @@ public final class CertificateVerifier {
         Check core = run(CORE, v::core);
         checks.add(core);
         if (core.status() != Status.PASS) {
-            return new Report(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
+            return new Verdict(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
         }
         checks.add(run(NORMALISATION, v::normalisation));
         Check relations = run(RELATIONS, v::relations);
@@ -134,7 +134,7 @@ public final class CertificateVerifier {
                 : new Check(DRAT, Status.NOT_RUN, "not checked because a relation is invalid"));
         checks.add(run(MINIMALITY, v::minimality));
         checks.add(run(PROVENANCE, v::provenance));
-        return new Report(source, checks, elapsed(start));
+        return new Verdict(source, checks, elapsed(start));
     }
 
     private static long elapsed(long start) {
@@ -170,20 +170,20 @@ public final class CertificateVerifier {
 
     private interface Step {
         /** Runs the check; returns what was checked. */
-        String run() throws Failure, Skipped, IOException, Provenance.Mismatch;
+        String run() throws Failure, Skipped, IOException, ProvenanceCheck.Mismatch;
     }
 
     private static Check run(String name, Step step) {
         try {
             return new Check(name, Status.PASS, step.run());
-        } catch (Failure | Provenance.Mismatch | JsonValueException e) {
+        } catch (Failure | ProvenanceCheck.Mismatch | JsonValueException e) {
             return new Check(name, Status.FAIL, e.getMessage());
         } catch (Skipped e) {
             return new Check(name, Status.NOT_RUN, e.getMessage());
         } catch (JsonFormatException e) {
             return new Check(name, Status.FAIL, "not valid JSON: " + e.getMessage());
         } catch (IOException e) {
-            return new Check(name, Status.FAIL, "cannot read: " + e);
+            return new Check(name, Status.FAIL, "cannot read: " + e.getMessage());
         } catch (ArithmeticException e) {
             return new Check(name, Status.FAIL, "exact 64-bit arithmetic overflowed (" + e.getMessage() + "); not checked");
         } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
@@ -252,14 +252,14 @@ public final class CertificateVerifier {
 
     /** The checks of one parsed certificate; each fills in what the later ones need. */
     private static final class Verification {
-        private final Certificate c;
+        private final ParsedCertificate c;
         private final Path baseDir;
         private final Optional<Path> input;
         private final int n;
         private BasisTable core;
         private Cnf cnf;
 
-        Verification(Certificate c, Path baseDir, Optional<Path> input) {
+        Verification(ParsedCertificate c, Path baseDir, Optional<Path> input) {
             this.c = c;
             this.baseDir = baseDir;
             this.input = input;
@@ -397,7 +397,8 @@ public final class CertificateVerifier {
             Path file = baseDir.resolve(name);
             if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
                 throw new Failure("the proof file " + Text.printable(name) + (Files.isSymbolicLink(file)
-                        ? " is a symbolic link; it must be a regular file beside the certificate" : " is not a regular file beside the certificate"));
+                        ? " is a symbolic link; it must be a regular file beside the certificate"
+                        : Files.exists(file) ? " is not a regular file" : " does not exist"));
             }
             if (Files.size(file) > Limits.MAX_PROOF_BYTES) {
                 throw new Failure("the proof file " + Text.printable(name) + " has " + Files.size(file)
@@ -454,10 +455,11 @@ public final class CertificateVerifier {
             }
         }
 
-        String provenance() throws Provenance.Mismatch, Skipped, IOException {
-            Optional<String> rebuilt = Provenance.rebuild(c.provenance(), c.labels(), core, input);
+        String provenance() throws ProvenanceCheck.Mismatch, Skipped, IOException {
+            Optional<String> rebuilt = ProvenanceCheck.rebuild(c.provenance(), c.labels(), core, input);
             if (rebuilt.isEmpty()) {
-                throw new Skipped("a given matroid can only be rebuilt from its file; run verify with --input FILE");
+                throw new Skipped("the provenance is well formed, but a given matroid can only be rebuilt from its file; "
+                        + "run verify with --input FILE");
             }
             return rebuilt.get();
         }

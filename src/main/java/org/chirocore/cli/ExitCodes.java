@@ -18,6 +18,8 @@ final class ExitCodes {
     static final int BAD_INPUT = 2;
     /** No answer: a budget ran out. */
     static final int UNKNOWN = 3;
+    /** {@code verify}: no check failed, but some part was not checked, so the statement is not fully proved. */
+    static final int INCOMPLETE = 4;
 
     private ExitCodes() {
     }

@@ -8,7 +8,7 @@ import java.util.concurrent.Callable;
 
 import org.chirocore.cert.ReadableCertificate;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.Verdict;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -62,9 +62,9 @@ final class ExplainCommand implements Callable<Integer> {
             }
         }
         PrintWriter stdout = spec.commandLine().getOut();
-        Report report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
+        Verdict report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
         if (!report.passed()) {
-            for (Report.Check c : report.checks()) {
+            for (Verdict.Check c : report.checks()) {
                 stdout.printf("%-8s %s: %s%n", c.status(), c.name(), c.detail());
             }
             stdout.println(certificate + ": REJECTED by the verifier; nothing to explain.");

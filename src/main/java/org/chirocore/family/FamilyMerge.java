@@ -11,7 +11,7 @@ import java.util.TreeMap;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.Verdict;
 import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
 import org.chirocore.search.Strategy;
@@ -108,7 +108,7 @@ public final class FamilyMerge {
                 Files.copy(shard.resolve(dratName), out.resolve(dratName), StandardCopyOption.REPLACE_EXISTING);
             }
         }
-        Report report = CertificateVerifier.verify(target);
+        Verdict report = CertificateVerifier.verify(target);
         if (!report.passed()) {
             throw new FamilyException(source + ": the certificate of n = " + n + " fails the verifier.");
         }

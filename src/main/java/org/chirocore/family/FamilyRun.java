@@ -13,7 +13,7 @@ import java.util.concurrent.Future;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.Verdict;
 import org.chirocore.orient.Budget;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
@@ -186,7 +186,7 @@ public final class FamilyRun {
 
     /** The existing certificate as this run's result, when it verifies and matches the member. */
     private Optional<MemberResult> reuse(FamilyDefinition.Member m, Path file) throws IOException {
-        Report report = CertificateVerifier.verify(file);
+        Verdict report = CertificateVerifier.verify(file);
         Verification verification = Verification.of(report);
         if (verification == Verification.FAILED) {
             return Optional.empty();

@@ -8,7 +8,7 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Certification;
 import org.chirocore.cert.Source;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.Verdict;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.orient.Budget;
 import org.chirocore.search.MinimalCore;
@@ -56,7 +56,7 @@ final class MemberCertifier {
         }
         CertificateWriter.Written written = CertificateWriter.write(((Certification.Certified) certification)
                 .certificate(), file);
-        Report report = CertificateVerifier.verify(file);
+        Verdict report = CertificateVerifier.verify(file);
         Verification verification = Verification.of(report);
         if (verification == Verification.FAILED) {
             Files.deleteIfExists(file);
@@ -69,8 +69,8 @@ final class MemberCertifier {
         return new Written(verification, CertificateFacts.read(file), report.millis());
     }
 
-    private static String firstFailure(Report report) {
-        return report.checks().stream().filter(c -> c.status() == Report.Status.FAIL)
+    private static String firstFailure(Verdict report) {
+        return report.checks().stream().filter(c -> c.status() == Verdict.Status.FAIL)
                 .map(c -> c.name() + ": " + c.detail()).findFirst().orElse("no check failed");
     }
 }

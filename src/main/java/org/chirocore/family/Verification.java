@@ -1,6 +1,6 @@
 package org.chirocore.family;
 
-import org.chirocore.check.Report;
+import org.chirocore.check.Verdict;
 
 /** The independent verifier's verdict on a family member's certificate, as the family table states it. */
 public enum Verification {
@@ -21,7 +21,7 @@ public enum Verification {
     }
 
     /** The verdict of {@code report}. */
-    public static Verification of(Report report) {
+    public static Verification of(Verdict report) {
         return report.passed() ? VERIFIED : FAILED;
     }
 }

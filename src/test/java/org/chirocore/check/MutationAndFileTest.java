@@ -47,7 +47,7 @@ class MutationAndFileTest {
         withFile = TestCertificates.tamper(corner, moved, "nonOrientability");
     }
 
-    static Report verify(Json cert) {
+    static Verdict verify(Json cert) {
         return CertificateVerifier.verify(TestCertificates.bytes(cert), dir, Optional.empty());
     }
 
@@ -71,14 +71,14 @@ class MutationAndFileTest {
     @Test
     void aMissingProofFileIsAFailureNotAnException() {
         assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("absent.drat"), "nonOrientability", "dratFile")),
-                CertificateVerifier.DRAT, "cannot read");
+                CertificateVerifier.DRAT, "the proof file absent.drat does not exist");
     }
 
     @Test
     void proofsFromOtherSolverConfigurationsAreAccepted() {
         // LogicNG's lesson: re-check a claim with a second configuration
-        Report glucose = verify(TestCertificates.corner(SolverFactory::newGlucose21));
-        Report heap = verify(TestCertificates.corner(SolverFactory::newMiniLearningHeap));
+        Verdict glucose = verify(TestCertificates.corner(SolverFactory::newGlucose21));
+        Verdict heap = verify(TestCertificates.corner(SolverFactory::newMiniLearningHeap));
         assertTrue(glucose.passed(), glucose::toString);
         assertTrue(heap.passed(), heap::toString);
     }
@@ -99,12 +99,12 @@ class MutationAndFileTest {
             } catch (JsonFormatException e) {
                 // not JSON: the hash cannot even be recomputed, and the file is rejected at check 1
                 String file = "{\"format\": \"chirocore-certificate\", \"version\": 1, \"sha256\": \"\", \"content\": " + mutated + "}";
-                Report r = CertificateVerifier.verify(file.getBytes(StandardCharsets.UTF_8), dir, Optional.empty());
+                Verdict r = CertificateVerifier.verify(file.getBytes(StandardCharsets.UTF_8), dir, Optional.empty());
                 assertRejected(r, CertificateVerifier.FORMAT, "not valid JSON");
                 continue;
             }
             parsed++;
-            Report r = verify(TestCertificates.rehash((Json.Obj) TestCertificates.with(withFile, List.of("content"), content)));
+            Verdict r = verify(TestCertificates.rehash((Json.Obj) TestCertificates.with(withFile, List.of("content"), content)));
             assertTrue(!r.passed() || content.equals(original), () -> "accepted a changed certificate: " + r);
         }
         assertTrue(parsed > 50, "too few mutations parse to exercise the checks: " + parsed);
@@ -115,7 +115,7 @@ class MutationAndFileTest {
         Path file = dir.resolve("corner.json");
         Files.write(file, TestCertificates.bytes(withFile));
         assertTrue(CertificateVerifier.verify(file).passed());
-        Report missing = CertificateVerifier.verify(dir.resolve("nothing.json"));
+        Verdict missing = CertificateVerifier.verify(dir.resolve("nothing.json"));
         assertRejected(missing, CertificateVerifier.FORMAT, "cannot read the file");
         assertEquals(8, missing.checks().size());
     }

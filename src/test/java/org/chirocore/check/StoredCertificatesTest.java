@@ -41,9 +41,9 @@ class StoredCertificatesTest {
     void storedCertificateVerifies(Path certificate) {
         String name = certificate.getFileName().toString().replace(".cert.json", ".json");
         Path input = DIR.resolve("inputs").resolve(name);
-        Report report = CertificateVerifier.verify(certificate, Files.exists(input) ? Optional.of(input) : Optional.empty());
-        for (Report.Check c : report.checks()) {
-            assertTrue(c.status() == Report.Status.PASS, certificate + ": " + c);
+        Verdict report = CertificateVerifier.verify(certificate, Files.exists(input) ? Optional.of(input) : Optional.empty());
+        for (Verdict.Check c : report.checks()) {
+            assertTrue(c.status() == Verdict.Status.PASS, certificate + ": " + c);
         }
         System.out.println(certificate + ": verified in " + report.millis() + " ms");
     }

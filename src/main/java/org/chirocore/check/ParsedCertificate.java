@@ -17,7 +17,7 @@ import org.chirocore.io.JsonValueException;
  * @param lrat the inline LRAT proof (hints included), when given instead of a DRAT proof
  * @param provenance the provenance object, whose inside is checked by the provenance check
  */
-record Certificate(String sha256, Json.Obj content, int rank, List<String> labels, List<int[]> bases,
+record ParsedCertificate(String sha256, Json.Obj content, int rank, List<String> labels, List<int[]> bases,
         List<int[]> normalised, List<Relation> relations, Optional<String> drat, String dratFile, String dratSha256,
         Optional<String> lrat, List<Witness> witnesses, Json.Obj provenance) {
 
@@ -38,7 +38,7 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
      *
      * @throws JsonValueException naming the first member of the wrong type, missing, unknown or too large
      */
-    static Certificate read(Json json) {
+    static ParsedCertificate read(Json json) {
         Json.Obj top = json.asObject("the certificate");
         top.requireOnly(List.of("format", "version", "tool", "sha256", "content", "run"));
         if (!top.requireString("format").equals("chirocore-certificate")) {
@@ -75,7 +75,7 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         }
         String dratFile = non.has("dratFile") ? non.requireString("dratFile") : "";
         String dratSha256 = non.has("dratFile") ? non.requireString("dratSha256") : "";
-        return new Certificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256, lrat,
+        return new ParsedCertificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256, lrat,
                 witnesses(content.requireArray("minimality"), labels.size()), content.requireObject("provenance"));
     }
 

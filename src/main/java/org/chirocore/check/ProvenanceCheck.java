@@ -24,7 +24,7 @@ import org.chirocore.io.Json;
  * of a cube's ground set (up to 2^10 vertices) are BitSets; a given matroid and the core have at
  * most 64 elements.
  */
-final class Provenance {
+final class ProvenanceCheck {
     /** A rejected provenance; the message says what does not match. */
     static final class Mismatch extends Exception {
         private static final long serialVersionUID = 1L;
@@ -38,7 +38,7 @@ final class Provenance {
     private record Source(List<String> labels, ToIntFunction<BitSet> rank, int fullRank, BitSet contractedFirst) {
     }
 
-    private Provenance() {
+    private ProvenanceCheck() {
     }
 
     /**
@@ -292,7 +292,7 @@ final class Provenance {
             }
             String listed = m.has("bases") ? "bases" : "nonbases";
             Set<Long> sets = new HashSet<>();
-            for (int[] b : Certificate.sets(m.requireArray(listed), listed, Limits.MAX_BASES)) {
+            for (int[] b : ParsedCertificate.sets(m.requireArray(listed), listed, Limits.MAX_BASES)) {
                 if (!sets.add(mask(b, n, r))) {
                     throw new Mismatch(listed + " lists " + java.util.Arrays.toString(b) + " twice");
                 }
