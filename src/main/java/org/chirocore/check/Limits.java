@@ -26,7 +26,7 @@ final class Limits {
     /** Most entries (a basis with one or two of its elements) sorted by the basis-exchange check; three longs each. */
     static final long MAX_EXCHANGE_PAIRS = 12_000_000;
     /** Most 3-term relations evaluated over all minimality witnesses together. */
-    static final long MAX_WITNESS_RELATIONS = 400_000_000L;
+    static final long MAX_WITNESS_RELATIONS = 100_000_000L;
     /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
     static final int MAX_CUBE = 16;
     /** Most r-subsets of the core's ground set whose rank is computed when rebuilding the core. */

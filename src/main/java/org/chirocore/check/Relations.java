@@ -121,6 +121,29 @@ final class Relations {
         return Optional.empty();
     }
 
+    /**
+     * An upper bound on the relations {@link #violated} evaluates for the two minors core\e and
+     * core/e: per minor, bases · C(rank, 2) · C(size − rank, 2).
+     */
+    static long evaluations(BasisTable core, int e) {
+        long containing = 0;
+        for (int k = 0; k < core.count(); k++) {
+            containing += (core.basis(k) >>> e) & 1;
+        }
+        boolean loop = containing == 0;
+        boolean coloop = containing == core.count();
+        long deletionBases = coloop ? core.count() : core.count() - containing;
+        int deletionRank = coloop ? core.rank - 1 : core.rank;
+        long contractionBases = loop ? core.count() : containing;
+        int contractionRank = loop ? core.rank : core.rank - 1;
+        return deletionBases * pairs(deletionRank) * pairs(core.size - 1 - deletionRank)
+                + contractionBases * pairs(contractionRank) * pairs(core.size - 1 - contractionRank);
+    }
+
+    private static long pairs(int k) {
+        return k < 2 ? 1 : (long) k * (k - 1) / 2;
+    }
+
     private static Optional<String> violatedWith(BasisTable t, int[] signs, long x, long pq, long basis) {
         long outside = ~basis & (t.size == 64 ? -1L : (1L << t.size) - 1);
         for (long us = outside; us != 0; us &= us - 1) {

@@ -32,9 +32,13 @@ class MutationAndFileTest {
 
     static Json.Obj withFile;
 
-    /** The corner certificate with its proof moved to dir/corner.drat.gz. */
     @BeforeAll
     static void build() throws IOException {
+        withFile = withProofFile(dir);
+    }
+
+    /** The corner certificate with its proof moved to {@code dir}/corner.drat.gz. */
+    static Json.Obj withProofFile(Path dir) throws IOException {
         Json.Obj corner = TestCertificates.corner(TestCertificates.DEFAULT_SOLVER);
         String drat = CertificateVerifierTest.drat(corner);
         try (OutputStream out = new GZIPOutputStream(Files.newOutputStream(dir.resolve("corner.drat.gz")))) {
@@ -44,7 +48,7 @@ class MutationAndFileTest {
         Json.Obj moved = Json.Obj.builder().put("normalised", non.require("normalised")).put("relations", non.require("relations"))
                 .put("dratFile", "corner.drat.gz")
                 .put("dratSha256", CertificateVerifier.sha256(drat.getBytes(StandardCharsets.UTF_8))).build();
-        withFile = TestCertificates.tamper(corner, moved, "nonOrientability");
+        return TestCertificates.tamper(corner, moved, "nonOrientability");
     }
 
     static Verdict verify(Json cert) {
