@@ -1,6 +1,5 @@
 package org.chirocore.check;
 
-import java.io.BufferedReader;
 import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -25,9 +24,6 @@ import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.Relations.Term;
 import org.chirocore.check.Verdict.Check;
 import org.chirocore.check.Verdict.Status;
-import org.chirocore.io.Json;
-import org.chirocore.io.JsonFormatException;
-import org.chirocore.io.JsonValueException;
 
 /**
  * Verifies a certificate of a minor-minimal non-orientable matroid (docs/certificate-format.md),
@@ -106,11 +102,11 @@ public final class CertificateVerifier {
         List<Check> checks = new ArrayList<>();
         ParsedCertificate certificate;
         try {
-            certificate = ParsedCertificate.read(Json.parseUtf8(bytes));
-        } catch (JsonFormatException e) {
+            certificate = ParsedCertificate.read(JsonTree.parse(bytes));
+        } catch (JsonTree.Malformed e) {
             checks.add(new Check(FORMAT, Status.FAIL, "not valid JSON: " + e.getMessage()));
             return new Verdict(source, notRun(checks, "the file is not JSON"), elapsed(start));
-        } catch (JsonValueException e) {
+        } catch (JsonTree.Mistyped e) {
             checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
             return new Verdict(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
         } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
@@ -176,11 +172,11 @@ public final class CertificateVerifier {
     private static Check run(String name, Step step) {
         try {
             return new Check(name, Status.PASS, step.run());
-        } catch (Failure | ProvenanceCheck.Mismatch | JsonValueException e) {
+        } catch (Failure | ProvenanceCheck.Mismatch | JsonTree.Mistyped e) {
             return new Check(name, Status.FAIL, e.getMessage());
         } catch (Skipped e) {
             return new Check(name, Status.NOT_RUN, e.getMessage());
-        } catch (JsonFormatException e) {
+        } catch (JsonTree.Malformed e) {
             return new Check(name, Status.FAIL, "not valid JSON: " + e.getMessage());
         } catch (IOException e) {
             return new Check(name, Status.FAIL, "cannot read: " + e.getMessage());
@@ -267,7 +263,7 @@ public final class CertificateVerifier {
         }
 
         String hash() throws Failure {
-            String actual = sha256(c.content().toText().getBytes(StandardCharsets.UTF_8));
+            String actual = sha256(JsonTree.canonical(c.content()).getBytes(StandardCharsets.UTF_8));
             if (!actual.equals(c.sha256())) {
                 throw new Failure("the canonical content hashes to " + actual + ", not the recorded " + c.sha256());
             }
@@ -409,8 +405,8 @@ public final class CertificateVerifier {
             try (InputStream raw = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS);
                     InputStream in = new DigestInputStream(new CappedInputStream(name.endsWith(".gz") ? new GZIPInputStream(raw) : raw,
                             Limits.MAX_PROOF_BYTES, "the uncompressed " + Text.printable(name)), sha)) {
-                outcome = DratChecker.check(cnf, new BufferedReader(new InputStreamReader(in,
-                        StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT))));
+                outcome = DratChecker.check(cnf, new InputStreamReader(in,
+                        StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)));
                 if (!outcome.valid()) {
                     return outcome;
                 }

@@ -131,6 +131,10 @@ public final class DratChecker {
             if (lits.length != line.numbers().length - 1) {
                 throw new ProofError(line.number(), "text after the closing 0");
             }
+            if (steps > Limits.MAX_PROPAGATION_STEPS) {
+                throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
+                        + " propagation steps, the verifier's limit; not checked further");
+            }
             if (line.deletion()) {
                 delete(ProofLines.distinct(line, lits, scratch));
             } else {
@@ -162,10 +166,7 @@ public final class DratChecker {
             }
             checkRat(line, lits, hints);
         }
-        if (steps > Limits.MAX_PROPAGATION_STEPS) {
-            throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
-                    + " propagation steps, the verifier's limit; not checked further");
-        }
+
         lemmas++;
         int id = add(lits);
         if (lrat != null) {

@@ -10,7 +10,7 @@ final class Limits {
     /** Largest certificate file read, in bytes; the size is checked before reading. */
     static final long MAX_CERTIFICATE_BYTES = 64L << 20;
     /** Largest proof read from a separate file, in bytes after decompression; the proof is streamed. */
-    static final long MAX_PROOF_BYTES = 1L << 30;
+    static final long MAX_PROOF_BYTES = 256L << 20;
     /** Most elements of a core (bases are 64-bit masks) and of a given matroid. */
     static final int MAX_ELEMENTS = 64;
     /** Most bases of a core. */
@@ -22,7 +22,7 @@ final class Limits {
     /** Most literals in the lemmas of a proof (the checker holds them all), bounding its memory. */
     static final long MAX_PROOF_LITERALS = 50_000_000;
     /** Most watch-list visits of unit propagation in one proof check, bounding its work. */
-    static final long MAX_PROPAGATION_STEPS = 2_000_000_000L;
+    static final long MAX_PROPAGATION_STEPS = 500_000_000L;
     /** Most entries (a basis with one or two of its elements) sorted by the basis-exchange check; three longs each. */
     static final long MAX_EXCHANGE_PAIRS = 12_000_000;
     /** Most 3-term relations evaluated over all minimality witnesses together. */

@@ -73,6 +73,10 @@ public final class LratChecker {
     private void run(Reader text) throws ProofError, IOException {
         ProofLines lines = new ProofLines(text, 1);
         for (Line line = lines.next(); line != null; line = lines.next()) {
+            if (steps > Limits.MAX_PROPAGATION_STEPS) {
+                throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
+                        + " propagation steps, the verifier's limit; not checked further");
+            }
             long[] n = line.numbers();
             Line rest = new Line(line.number(), line.deletion(), Arrays.copyOfRange(n, 1, n.length));
             if (line.deletion()) {
@@ -81,6 +85,7 @@ public final class LratChecker {
                     throw new ProofError(line.number(), "text after the closing 0 of the deleted ids");
                 }
                 for (int i = 0; i < end; i++) {
+                    steps++;
                     int k = position(rest.numbers()[i]);
                     if (k >= 0) {
                         clauses[k] = null;
@@ -107,10 +112,6 @@ public final class LratChecker {
                         + " literals, the verifier's limit; not checked further");
             }
             lemma(line.number(), lits, Arrays.copyOfRange(rest.numbers(), litsEnd + 1, hintsEnd));
-            if (steps > Limits.MAX_PROPAGATION_STEPS) {
-                throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
-                        + " steps, the verifier's limit; not checked further");
-            }
             add(n[0], lits);
             if (lits.length == 0) {
                 return;

@@ -29,6 +29,9 @@ final class ProofLines {
     private final int deletionAt;
     private long number;
     private long lastNonBlank = 1;
+    private final char[] buffer = new char[1 << 16];
+    private int at;
+    private int length;
 
     /**
      * @param deletionAt the token that marks a deletion by "d": 0 in DRAT (where it may also be glued
@@ -93,7 +96,15 @@ final class ProofLines {
     }
 
     private int read() throws IOException {
-        return in.read();
+        if (at == length) {
+            length = in.read(buffer);
+            at = 0;
+            if (length <= 0) {
+                length = 0;
+                return -1;
+            }
+        }
+        return buffer[at++];
     }
 
     private long integer(String token) throws ProofError {

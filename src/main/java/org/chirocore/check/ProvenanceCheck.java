@@ -13,7 +13,6 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.ToIntFunction;
 
-import org.chirocore.io.Json;
 
 /**
  * Check 8: rebuilding the core from its provenance with exact arithmetic of our own. A construction
@@ -45,23 +44,23 @@ final class ProvenanceCheck {
      * Rebuilds the core; returns a description of what was rebuilt, or empty when the provenance is
      * a given matroid and no input file was supplied.
      */
-    static Optional<String> rebuild(Json.Obj provenance, List<String> coreLabels, BasisTable core, Optional<Path> input)
+    static Optional<String> rebuild(JsonTree.Obj provenance, List<String> coreLabels, BasisTable core, Optional<Path> input)
             throws Mismatch, IOException {
         provenance.requireOnly(List.of("construction", "given", "path"));
         if (provenance.has("construction") == provenance.has("given")) {
             throw new Mismatch("provenance must have exactly one of \"construction\" and \"given\"");
         }
-        Json.Obj path = provenance.requireObject("path");
+        JsonTree.Obj path = provenance.requireObject("path");
         path.requireOnly(List.of("contracted", "deleted"));
         int removed = distinctLabels(path.requireArray("contracted"), path.requireArray("deleted"), coreLabels);
         Source source;
         String what;
         if (provenance.has("construction")) {
-            Json.Obj c = provenance.requireObject("construction");
+            JsonTree.Obj c = provenance.requireObject("construction");
             source = cube(c);
             what = "the pulled " + c.requireInt("cube") + "-cube over " + c.requireString("field");
         } else {
-            Json.Obj given = provenance.requireObject("given");
+            JsonTree.Obj given = provenance.requireObject("given");
             given.requireOnly(List.of("sha256", "elements", "rank"));
             if (!given.requireString("sha256").matches("[0-9a-f]{64}")) {
                 throw new Mismatch("given.sha256 must be 64 lower-case hex digits");
@@ -94,9 +93,9 @@ final class ProvenanceCheck {
      * Checks, without the source matroid, that the path's labels are strings, none repeated within
      * or across the two lists or equal to a core label; returns how many there are.
      */
-    private static int distinctLabels(Json.Arr contracted, Json.Arr deleted, List<String> coreLabels) throws Mismatch {
+    private static int distinctLabels(JsonTree.Arr contracted, JsonTree.Arr deleted, List<String> coreLabels) throws Mismatch {
         Set<String> seen = new HashSet<>(coreLabels);
-        for (Json.Arr array : List.of(contracted, deleted)) {
+        for (JsonTree.Arr array : List.of(contracted, deleted)) {
             String what = array == contracted ? "path.contracted" : "path.deleted";
             for (int i = 0; i < array.size(); i++) {
                 String label = array.get(i).asString(what + "[" + i + "]");
@@ -114,7 +113,7 @@ final class ProvenanceCheck {
      * in general position. Only the ranks needed are computed: a basis of H, then one cofactor
      * vector per hyperplane tested, so that membership in a span is one dot product per vertex.
      */
-    private static Source cube(Json.Obj c) throws Mismatch {
+    private static Source cube(JsonTree.Obj c) throws Mismatch {
         c.requireOnly(List.of("cube", "field", "hyperplane", "pulled", "contractPulled"));
         int n = c.requireInt("cube");
         if (n < 1 || n > Limits.MAX_CUBE) {
@@ -136,7 +135,7 @@ final class ProvenanceCheck {
         }
         ToIntFunction<BitSet> rank = set -> ExactRank.rank(columns, set, p);
         BitSet h = labelSet(c.requireArray("hyperplane"), labels, "construction.hyperplane");
-        BitSet o = labelSet(new Json.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
+        BitSet o = labelSet(new JsonTree.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
         if (h.intersects(o)) {
             throw new Mismatch("the pulled vertex lies on the hyperplane");
         }
@@ -235,14 +234,14 @@ final class ProvenanceCheck {
     }
 
     /** A given matroid read from a matroid file (docs/matroid-format.md), after checking its hash, size and rank. */
-    private static Source given(Json.Obj given, Path input) throws Mismatch, IOException {
+    private static Source given(JsonTree.Obj given, Path input) throws Mismatch, IOException {
         given.requireOnly(List.of("sha256", "elements", "rank"));
         byte[] bytes = CertificateVerifier.readRegularFile(input, Limits.MAX_CERTIFICATE_BYTES);
         if (!CertificateVerifier.sha256(bytes).equals(given.requireString("sha256"))) {
             throw new Mismatch("the SHA-256 of " + input.getFileName() + " is " + CertificateVerifier.sha256(bytes)
                     + ", not the recorded " + given.requireString("sha256"));
         }
-        Source m = GivenMatroid.read(Json.parseUtf8(bytes));
+        Source m = GivenMatroid.read(JsonTree.parse(bytes));
         BitSet all = new BitSet();
         all.set(0, m.labels().size());
         if (m.labels().size() != given.requireInt("elements") || m.rank().applyAsInt(all) != given.requireInt("rank")) {
@@ -260,8 +259,8 @@ final class ProvenanceCheck {
          * omitted), exactly one of bases, nonbases and matrix, sets of r distinct elements in
          * range, no set listed twice, and the bases satisfying the basis axioms.
          */
-        static Source read(Json json) throws Mismatch {
-            Json.Obj m = json.asObject("the input matroid");
+        static Source read(JsonTree.Value json) throws Mismatch {
+            JsonTree.Obj m = json.asObject("the input matroid");
             m.requireOnly(List.of("rank", "labels", "elements", "comment", "bases", "nonbases", "matrix"));
             int given = (m.has("bases") ? 1 : 0) + (m.has("nonbases") ? 1 : 0) + (m.has("matrix") ? 1 : 0);
             if (given != 1) {
@@ -332,16 +331,16 @@ final class ProvenanceCheck {
             }, r, new BitSet());
         }
 
-        private static ToIntFunction<BitSet> matrixRank(Json.Obj matrix, int n, int r) throws Mismatch {
+        private static ToIntFunction<BitSet> matrixRank(JsonTree.Obj matrix, int n, int r) throws Mismatch {
             matrix.requireOnly(List.of("field", "columns"));
             long p = field(matrix.requireString("field"));
-            Json.Arr cols = matrix.requireArray("columns");
+            JsonTree.Arr cols = matrix.requireArray("columns");
             if (cols.size() != n && n != 0) {
                 throw new Mismatch("the input matrix has " + cols.size() + " columns for " + n + " elements");
             }
             long[][] columns = new long[cols.size()][];
             for (int j = 0; j < columns.length; j++) {
-                Json.Arr col = cols.get(j).asArray("columns[" + j + "]");
+                JsonTree.Arr col = cols.get(j).asArray("columns[" + j + "]");
                 columns[j] = new long[col.size()];
                 for (int i = 0; i < col.size(); i++) {
                     columns[j][i] = col.get(i).asLong("columns[" + j + "][" + i + "]");
@@ -423,7 +422,7 @@ final class ProvenanceCheck {
     }
 
     /** The set of the listed labels, which must be distinct labels of the matroid. */
-    private static BitSet labelSet(Json.Arr array, List<String> labels, String what) throws Mismatch {
+    private static BitSet labelSet(JsonTree.Arr array, List<String> labels, String what) throws Mismatch {
         Map<String, Integer> index = new HashMap<>();
         for (int e = 0; e < labels.size(); e++) {
             index.put(labels.get(e), e);
