@@ -6,7 +6,6 @@ import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
 import java.util.List;
 
 import org.chirocore.check.ProofLines.Line;
@@ -26,9 +25,7 @@ import org.chirocore.check.ProofLines.ProofError;
  * a top-level assignment, which is ignored (as drat-trim does), and of a clause not present, which
  * is ignored too; ignoring a deletion only keeps more clauses and is therefore sound. Lines after the
  * empty clause are not read. Lemmas may only use the CNF's variables; tautologies are rejected.
- *
- * <p>The same run can record, per lemma, the clause ids unit propagation used, which is an LRAT
- * proof ({@link #toLrat}).
+
  */
 public final class DratChecker {
     /** The outcome: {@code failure} is empty when the proof is valid; {@code summary} counts what was done. */
@@ -53,14 +50,11 @@ public final class DratChecker {
     private int propagated;
     /** A clause falsified at top level, once the formula is refuted by unit propagation alone; else 0. */
     private int topConflict;
-    private final int[] markStamp;
-    private int stamp;
-    private final StringBuilder lrat;
     private int lemmas;
     private int deleted;
     private int ignored;
 
-    private DratChecker(Cnf cnf, boolean writeLrat) {
+    private DratChecker(Cnf cnf) {
         variables = cnf.variables();
         // allocated on first use: most literals of a large formula are never watched
         watches = new IntList[2 * variables + 2];
@@ -69,8 +63,6 @@ public final class DratChecker {
         value = new byte[variables + 1];
         reason = new int[variables + 1];
         trail = new int[variables + 1];
-        markStamp = new int[variables + 1];
-        lrat = writeLrat ? new StringBuilder() : null;
         clauses.add(null);
         for (int[] clause : cnf.clauses()) {
             add(clause);
@@ -92,32 +84,13 @@ public final class DratChecker {
 
     /** As {@link #check(Cnf, String)}, reading the proof as a stream up to its empty clause. */
     static Outcome check(Cnf cnf, Reader drat) throws IOException {
-        DratChecker checker = new DratChecker(cnf, false);
+        DratChecker checker = new DratChecker(cnf);
         try {
             checker.run(drat);
             return new Outcome(true, "", checker.summary());
         } catch (ProofError e) {
             return new Outcome(false, e.getMessage(), checker.summary());
         }
-    }
-
-    /**
-     * The LRAT proof (Cruz-Filipe et al., CADE 2017) of a valid DRAT proof: lines {@code id lits 0 hints 0}
-     * (a RAT lemma lists, per clause D containing −p, {@code −id(D)} and the hints for its resolvent)
-     * and {@code id d ids 0}; CNF clause i has id i.
-     *
-     * @throws IllegalArgumentException with the DRAT failure when the proof is not valid
-     */
-    public static String toLrat(Cnf cnf, String drat) {
-        DratChecker checker = new DratChecker(cnf, true);
-        try {
-            checker.run(new StringReader(drat));
-        } catch (ProofError e) {
-            throw new IllegalArgumentException("The DRAT proof is not valid: " + e.getMessage(), e);
-        } catch (IOException e) {
-            throw new UncheckedIOException("A string reader does not fail.", e);
-        }
-        return checker.lrat.toString();
     }
 
     private String summary() {
@@ -153,32 +126,20 @@ public final class DratChecker {
     }
 
     private void lemma(Line line, int[] lits) throws ProofError {
-        StringBuilder hints = new StringBuilder();
         int mark = trailSize;
-        int conflict = assumeNegation(lits);
-        if (conflict != 0) {
-            appendHints(hints, conflict);
-            undo(mark);
-        } else {
-            undo(mark);
-            if (lits.length == 0) {
-                throw new ProofError(line.number(), "the empty clause is not RUP: unit propagation finds no conflict");
-            }
-            checkRat(line, lits, hints);
+        boolean rup = assumeNegation(lits) != 0;
+        undo(mark);
+        if (!rup && lits.length == 0) {
+            throw new ProofError(line.number(), "the empty clause is not RUP: unit propagation finds no conflict");
         }
-
+        if (!rup) {
+            checkRat(line, lits);
+        }
         lemmas++;
-        int id = add(lits);
-        if (lrat != null) {
-            lrat.append(id).append(' ');
-            for (int lit : lits) {
-                lrat.append(lit).append(' ');
-            }
-            lrat.append("0").append(hints).append(" 0\n");
-        }
+        add(lits);
     }
 
-    private void checkRat(Line line, int[] lits, StringBuilder hints) throws ProofError {
+    private void checkRat(Line line, int[] lits) throws ProofError {
         int pivot = lits[0];
         IntList candidates = occurrences[code(-pivot)];
         int kept = 0;
@@ -201,8 +162,6 @@ public final class DratChecker {
                 throw new ProofError(line.number(), "lemma " + clauseText(lits) + " is neither RUP nor RAT on " + pivot
                         + " (the resolvent with clause " + id + ", " + clauseText(d) + ", is not RUP)");
             }
-            hints.append(" -").append(id);
-            appendHints(hints, conflict);
             undo(mark);
         }
         if (candidates != null) {
@@ -258,9 +217,6 @@ public final class DratChecker {
         }
         clauses.set(id, null);
         deleted++;
-        if (lrat != null) {
-            lrat.append(clauses.size() - 1).append(" d ").append(id).append(" 0\n");
-        }
     }
 
     /**
@@ -408,37 +364,6 @@ public final class DratChecker {
             }
         }
         return -1;
-    }
-
-    /**
-     * Appends the ids of the clauses that unit propagation used to reach {@code conflict}, in trail
-     * order (each becomes unit after the previous ones), then {@code conflict} itself. Cost O(trail).
-     */
-    private void appendHints(StringBuilder out, int conflict) {
-        if (lrat == null) {
-            return;
-        }
-        stamp++;
-        markVariables(clauses.get(conflict));
-        List<Integer> used = new ArrayList<>();
-        for (int i = trailSize - 1; i >= 0; i--) {
-            int v = Math.abs(trail[i]);
-            if (markStamp[v] == stamp && reason[v] != 0 && reason[v] != conflict) {
-                used.add(reason[v]);
-                markVariables(clauses.get(reason[v]));
-            }
-        }
-        Collections.reverse(used);
-        used.add(conflict);
-        for (int id : used) {
-            out.append(' ').append(id);
-        }
-    }
-
-    private void markVariables(int[] clause) {
-        for (int lit : clause) {
-            markStamp[Math.abs(lit)] = stamp;
-        }
     }
 
     private int value(int lit) {

@@ -1,5 +1,7 @@
 package org.chirocore.check;
 
+import org.chirocore.cert.LratConversion;
+
 import static org.chirocore.check.CertificateVerifierTest.assertRejected;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -164,7 +166,7 @@ class TrustTest {
     void exportingLratSurvivesTheDeletionOfTheTopLevelConflict() {
         // units 1 and -1 conflict at top level; the proof deletes the falsified clause before adding the empty clause
         Cnf cnf = new Cnf(1, List.of(new int[] {1}, new int[] {-1}));
-        String lrat = DratChecker.toLrat(cnf, "d -1 0\n0\n");
+        String lrat = LratConversion.convert(cnf.variables(), cnf.clauses(), "d -1 0\n0\n");
         assertEquals(Optional.empty(), LratChecker.check(cnf, lrat), lrat);
         assertTrue(DratChecker.check(cnf, "d -1 0\n0\n").valid());
     }
