@@ -305,7 +305,7 @@ public final class CertificateVerifier {
 
         /**
          * The normalised bases are bases and the vectors (1, 1_B) are GF(2)-independent
-         * (math-notes §2, normalisation): equivalently the differences 1_B ⊕ 1_B0 are independent.
+         * (docs/mathematics.md §4): equivalently the differences 1_B ⊕ 1_B0 are independent.
          */
         String normalisation() throws Failure {
             long[] pivotByTopBit = new long[64];

@@ -16,7 +16,7 @@ import java.util.function.ToIntFunction;
 
 /**
  * Check 8: rebuilding the core from its provenance with exact arithmetic of our own. A construction
- * is the affine n-cube (vertex v as the column (1, v), math-notes §3) over Q or GF(p), pulled at O
+ * is the affine n-cube (vertex v as the column (1, v), docs/mathematics.md §7) over Q or GF(p), pulled at O
  * onto H, optionally contracted at O; a given matroid is read from {@code --input}. Then the core
  * must be exactly M/C\D (rank_{M/C\D}(S) = rank_M(S ∪ C) − rank_M(C), [Ox, Prop. 3.1.6]). Cost: one
  * rank evaluation per r-subset of the core's ground set, plus the general-position test. Subsets

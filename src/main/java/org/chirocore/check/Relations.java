@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * 3-term Grassmann–Plücker relations ([BLSWZ, §3.5–3.6]; math-notes §2) on a basis table: their
+ * 3-term Grassmann–Plücker relations ([BLSWZ, §3.5–3.6]; docs/mathematics.md §2–3) on a basis table: their
  * terms, their clauses under the certificate encoding, and their evaluation on a sign vector.
  */
 final class Relations {

@@ -7,7 +7,7 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * The construction of math-notes §3 as data: the affine n-cube over a field, a hyperplane H of
+ * The construction of docs/mathematics.md §7 as data: the affine n-cube over a field, a hyperplane H of
  * it, and a vertex O outside H pulled to H; optionally O is then contracted. {@link #build()}
  * validates every part and returns the resulting matroid as a rank oracle.
  *

@@ -31,7 +31,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The provenance of a cube with more than 64 vertices: the n = 7 corner construction (128
- * vertices, H = the unit vectors, 1111111 pulled and contracted, math-notes §3), certified by the
+ * vertices, H = the unit vectors, 1111111 pulled and contracted, docs/mathematics.md §7), certified by the
  * library and written by {@link CertificateWriter}, is rebuilt by the verifier.
  */
 class BigCubeProvenanceTest {

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.io.TempDir;
  * The verifier accepts certificates built from the project's search and sat4j, and rejects them when
  * tampered with. Mathematical sources: F7 is a minor-minimal non-orientable matroid (Bland & Las
  * Vergnas 1978; Oxley, Matroid Theory, 2nd ed., §6.6); the n = 3 corner construction gives F7
- * (math-notes §3); 3-term relations characterise chirotopes (BLSWZ, Thm. 3.6.2).
+ * (docs/mathematics.md §7); 3-term relations characterise chirotopes (BLSWZ, Thm. 3.6.2).
  */
 class CertificateVerifierTest {
     @TempDir

@@ -24,7 +24,7 @@ import org.sat4j.minisat.SolverFactory;
 /**
  * Proofs in a (gzip) file beside the certificate, proofs from a second solver configuration, and a
  * fixed-seed random mutation loop: no mutated certificate is accepted unless its content is the
- * original's (F7 via the n = 3 corner construction, math-notes §3).
+ * original's (F7 via the n = 3 corner construction, docs/mathematics.md §7).
  */
 class MutationAndFileTest {
     @TempDir

@@ -11,7 +11,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** Orientability verdicts against published facts (math-notes §4 lists the sources). */
+/** Orientability verdicts against published facts (each source named beside its case). */
 class OrientabilityOracleTest {
 
     static Stream<Arguments> nonOrientable() {

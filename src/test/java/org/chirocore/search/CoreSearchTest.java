@@ -24,7 +24,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.EnumSource;
 
-/** Reductions to minimal cores, checked against published excluded minors (math-notes §4). */
+/** Reductions to minimal cores, checked against published excluded minors (each source named beside its case). */
 class CoreSearchTest {
 
     static SearchResult reduce(Matroid m, long seed, Strategy strategy) {
@@ -84,7 +84,7 @@ class CoreSearchTest {
 
     @Test
     void cornerConstructionInDimensionThreeGivesTheFanoPlane() {
-        // math-notes §3: H = {e1, e2, e3}, O = (1,1,1), pulled and contracted, gives F7.
+        // docs/mathematics.md §7: H = {e1, e2, e3}, O = (1,1,1), pulled and contracted, gives F7.
         AffineCube cube = AffineCube.real(3);
         int[] h = HyperplaneSpec.parse("100,010,001").resolve(cube);
         int o = cube.indexOf("111");
