@@ -1,16 +1,11 @@
 package org.chirocore.cli;
 
-import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
-import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Text;
-import org.chirocore.check.Verdict;
-import org.chirocore.io.Json;
+import org.chirocore.check.Main;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -41,32 +36,6 @@ final class VerifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        List<Json> verdicts = new ArrayList<>();
-        boolean allPassed = true;
-        boolean allComplete = true;
-        for (Path file : files) {
-            Verdict verdict = CertificateVerifier.verify(file, Optional.ofNullable(input));
-            allPassed &= verdict.passed();
-            allComplete &= verdict.complete();
-            if (json) {
-                verdicts.add(toJson(verdict));
-            } else {
-                out.print(verdict.toText());
-            }
-        }
-        if (json) {
-            out.println(new Json.Arr(verdicts).toText());
-        }
-        return !allPassed ? ExitCodes.CHECK_FAILED : allComplete ? ExitCodes.OK : ExitCodes.INCOMPLETE;
-    }
-
-    private static Json toJson(Verdict verdict) {
-        List<Json> checks = new ArrayList<>();
-        for (Verdict.Check c : verdict.checks()) {
-            checks.add(Json.Obj.builder().put("name", c.name()).put("status", c.status().name()).put("detail", Text.printable(c.detail())).build());
-        }
-        return Json.Obj.builder().put("file", Text.printable(verdict.source())).put("passed", verdict.passed()).put("complete", verdict.complete())
-                .put("verdict", verdict.word()).put("millis", verdict.millis()).put("checks", new Json.Arr(checks)).build();
+        return Main.verify(files, Optional.ofNullable(input), json, spec.commandLine().getOut());
     }
 }
