@@ -1,5 +1,6 @@
 package org.chirocore.check;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -46,6 +47,24 @@ class StoredCertificatesTest {
             assertTrue(c.status() == Verdict.Status.PASS, certificate + ": " + c);
         }
         System.out.println(certificate + ": verified in " + report.millis() + " ms");
+    }
+
+    /** The stand-alone command line: one verdict line per file, exit 4 while a given matroid's input is missing, 0 with it. */
+    @org.junit.jupiter.api.Test
+    void theStandAloneCommandLineGivesTheVerdictsAndExitCodes() {
+        java.io.StringWriter text = new java.io.StringWriter();
+        int exit = Main.verify(List.of(DIR.resolve("corner-n3.cert.json"), DIR.resolve("fano.cert.json")), Optional.empty(), false,
+                new java.io.PrintWriter(text));
+        assertEquals(Main.INCOMPLETE, exit, text.toString());
+        assertTrue(text.toString().contains("corner-n3.cert.json: verified (checked in "), text.toString());
+        assertTrue(text.toString().contains("fano.cert.json: verified except provenance (checked in "), text.toString());
+        java.io.StringWriter json = new java.io.StringWriter();
+        assertEquals(Main.VERIFIED, Main.verify(List.of(DIR.resolve("fano.cert.json")), Optional.of(DIR.resolve("inputs/fano.json")), true,
+                new java.io.PrintWriter(json)));
+        JsonTree.Obj verdict = JsonTree.parse(json.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8)).asArray("output")
+                .get(0).asObject("verdict");
+        assertTrue(verdict.requireBoolean("complete"));
+        assertEquals("verified", verdict.requireString("verdict"));
     }
 
     @org.junit.jupiter.api.Test

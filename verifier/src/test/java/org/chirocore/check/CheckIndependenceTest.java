@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
  * builds and runs with the JDK alone.
  */
 class CheckIndependenceTest {
-    static final Path SOURCES = Path.of("src/main/java/org/chirocore/check");
+    static final Path SOURCES = Path.of("verifier/src/main/java/org/chirocore/check");
     static final List<String> ALLOWED = List.of("java.", "org.chirocore.check.");
 
     @Test
@@ -43,5 +43,15 @@ class CheckIndependenceTest {
         }
         assertTrue(files >= 5, "found only " + files + " sources in " + SOURCES.toAbsolutePath());
         assertEquals(List.of(), forbidden);
+    }
+
+    /** The verifier's Maven module declares one dependency, JUnit, for its tests only: it runs on the JDK alone. */
+    @Test
+    void theVerifierModuleDependsOnNothingAtRunTime() throws IOException {
+        String pom = Files.readString(Path.of("verifier/pom.xml"));
+        String dependencies = pom.substring(pom.indexOf("<dependencies>"), pom.indexOf("</dependencies>"));
+        assertEquals(1, dependencies.split("<dependency>", -1).length - 1, dependencies);
+        assertTrue(dependencies.contains("<artifactId>junit-jupiter</artifactId>") && dependencies.contains("<scope>test</scope>"),
+                dependencies);
     }
 }
