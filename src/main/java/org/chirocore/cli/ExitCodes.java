@@ -19,7 +19,7 @@ final class ExitCodes {
     /** No answer: a budget ran out. */
     static final int UNKNOWN = 3;
     /** {@code verify}: no check failed, but some part was not checked, so the statement is not fully proved. */
-    static final int INCOMPLETE = org.chirocore.check.Main.INCOMPLETE;
+    static final int INCOMPLETE = org.chirocore.check.VerifierMain.INCOMPLETE;
 
     private ExitCodes() {
     }

@@ -7,8 +7,9 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.ReadableCertificate;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Verdict;
+import org.chirocore.check.VerificationReport;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -62,9 +63,9 @@ final class ExplainCommand implements Callable<Integer> {
             }
         }
         PrintWriter stdout = spec.commandLine().getOut();
-        Verdict report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
+        VerificationReport report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
         if (!report.passed()) {
-            for (Verdict.Check c : report.checks()) {
+            for (VerificationReport.Check c : report.checks()) {
                 stdout.printf("%-8s %s: %s%n", c.status(), c.name(), c.detail());
             }
             stdout.println(certificate + ": REJECTED by the verifier; nothing to explain.");
@@ -92,8 +93,12 @@ final class ExplainCommand implements Callable<Integer> {
             stdout.println("wrote " + out);
         }
         if (certificateOut != null) {
-            Inputs.write(certificateOut, r.certificate());
-            stdout.println("wrote " + certificateOut + " (check it with: chirocore verify " + certificateOut + ")");
+            try {
+                CertifiedReduction.Checked checked = CertifiedReduction.writeVerified(r.certificate(), certificateOut);
+                stdout.println("wrote " + certificateOut + "; " + Format.verified(checked));
+            } catch (IOException e) {
+                throw new BadInputException(certificateOut + ": cannot write the certificate: " + e, e);
+            }
         }
         return ExitCodes.OK;
     }

@@ -1,20 +1,19 @@
 package org.chirocore.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.Certification;
+import org.chirocore.cert.Discovery;
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.Refutation;
-import org.chirocore.search.MinimalCore;
-import org.chirocore.search.SearchResult;
-import org.chirocore.search.SearchSettings;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.pipeline.Subject;
 import org.chirocore.search.Strategy;
-import org.chirocore.search.UnsatCoreSearch;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -26,7 +25,8 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code chirocore reduce}: reduces a matroid file or a cube construction to a minor-minimal
- * non-orientable minor and writes its certificate (docs/certificate-format.md). An orientable
+ * non-orientable minor, writes its certificate (docs/certificate-format.md) and verifies the written
+ * file with the independent checker, all through {@link CertifiedReduction}. An orientable
  * input or an exhausted budget gives no certificate: a certificate only ever states minimal
  * non-orientability.
  */
@@ -52,9 +52,8 @@ final class ReduceCommand implements Callable<Integer> {
             description = "Contract the pulled vertex before reducing (default: yes).")
     private boolean contractPulled;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "0",
-            description = "Seed of the element order (default: ${DEFAULT-VALUE}).")
-    private long seed;
+    @Mixin
+    private SeedOption seed;
 
     @Option(names = "--strategy", paramLabel = "STRATEGY", defaultValue = "contract-first",
             converter = Converters.StrategyConverter.class, completionCandidates = Converters.StrategyNames.class,
@@ -72,7 +71,8 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
             description = "Where to write the certificate of the core (written atomically; a large proof goes "
-                    + "beside it as NAME.drat.gz). Nothing is written unless a core is found.")
+                    + "beside it as NAME.drat.gz) and checked by the independent verifier. Nothing is written unless "
+                    + "a core is found.")
     private Path out;
 
     @Option(names = "--witness-out", paramLabel = "FILE",
@@ -81,41 +81,41 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Inputs.Input input = input();
+        Subject input = input();
         Inputs.requireDirectoryOf(out);
         if (witnessOut != null) {
             Inputs.requireDirectoryOf(witnessOut);
         }
-        SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
-                focus ? input.focus() : List.of());
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
-        SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
-        progress.finish();
+        CertifiedReduction.Outcome outcome;
+        try {
+            outcome = new CertifiedReduction(new CertifiedReduction.Settings(seed.seed(), strategy, budget.budget()), progress)
+                    .run(focus ? input : input.withoutFocus(), out);
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot write the certificate: " + e, e);
+        } finally {
+            progress.finish();
+        }
         PrintWriter w = spec.commandLine().getOut();
         String from = Format.shape(input.matroid().rank(), input.matroid().size());
-        if (result instanceof SearchResult.Found f) {
-            Certification certification = Certification.of(f.core(), input.source(), settings.budget());
-            if (certification instanceof Certification.OutOfBudget o) {
-                w.println("unknown: a core was found, but proving it for the certificate ran out of budget: "
-                        + o.reason() + "; no certificate written");
-                return ExitCodes.UNKNOWN;
-            }
-            Certificate certificate = ((Certification.Certified) certification).certificate();
-            summarise(w, from, f.core(), certificate, Inputs.write(out, certificate));
-        } else if (result instanceof SearchResult.Orientable o) {
+        if (outcome instanceof CertifiedReduction.Verified v) {
+            summarise(w, from, v);
+            return ExitCodes.OK;
+        }
+        if (outcome instanceof CertifiedReduction.Orientable o) {
             w.println("orientable: " + from + "; no non-orientable minor to find, no certificate written");
             if (witnessOut != null) {
                 Inputs.write(witnessOut, ResultJson.chirotope(o.witness()));
                 w.println("wrote the witness to " + witnessOut);
             }
-        } else if (result instanceof SearchResult.Unknown u) {
-            w.println("unknown: " + u.reason() + "; no certificate written");
+            return ExitCodes.OK;
         }
-        return ExitCodes.of(result);
+        w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
+        return ExitCodes.UNKNOWN;
     }
 
     /** The input chosen by exactly one of FILE and --cube. */
-    private Inputs.Input input() {
+    private Subject input() {
         if ((file == null) == (cube == null)) {
             throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
                     + (file == null ? "neither was given." : "both were given."));
@@ -130,20 +130,25 @@ final class ReduceCommand implements Callable<Integer> {
         return Inputs.read(file);
     }
 
-    private static void summarise(PrintWriter w, String from, MinimalCore core, Certificate certificate,
-            CertificateWriter.Written written) {
-        w.println("non-orientable core: " + Format.shape(core.core().rank(), core.core().size(),
-                core.core().basisCount()) + " (from " + from + ")");
-        w.println("contracted: " + Format.labels(core.contracted()));
-        w.println("deleted: " + Format.labels(core.deleted()));
-        w.println("witnesses: " + core.witnesses().size()
+    private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {
+        Certificate certificate = v.certificate();
+        ExplicitMatroid core = certificate.core();
+        w.println("non-orientable core: " + Format.shape(core.rank(), core.size(), core.basisCount()) + " (from "
+                + from + ")");
+        w.println("contracted: " + Format.labels(certificate.provenance().contracted()));
+        w.println("deleted: " + Format.labels(certificate.provenance().deleted()));
+        w.println("witnesses: " + 2 * certificate.minimality().size()
                 + " (every single-element deletion and contraction is orientable)");
-        w.println("search: " + core.stats().millis() + " ms, " + core.stats().decisions() + " decisions");
+        if (certificate.discovery() instanceof Discovery.Searched s) {
+            w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
+        }
         Refutation proof = certificate.refutation();
         w.println("proof: " + proof.relations().size() + " relations, " + proof.stats().lemmas() + " lemmas, "
                 + proof.stats().deletions() + " deletions, " + proof.drat().length() + " bytes of DRAT, "
                 + proof.stats().solve().millis() + " ms");
+        CertificateWriter.Written written = v.written();
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
                 + written.dratFile().map(d -> " and " + d).orElse(""));
+        w.println(Format.verified(v.verification()));
     }
 }

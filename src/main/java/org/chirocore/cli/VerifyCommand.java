@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
-import org.chirocore.check.Main;
+import org.chirocore.check.VerifierMain;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -36,6 +36,6 @@ final class VerifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        return Main.verify(files, Optional.ofNullable(input), json, spec.commandLine().getOut());
+        return VerifierMain.verify(files, Optional.ofNullable(input), json, spec.commandLine().getOut());
     }
 }

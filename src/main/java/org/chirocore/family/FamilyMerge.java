@@ -6,12 +6,13 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.TreeMap;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Verdict;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
 import org.chirocore.search.Strategy;
@@ -96,7 +97,7 @@ public final class FamilyMerge {
         int elements = pulled.requireInt("elements");
         int rank = pulled.requireInt("rank");
         if (!row.has("certificate")) {
-            return new MemberResult.NoCore(n, elements, rank, row.requireString("status"));
+            return MemberResult.withoutCore(n, elements, rank, row.requireString("status"));
         }
         String name = FamilyRun.certificateName(n);
         Path source = shard.resolve(name);
@@ -108,18 +109,17 @@ public final class FamilyMerge {
                 Files.copy(shard.resolve(dratName), out.resolve(dratName), StandardCopyOption.REPLACE_EXISTING);
             }
         }
-        Verdict report = CertificateVerifier.verify(target);
+        VerificationReport report = CertificateVerifier.verify(target);
         if (!report.passed()) {
             throw new FamilyException(source + ": the certificate of n = " + n + " fails the verifier.");
         }
         CertificateFacts facts = CertificateFacts.read(target);
         if (!facts.construction().equals(CertificateWriter.construction(family.construction(n)))
-                || facts.seed() != seed || !facts.strategy().equals(strategy.id())) {
+                || !facts.search().equals(Optional.of(new CertificateFacts.Search(seed, strategy.id())))) {
             throw new FamilyException(source + ": the certificate of n = " + n + " records another construction, "
                     + "seed or strategy than " + family.source() + " with seed " + seed + " and " + strategy.id() + ".");
         }
-        return new MemberResult.Certified(n, elements, rank, name, Verification.of(report), true, facts,
-                report.millis());
+        return new MemberResult.Certified(n, elements, rank, name, true, facts, report.millis());
     }
 
     private static boolean sameContent(MemberResult a, MemberResult b) {

@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Verdict;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.report.Document.Block;
 import org.chirocore.report.Document.Inline;
 import org.chirocore.report.Document.Mono;
@@ -31,9 +31,9 @@ public final class CertificateReport {
      * @throws ReportException when the certificate does not verify or cannot be read
      */
     public static Document of(Path certificate, Optional<Path> input) {
-        Verdict verdict = CertificateVerifier.verify(certificate, input);
+        VerificationReport verdict = CertificateVerifier.verify(certificate, input);
         if (!verdict.passed()) {
-            Verdict.Check failed = verdict.checks().stream().filter(c -> c.status() == Verdict.Status.FAIL).findFirst().orElseThrow();
+            VerificationReport.Check failed = verdict.checks().stream().filter(c -> c.status() == VerificationReport.Status.FAIL).findFirst().orElseThrow();
             throw new ReportException(certificate + ": the certificate does not verify (" + failed.name() + ": "
                     + failed.detail() + "); a report is only written for a verified certificate.", null);
         }
@@ -91,10 +91,10 @@ public final class CertificateReport {
         return origin instanceof Origin.Given ? cmd + " --input " + input.map(Path::toString).orElse("INPUT") : cmd;
     }
 
-    private static String passed(Verdict verdict) {
+    private static String passed(VerificationReport verdict) {
         List<String> names = new ArrayList<>();
-        for (Verdict.Check c : verdict.checks()) {
-            names.add(c.name() + (c.status() == Verdict.Status.PASS ? "" : " (not run: no input file given)"));
+        for (VerificationReport.Check c : verdict.checks()) {
+            names.add(c.name() + (c.status() == VerificationReport.Status.PASS ? "" : " (not run: no input file given)"));
         }
         return String.join(", ", names);
     }

@@ -54,15 +54,15 @@ class BigCubeProvenanceTest {
         corner7 = Json.parse(Files.readString(file)).asObject("certificate");
     }
 
-    static Verdict verify(Json.Obj cert) {
+    static VerificationReport verify(Json.Obj cert) {
         return CertificateVerifier.verify(bytes(cert), dir, Optional.empty());
     }
 
     @Test
     void theSevenCubeCornerCertificateVerifies() {
-        Verdict r = CertificateVerifier.verify(file);
+        VerificationReport r = CertificateVerifier.verify(file);
         assertTrue(r.passed(), r::toString);
-        assertTrue(r.checks().stream().allMatch(c -> c.status() == Verdict.Status.PASS), r::toString);
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == VerificationReport.Status.PASS), r::toString);
         assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().startsWith("the pulled 7-cube over Q"), r::toString);
     }
 
@@ -76,39 +76,34 @@ class BigCubeProvenanceTest {
     @Test
     void theEightCubeCornerCertificateVerifies() {
         // written by `chirocore reduce --cube 8` (H = the unit vectors, 11111111 pulled and contracted)
-        Verdict r = CertificateVerifier.verify(Path.of("src/test/resources/org/chirocore/check/corner-n8.cert.json"));
-        assertTrue(r.checks().stream().allMatch(c -> c.status() == Verdict.Status.PASS), r::toString);
+        VerificationReport r = CertificateVerifier.verify(Path.of("src/test/resources/org/chirocore/check/corner-n8.cert.json"));
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == VerificationReport.Status.PASS), r::toString);
         assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().startsWith("the pulled 8-cube over Q"), r::toString);
+    }
+
+    /** The 7-cube certificate with its construction replaced by the 16-cube, H = the unit vectors and {@code pulled}. */
+    static Json.Obj sixteenCube(String pulled) {
+        int n = 16;
+        Json.Obj cert = tamper(corner7, Json.Num.of(n), "provenance", "construction", "cube");
+        List<String> units = new ArrayList<>();
+        for (int k = 0; k < n; k++) {
+            units.add("0".repeat(k) + "1" + "0".repeat(n - 1 - k));
+        }
+        cert = tamper(cert, Json.Arr.ofStrings(units), "provenance", "construction", "hyperplane");
+        return tamper(cert, new Json.Str(pulled), "provenance", "construction", "pulled");
     }
 
     /** The largest cube the producer builds (AffineCube.MAX_DIMENSION = 16) is rebuilt as far as the path. */
     @Test
     void aSixteenCubeIsRebuiltUpToThePath() {
-        // the 16-cube (65 536 vertices) with H = the unit vectors passes the flat and general-position
-        // tests; the 7-cube's path then names no vertex of it
-        int n = 16;
-        Json.Obj cert = tamper(corner7, Json.Num.of(n), "provenance", "construction", "cube");
-        List<String> units = new ArrayList<>();
-        for (int k = 0; k < n; k++) {
-            units.add("0".repeat(k) + "1" + "0".repeat(n - 1 - k));
-        }
-        cert = tamper(cert, Json.Arr.ofStrings(units), "provenance", "construction", "hyperplane");
-        cert = tamper(cert, new Json.Str("1".repeat(n)), "provenance", "construction", "pulled");
-        assertRejected(verify(cert), CertificateVerifier.PROVENANCE, "path.contracted lists \"");
+        // the 16-cube (65 536 vertices) passes the flat and general-position tests; the 7-cube's path then names no vertex of it
+        assertRejected(verify(sixteenCube("1".repeat(16))), CertificateVerifier.PROVENANCE, "path.contracted lists \"");
     }
 
-    /** With O = 11...10 the hyperline H − {00...01} and O span the facet x_n = 0, so (H, O) is refused at n = 16 too. */
+    /** With O = 11...10 the hyperline H − {00...01} and O span the facet x_16 = 0, so (H, O) is refused at n = 16 too. */
     @Test
     void aSixteenCubeNotInGeneralPositionIsRefused() {
-        int n = 16;
-        Json.Obj cert = tamper(corner7, Json.Num.of(n), "provenance", "construction", "cube");
-        List<String> units = new ArrayList<>();
-        for (int k = 0; k < n; k++) {
-            units.add("0".repeat(k) + "1" + "0".repeat(n - 1 - k));
-        }
-        cert = tamper(cert, Json.Arr.ofStrings(units), "provenance", "construction", "hyperplane");
-        cert = tamper(cert, new Json.Str("1".repeat(n - 1) + "0"), "provenance", "construction", "pulled");
-        assertRejected(verify(cert), CertificateVerifier.PROVENANCE, "(H, O) are not in general position");
+        assertRejected(verify(sixteenCube("1".repeat(15) + "0")), CertificateVerifier.PROVENANCE, "(H, O) are not in general position");
     }
 
     @Test

@@ -51,7 +51,7 @@ class MutationAndFileTest {
         return TestCertificates.tamper(corner, moved, "nonOrientability");
     }
 
-    static Verdict verify(Json cert) {
+    static VerificationReport verify(Json cert) {
         return CertificateVerifier.verify(TestCertificates.bytes(cert), dir, Optional.empty());
     }
 
@@ -81,8 +81,8 @@ class MutationAndFileTest {
     @Test
     void proofsFromOtherSolverConfigurationsAreAccepted() {
         // LogicNG's lesson: re-check a claim with a second configuration
-        Verdict glucose = verify(TestCertificates.corner(SolverFactory::newGlucose21));
-        Verdict heap = verify(TestCertificates.corner(SolverFactory::newMiniLearningHeap));
+        VerificationReport glucose = verify(TestCertificates.corner(SolverFactory::newGlucose21));
+        VerificationReport heap = verify(TestCertificates.corner(SolverFactory::newMiniLearningHeap));
         assertTrue(glucose.passed(), glucose::toString);
         assertTrue(heap.passed(), heap::toString);
     }
@@ -103,12 +103,12 @@ class MutationAndFileTest {
             } catch (JsonFormatException e) {
                 // not JSON: the hash cannot even be recomputed, and the file is rejected at check 1
                 String file = "{\"format\": \"chirocore-certificate\", \"version\": 1, \"sha256\": \"\", \"content\": " + mutated + "}";
-                Verdict r = CertificateVerifier.verify(file.getBytes(StandardCharsets.UTF_8), dir, Optional.empty());
+                VerificationReport r = CertificateVerifier.verify(file.getBytes(StandardCharsets.UTF_8), dir, Optional.empty());
                 assertRejected(r, CertificateVerifier.FORMAT, "not valid JSON");
                 continue;
             }
             parsed++;
-            Verdict r = verify(TestCertificates.rehash((Json.Obj) TestCertificates.with(withFile, List.of("content"), content)));
+            VerificationReport r = verify(TestCertificates.rehash((Json.Obj) TestCertificates.with(withFile, List.of("content"), content)));
             assertTrue(!r.passed() || content.equals(original), () -> "accepted a changed certificate: " + r);
         }
         assertTrue(parsed > 50, "too few mutations parse to exercise the checks: " + parsed);
@@ -119,7 +119,7 @@ class MutationAndFileTest {
         Path file = dir.resolve("corner.json");
         Files.write(file, TestCertificates.bytes(withFile));
         assertTrue(CertificateVerifier.verify(file).passed());
-        Verdict missing = CertificateVerifier.verify(dir.resolve("nothing.json"));
+        VerificationReport missing = CertificateVerifier.verify(dir.resolve("nothing.json"));
         assertRejected(missing, CertificateVerifier.FORMAT, "cannot read the file");
         assertEquals(8, missing.checks().size());
     }

@@ -33,18 +33,18 @@ class TrustTest {
         return Json.parseUtf8(Files.readAllBytes(file)).asObject("certificate");
     }
 
-    static Verdict verify(Json.Obj cert, Path dir, Optional<Path> input) {
+    static VerificationReport verify(Json.Obj cert, Path dir, Optional<Path> input) {
         return CertificateVerifier.verify(TestCertificates.bytes(cert), dir, input);
     }
 
     @Test
     void aGivenMatroidWithoutItsFileIsVerifiedExceptProvenance() {
-        Verdict v = CertificateVerifier.verify(FANO);
+        VerificationReport v = CertificateVerifier.verify(FANO);
         assertTrue(v.passed(), v::toString);
         assertFalse(v.complete(), v::toString);
         assertEquals("verified except provenance", v.word());
-        assertEquals(Verdict.Status.NOT_RUN, v.check(CertificateVerifier.PROVENANCE).status());
-        Verdict full = CertificateVerifier.verify(FANO, Optional.of(FANO_INPUT));
+        assertEquals(VerificationReport.Status.NOT_RUN, v.check(CertificateVerifier.PROVENANCE).status());
+        VerificationReport full = CertificateVerifier.verify(FANO, Optional.of(FANO_INPUT));
         assertTrue(full.complete(), full::toString);
         assertEquals("verified", full.word());
     }
@@ -89,14 +89,14 @@ class TrustTest {
                 + "[1, 0, 1], [0, 1, 1], [1, 1, 1]]}}\n";
         Path input = dir.resolve("f7.json");
         Files.writeString(input, text);
-        Verdict v = verify(pointingTo(read(FANO), text.getBytes(StandardCharsets.UTF_8)), dir, Optional.of(input));
+        VerificationReport v = verify(pointingTo(read(FANO), text.getBytes(StandardCharsets.UTF_8)), dir, Optional.of(input));
         // read as a matroid on 0..6; the core's labels are a..g, so only the comparison of labels fails
         assertRejected(v, CertificateVerifier.PROVENANCE, "the rebuilt minor has the elements [0, 1, 2, 3, 4, 5, 6], the core [a, b");
     }
 
     @Test
     void anInputThatIsNotARegularFileIsRefused(@TempDir Path dir) throws IOException {
-        Verdict v = CertificateVerifier.verify(FANO, Optional.of(dir));
+        VerificationReport v = CertificateVerifier.verify(FANO, Optional.of(dir));
         assertRejected(v, CertificateVerifier.PROVENANCE, "not a regular file");
     }
 

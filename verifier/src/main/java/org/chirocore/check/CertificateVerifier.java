@@ -22,8 +22,8 @@ import java.util.zip.GZIPInputStream;
 import org.chirocore.check.ParsedCertificate.Relation;
 import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.Relations.Term;
-import org.chirocore.check.Verdict.Check;
-import org.chirocore.check.Verdict.Status;
+import org.chirocore.check.VerificationReport.Check;
+import org.chirocore.check.VerificationReport.Status;
 
 /**
  * Verifies a certificate of a minor-minimal non-orientable matroid (docs/certificate-format.md),
@@ -52,17 +52,17 @@ public final class CertificateVerifier {
     }
 
     /** Verifies the certificate in {@code file}; a given-matroid provenance is reported as not run. */
-    public static Verdict verify(Path file) {
+    public static VerificationReport verify(Path file) {
         return verify(file, Optional.empty());
     }
 
     /** Verifies the certificate in {@code file}, reading a given matroid's file from {@code input} if present. */
-    public static Verdict verify(Path file, Optional<Path> input) {
+    public static VerificationReport verify(Path file, Optional<Path> input) {
         Path dir = file.toAbsolutePath().getParent();
         try {
             return verify(readRegularFile(file, Limits.MAX_CERTIFICATE_BYTES), dir, input, file.toString());
         } catch (IOException e) {
-            return new Verdict(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
+            return new VerificationReport(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
                     "the file could not be read"), 0);
         }
     }
@@ -93,11 +93,11 @@ public final class CertificateVerifier {
      * @param baseDir the directory in which a {@code dratFile} is looked up
      * @param input the matroid file of a given-matroid provenance, if any
      */
-    public static Verdict verify(byte[] bytes, Path baseDir, Optional<Path> input) {
+    public static VerificationReport verify(byte[] bytes, Path baseDir, Optional<Path> input) {
         return verify(bytes, baseDir, input, "(" + bytes.length + " bytes)");
     }
 
-    private static Verdict verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
+    private static VerificationReport verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
         long start = System.nanoTime();
         List<Check> checks = new ArrayList<>();
         ParsedCertificate certificate;
@@ -105,14 +105,14 @@ public final class CertificateVerifier {
             certificate = ParsedCertificate.read(JsonTree.parse(bytes));
         } catch (JsonTree.Malformed e) {
             checks.add(new Check(FORMAT, Status.FAIL, "not valid JSON: " + e.getMessage()));
-            return new Verdict(source, notRun(checks, "the file is not JSON"), elapsed(start));
+            return new VerificationReport(source, notRun(checks, "the file is not JSON"), elapsed(start));
         } catch (JsonTree.Mistyped e) {
             checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
-            return new Verdict(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
+            return new VerificationReport(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
         } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
             // a bug or exhausted resources must still give a FAIL line, never an accepted certificate
             checks.add(new Check(FORMAT, Status.FAIL, failure(e)));
-            return new Verdict(source, notRun(checks, "the file could not be read"), elapsed(start));
+            return new VerificationReport(source, notRun(checks, "the file could not be read"), elapsed(start));
         }
         checks.add(new Check(FORMAT, Status.PASS, "chirocore-certificate version 1, rank " + certificate.rank() + " on "
                 + certificate.labels().size() + " elements, " + certificate.bases().size() + " bases"));
@@ -121,7 +121,7 @@ public final class CertificateVerifier {
         Check core = run(CORE, v::core);
         checks.add(core);
         if (core.status() != Status.PASS) {
-            return new Verdict(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
+            return new VerificationReport(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
         }
         checks.add(run(NORMALISATION, v::normalisation));
         Check relations = run(RELATIONS, v::relations);
@@ -130,7 +130,7 @@ public final class CertificateVerifier {
                 : new Check(DRAT, Status.NOT_RUN, "not checked because a relation is invalid"));
         checks.add(run(MINIMALITY, v::minimality));
         checks.add(run(PROVENANCE, v::provenance));
-        return new Verdict(source, checks, elapsed(start));
+        return new VerificationReport(source, checks, elapsed(start));
     }
 
     private static long elapsed(long start) {

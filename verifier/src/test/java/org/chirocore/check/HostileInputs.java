@@ -31,10 +31,10 @@ public final class HostileInputs {
         cases.add(gzipBomb(dir));
         for (Path c : cases) {
             long start = System.nanoTime();
-            Verdict v = CertificateVerifier.verify(c);
+            VerificationReport v = CertificateVerifier.verify(c);
             long ms = (System.nanoTime() - start) / 1_000_000;
             // the hash of the content is left wrong on purpose: the checks after it run all the same
-            List<String> fails = v.checks().stream().filter(k -> k.status() == Verdict.Status.FAIL && !k.name().equals(CertificateVerifier.HASH))
+            List<String> fails = v.checks().stream().filter(k -> k.status() == VerificationReport.Status.FAIL && !k.name().equals(CertificateVerifier.HASH))
                     .map(k -> k.name() + ": " + (k.detail().length() > 120 ? k.detail().substring(0, 120) + "…" : k.detail())).toList();
             System.out.println(c.getFileName() + " " + totalBytes(c) + " bytes, " + ms + " ms, " + v.word() + "; FAIL after the hash: "
                     + (fails.isEmpty() ? "none" : String.join(" | ", fails)));

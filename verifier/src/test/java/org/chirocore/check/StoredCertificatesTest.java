@@ -42,9 +42,9 @@ class StoredCertificatesTest {
     void storedCertificateVerifies(Path certificate) {
         String name = certificate.getFileName().toString().replace(".cert.json", ".json");
         Path input = DIR.resolve("inputs").resolve(name);
-        Verdict report = CertificateVerifier.verify(certificate, Files.exists(input) ? Optional.of(input) : Optional.empty());
-        for (Verdict.Check c : report.checks()) {
-            assertTrue(c.status() == Verdict.Status.PASS, certificate + ": " + c);
+        VerificationReport report = CertificateVerifier.verify(certificate, Files.exists(input) ? Optional.of(input) : Optional.empty());
+        for (VerificationReport.Check c : report.checks()) {
+            assertTrue(c.status() == VerificationReport.Status.PASS, certificate + ": " + c);
         }
         System.out.println(certificate + ": verified in " + report.millis() + " ms");
     }
@@ -53,13 +53,13 @@ class StoredCertificatesTest {
     @org.junit.jupiter.api.Test
     void theStandAloneCommandLineGivesTheVerdictsAndExitCodes() {
         java.io.StringWriter text = new java.io.StringWriter();
-        int exit = Main.verify(List.of(DIR.resolve("corner-n3.cert.json"), DIR.resolve("fano.cert.json")), Optional.empty(), false,
+        int exit = VerifierMain.verify(List.of(DIR.resolve("corner-n3.cert.json"), DIR.resolve("fano.cert.json")), Optional.empty(), false,
                 new java.io.PrintWriter(text));
-        assertEquals(Main.INCOMPLETE, exit, text.toString());
+        assertEquals(VerifierMain.INCOMPLETE, exit, text.toString());
         assertTrue(text.toString().contains("corner-n3.cert.json: verified (checked in "), text.toString());
         assertTrue(text.toString().contains("fano.cert.json: verified except provenance (checked in "), text.toString());
         java.io.StringWriter json = new java.io.StringWriter();
-        assertEquals(Main.VERIFIED, Main.verify(List.of(DIR.resolve("fano.cert.json")), Optional.of(DIR.resolve("inputs/fano.json")), true,
+        assertEquals(VerifierMain.VERIFIED, VerifierMain.verify(List.of(DIR.resolve("fano.cert.json")), Optional.of(DIR.resolve("inputs/fano.json")), true,
                 new java.io.PrintWriter(json)));
         JsonTree.Obj verdict = JsonTree.parse(json.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8)).asArray("output")
                 .get(0).asObject("verdict");
