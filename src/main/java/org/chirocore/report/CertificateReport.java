@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.chirocore.check.CertificateVerifier;
+import org.chirocore.check.Escaping;
 import org.chirocore.check.VerificationReport;
 import org.chirocore.report.Document.Block;
 import org.chirocore.report.Document.Inline;
@@ -35,7 +36,7 @@ public final class CertificateReport {
         if (!verdict.passed()) {
             VerificationReport.Check failed = verdict.checks().stream().filter(c -> c.status() == VerificationReport.Status.FAIL).findFirst().orElseThrow();
             throw new ReportException(certificate + ": the certificate does not verify (" + failed.name() + ": "
-                    + failed.detail() + "); a report is only written for a verified certificate.", null);
+                    + Escaping.printable(failed.detail()) + "); a report is only written for a verified certificate.", null);
         }
         CertificateSummary s = CertificateSummary.read(certificate);
         Core core = s.core();

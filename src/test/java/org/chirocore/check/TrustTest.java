@@ -1,7 +1,5 @@
 package org.chirocore.check;
 
-import org.chirocore.cert.LratConversion;
-
 import static org.chirocore.check.CertificateVerifierTest.assertRejected;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -14,6 +12,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 
+import org.chirocore.cert.LratConversion;
 import org.chirocore.io.Json;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -139,7 +138,7 @@ class TrustTest {
         String text = verify(fano, Path.of("certificates"), Optional.empty()).toText();
         assertTrue(text.contains("a\\u001b[2K\\u000dPASS     everything: verified\\u202e\\u0085"), text);
         assertTrue(text.chars().noneMatch(c -> c < 0x20 && c != '\n' || c == 0x7f || c >= 0x80 && c < 0xa0 || c == 0x202e), text);
-        assertEquals("tab\\u0009back\\\\slash", Text.printable("tab\tback\\slash"));
+        assertEquals("tab\\u0009back\\\\slash", Escaping.printable("tab\tback\\slash"));
     }
 
     @Test

@@ -388,23 +388,23 @@ public final class CertificateVerifier {
         private DratChecker.Outcome dratFile() throws Failure, IOException {
             String name = c.dratFile();
             if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals("..") || name.equals(".")) {
-                throw new Failure("dratFile \"" + Text.printable(name) + "\" must be a plain file name beside the certificate");
+                throw new Failure("dratFile \"" + Escaping.printable(name) + "\" must be a plain file name beside the certificate");
             }
             Path file = baseDir.resolve(name);
             if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
-                throw new Failure("the proof file " + Text.printable(name) + (Files.isSymbolicLink(file)
+                throw new Failure("the proof file " + Escaping.printable(name) + (Files.isSymbolicLink(file)
                         ? " is a symbolic link; it must be a regular file beside the certificate"
                         : Files.exists(file) ? " is not a regular file" : " does not exist"));
             }
             if (Files.size(file) > Limits.MAX_PROOF_BYTES) {
-                throw new Failure("the proof file " + Text.printable(name) + " has " + Files.size(file)
+                throw new Failure("the proof file " + Escaping.printable(name) + " has " + Files.size(file)
                         + " bytes, more than the verifier's limit of " + Limits.MAX_PROOF_BYTES);
             }
             MessageDigest sha = sha256();
             DratChecker.Outcome outcome;
             try (InputStream raw = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS);
                     InputStream in = new DigestInputStream(new CappedInputStream(name.endsWith(".gz") ? new GZIPInputStream(raw) : raw,
-                            Limits.MAX_PROOF_BYTES, "the uncompressed " + Text.printable(name)), sha)) {
+                            Limits.MAX_PROOF_BYTES, "the uncompressed " + Escaping.printable(name)), sha)) {
                 outcome = DratChecker.check(cnf, new InputStreamReader(in,
                         StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)));
                 if (!outcome.valid()) {
@@ -414,8 +414,8 @@ public final class CertificateVerifier {
             }
             String actual = HexFormat.of().formatHex(sha.digest());
             if (!actual.equals(c.dratSha256())) {
-                throw new Failure("the uncompressed " + Text.printable(name) + " hashes to " + actual + ", not the recorded "
-                        + Text.printable(c.dratSha256()));
+                throw new Failure("the uncompressed " + Escaping.printable(name) + " hashes to " + actual + ", not the recorded "
+                        + Escaping.printable(c.dratSha256()));
             }
             return outcome;
         }

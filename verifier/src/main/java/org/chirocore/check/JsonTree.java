@@ -106,7 +106,7 @@ final class JsonTree {
         Value require(String name) {
             Value v = members.get(name);
             if (v == null) {
-                throw new Mistyped("field \"" + Text.printable(name) + "\" is missing");
+                throw new Mistyped("field \"" + Escaping.printable(name) + "\" is missing");
             }
             return v;
         }
@@ -115,7 +115,7 @@ final class JsonTree {
         void requireOnly(List<String> allowed) {
             for (String name : members.keySet()) {
                 if (!allowed.contains(name)) {
-                    throw new Mistyped("unknown field \"" + Text.printable(name) + "\"; allowed are " + allowed);
+                    throw new Mistyped("unknown field \"" + Escaping.printable(name) + "\"; allowed are " + allowed);
                 }
             }
         }
@@ -281,7 +281,7 @@ final class JsonTree {
                 whitespace();
                 if (members.put(name, value(depth + 1)) != null) {
                     pos = at;
-                    throw error("the member name \"" + Text.printable(name) + "\" is repeated");
+                    throw error("the member name \"" + Escaping.printable(name) + "\" is repeated");
                 }
                 whitespace();
             } while (take(','));
@@ -334,7 +334,7 @@ final class JsonTree {
                         case 'u' -> s.append(hex4());
                         default -> {
                             pos--;
-                            throw error("unknown escape \\" + Text.printable(String.valueOf(e)));
+                            throw error("unknown escape \\" + Escaping.printable(String.valueOf(e)));
                         }
                     }
                 }
@@ -426,7 +426,7 @@ final class JsonTree {
                 line += text.charAt(i) == '\n' ? 1 : 0;
                 column = text.charAt(i) == '\n' ? 1 : column + 1;
             }
-            String found = pos >= text.length() ? "the end of the input" : "'" + Text.printable(String.valueOf(text.charAt(pos))) + "'";
+            String found = pos >= text.length() ? "the end of the input" : "'" + Escaping.printable(String.valueOf(text.charAt(pos))) + "'";
             return new Malformed("line " + line + ", column " + column + ": " + detail + " (found " + found + ")");
         }
     }

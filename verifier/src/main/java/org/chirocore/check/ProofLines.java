@@ -114,7 +114,7 @@ final class ProofLines {
             valid = token.charAt(i) >= '0' && token.charAt(i) <= '9';
         }
         if (!valid) {
-            throw new ProofError(number, "\"" + Text.printable(token.length() > 20 ? token.substring(0, 20) + "…" : token)
+            throw new ProofError(number, "\"" + Escaping.printable(token.length() > 20 ? token.substring(0, 20) + "…" : token)
                     + "\" is not an integer of at most 10 digits");
         }
         return Long.parseLong(token);

@@ -75,7 +75,7 @@ final class ProvenanceCheck {
                 return Optional.empty();
             }
             source = given(given, input.get());
-            what = "the given matroid " + Text.printable(input.get().getFileName().toString());
+            what = "the given matroid " + Escaping.printable(input.get().getFileName().toString());
         }
         BitSet contracted = labelSet(path.requireArray("contracted"), source.labels(), "path.contracted");
         BitSet deleted = labelSet(path.requireArray("deleted"), source.labels(), "path.deleted");
@@ -100,7 +100,7 @@ final class ProvenanceCheck {
             for (int i = 0; i < array.size(); i++) {
                 String label = array.get(i).asString(what + "[" + i + "]");
                 if (!seen.add(label)) {
-                    throw new Mismatch(what + "[" + i + "] \"" + Text.printable(label)
+                    throw new Mismatch(what + "[" + i + "] \"" + Escaping.printable(label)
                             + "\" repeats a label of the path or of the core");
                 }
             }
@@ -146,7 +146,7 @@ final class ProvenanceCheck {
         long[] normal = ExactRank.cofactors(columns, basisOfH, p);
         for (int e = h.nextClearBit(0); e < labels.size(); e = h.nextClearBit(e + 1)) {
             if (ExactRank.dot(normal, columns[e], p) == 0) {
-                throw new Mismatch("the hyperplane is not a flat: its closure contains " + Text.printable(labels.get(e)));
+                throw new Mismatch("the hyperplane is not a flat: its closure contains " + Escaping.printable(labels.get(e)));
             }
         }
         generalPosition(columns, p, labels, n, h, o);
@@ -213,7 +213,7 @@ final class ProvenanceCheck {
             for (int e = 0; e < labels.size(); e++) {
                 if (!h.get(e) && !o.get(e) && ExactRank.dot(normal, columns[e], p) == 0) {
                     throw new Mismatch("(H, O) are not in general position: the closure of the hyperline "
-                            + Text.printable(labelsOf(line, labels)) + " with O contains " + labels.get(e));
+                            + Escaping.printable(labelsOf(line, labels)) + " with O contains " + labels.get(e));
                 }
             }
         } while (nextCombination(pick, hs.length));
@@ -431,7 +431,7 @@ final class ProvenanceCheck {
         for (int i = 0; i < array.size(); i++) {
             Integer e = index.get(array.get(i).asString(what + "[" + i + "]"));
             if (e == null || set.get(e)) {
-                throw new Mismatch(what + " lists \"" + Text.printable(array.get(i).asString(what))
+                throw new Mismatch(what + " lists \"" + Escaping.printable(array.get(i).asString(what))
                         + "\", which is no label of the matroid or repeated");
             }
             set.set(e);

@@ -55,15 +55,15 @@ public record VerificationReport(String source, List<Check> checks, long millis)
 
     /**
      * The verdict as terminal text: one line per check, then the verdict line. Every text taken
-     * from the certificate is escaped ({@link Text#printable}), and the verdict line holds only the
+     * from the certificate is escaped ({@link Escaping#printable}), and the verdict line holds only the
      * source name, the verdict and the verifier's own time, nothing else the certificate's writer chose.
      */
     public String toText() {
         StringBuilder out = new StringBuilder();
         for (Check c : checks) {
-            out.append(String.format("%-8s %s: %s%n", c.status(), c.name(), Text.printable(c.detail())));
+            out.append(String.format("%-8s %s: %s%n", c.status(), c.name(), Escaping.printable(c.detail())));
         }
-        return out.append(Text.printable(source)).append(": ").append(word()).append(" (checked in ").append(millis)
+        return out.append(Escaping.printable(source)).append(": ").append(word()).append(" (checked in ").append(millis)
                 .append(" ms)").append(System.lineSeparator()).toString();
     }
 

@@ -55,7 +55,7 @@ public final class VerifierMain {
                     }
                     default -> {
                         if (args[i].startsWith("-")) {
-                            throw new IllegalArgumentException("unknown option " + Text.printable(args[i]));
+                            throw new IllegalArgumentException("unknown option " + Escaping.printable(args[i]));
                         }
                         files.add(Path.of(args[i]));
                     }
@@ -104,11 +104,11 @@ public final class VerifierMain {
             Map<String, JsonTree.Value> check = new LinkedHashMap<>();
             check.put("name", new JsonTree.Str(c.name()));
             check.put("status", new JsonTree.Str(c.status().name()));
-            check.put("detail", new JsonTree.Str(Text.printable(c.detail())));
+            check.put("detail", new JsonTree.Str(Escaping.printable(c.detail())));
             checks.add(new JsonTree.Obj(check));
         }
         Map<String, JsonTree.Value> v = new LinkedHashMap<>();
-        v.put("file", new JsonTree.Str(Text.printable(verdict.source())));
+        v.put("file", new JsonTree.Str(Escaping.printable(verdict.source())));
         v.put("passed", new JsonTree.Bool(verdict.passed()));
         v.put("complete", new JsonTree.Bool(verdict.complete()));
         v.put("verdict", new JsonTree.Str(verdict.word()));

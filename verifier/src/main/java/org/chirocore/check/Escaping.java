@@ -5,8 +5,8 @@ package org.chirocore.check;
  * file names and messages quoted from it, and control characters in them could rewrite what the
  * terminal shows (for example repaint a FAIL line as PASS).
  */
-public final class Text {
-    private Text() {
+public final class Escaping {
+    private Escaping() {
     }
 
     /**
