@@ -1,11 +1,16 @@
 package org.chirocore.cli;
 
+import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import org.chirocore.check.Escaping;
 import org.chirocore.check.VerifierMain;
+import org.chirocore.matroid.Catalogue;
+import org.chirocore.report.CertificateSummary;
+import org.chirocore.report.ReportException;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -36,6 +41,28 @@ final class VerifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        return VerifierMain.verify(files, Optional.ofNullable(input), json, spec.commandLine().getOut());
+        PrintWriter out = spec.commandLine().getOut();
+        if (json) {
+            return VerifierMain.verify(files, Optional.ofNullable(input), true, out);
+        }
+        int exit = VerifierMain.VERIFIED;
+        for (Path file : files) {
+            int verdict = VerifierMain.verify(List.of(file), Optional.ofNullable(input), false, out);
+            if (verdict != VerifierMain.REJECTED) {
+                // named only after the independent check passed, by producer code outside the checker
+                out.println(Escaping.printable(file.toString()) + ": isomorphism class of the core: " + Escaping.printable(named(file)));
+            }
+            exit = exit == VerifierMain.REJECTED || verdict == VerifierMain.REJECTED ? VerifierMain.REJECTED : Math.max(exit, verdict);
+        }
+        return exit;
+    }
+
+    /** The core's name in the catalogue; a core the report model cannot hold (over 64 elements) is not named. */
+    private static String named(Path file) {
+        try {
+            return Format.named(Catalogue.identify(CertificateSummary.read(file).core()));
+        } catch (ReportException e) {
+            return "not named (" + e.getMessage() + ")";
+        }
     }
 }
