@@ -3,6 +3,7 @@ package org.chirocore.cli;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
+import org.chirocore.matroid.Limits;
 import org.chirocore.search.Benchmark;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.SearchResult;
@@ -21,6 +22,7 @@ import picocli.CommandLine.Spec;
         description = {"Time the corner construction for n = 3..N: H spanned by the unit vectors, the all-ones "
                 + "vertex pulled to it and contracted, then decided (n <= " + Benchmark.MAX_DECIDED_DIMENSION
                 + ") and reduced with seed 0, contract-first.",
+                "With --orientable, times orientable instances instead.",
                 "Prints figures only; nothing is asserted."})
 final class BenchCommand implements Callable<Integer> {
     private static final String ROW = "%2s %9s %5s %10s %10s %14s %10s %11s %10s%n";
@@ -29,17 +31,36 @@ final class BenchCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     @Option(names = "--max-n", paramLabel = "N", defaultValue = "5",
-            description = "Largest dimension to run (default: ${DEFAULT-VALUE}).")
+            description = "Largest dimension to run, at most " + Limits.CUBE_DIMENSION + " (default: ${DEFAULT-VALUE}).")
     private int maxN;
 
     @Mixin
     private BudgetOptions budget;
 
+    @Option(names = "--orientable",
+            description = "Instead, time orientable instances: the real 4- and 5-cube as matrices over Q (determinant "
+                    + "signs), the 5-cube by the SAT search alone (--time-limit, default "
+                    + Benchmark.DEFAULT_SEARCH_MILLIS / 1000 + " s; unknown when it runs out) and the Vamos matroid.")
+    private boolean orientable;
+
+    private static final String ORIENTABLE_ROW = "%-12s %9s %5s %12s %12s %10s %10s %10s%n";
+
     @Override
     public Integer call() {
+        if (orientable) {
+            PrintWriter out = spec.commandLine().getOut();
+            out.printf(ORIENTABLE_ROW, "instance", "elements", "rank", "method", "verdict", "bases", "relations", "ms");
+            Benchmark.orientable(budget.budget(), r -> {
+                out.printf(ORIENTABLE_ROW, r.name(), r.elements(), r.rank(), r.method(), r.verdict(), r.bases(),
+                        r.relations(), r.millis());
+                out.flush();
+            });
+            return ExitCodes.OK;
+        }
         if (maxN < 3) {
             throw new ParameterException(spec.commandLine(), "--max-n must be at least 3, not " + maxN + ".");
         }
+        Limits.requireCube(maxN, "--max-n");
         SearchSettings settings = new SearchSettings(0, Strategy.CONTRACT_FIRST, budget.budget());
         PrintWriter out = spec.commandLine().getOut();
         out.printf(ROW, "n", "elements", "rank", "decide ms", "reduce ms", "core elements", "core rank", "core bases",

@@ -13,6 +13,7 @@ import org.chirocore.family.FamilyException;
 import org.chirocore.family.FamilyExploration;
 import org.chirocore.family.ShapeFollow;
 import org.chirocore.family.VertexRule;
+import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -63,6 +64,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
     public Integer call() {
         int[] bounds = family.bounds();
         Path out = family.out();
+        family.checkOut();
         if (runs < 1) {
             throw new ParameterException(spec.commandLine(), "--runs must be at least 1, not " + runs + ".");
         }
@@ -77,30 +79,30 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 throw new ParameterException(spec.commandLine(), "--keep: " + e.getMessage());
             }
         }
-        FamilyExploration.Report report;
+        FamilyExploration.Findings report;
         Optional<ShapeFollow.Shape> shape;
         try {
             shape = follow == null ? Optional.empty() : Optional.of(ShapeFollow.Shape.parse(follow));
             FamilyExploration.Settings settings = new FamilyExploration.Settings(seed.seed(), runs, budget.budget(),
                     rules, targetRank == null ? OptionalInt.empty() : OptionalInt.of(targetRank));
-            report = new FamilyExploration(family.definition(), out, settings,
-                    FamilyConsole.ifInteractive(spec.commandLine().getErr())).run(bounds[0], bounds[1]);
+            report = new FamilyExploration(family.definition(), out, settings, family.console())
+                    .run(bounds[0], bounds[1]);
             if (shape.isPresent()) {
                 ShapeFollow.write(out, shape.get(), ShapeFollow.follow(report, shape.get()));
             }
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the exploration's files: " + e, e);
+            throw new BadInputException(out + ": cannot write the exploration's files: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
-        for (FamilyExploration.Member m : report.members()) {
+        for (FamilyExploration.MemberFindings m : report.members()) {
             w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
                     + " of cores, " + m.rejected().size() + " of " + runs + " runs filtered or without a core");
             for (FamilyExploration.CoreClass c : m.classes()) {
                 w.println("  " + Format.shape(c.core().rank(), c.core().size(), c.core().basisCount()) + " x "
                         + c.attempts().size() + "; " + c.status()
-                        + c.certificate().map(f -> "; " + out.resolve(f.getKey())).orElse(""));
+                        + c.certificate().map(f -> "; " + out.resolve(f.file())).orElse(""));
             }
         }
         w.println("wrote " + out.resolve(FamilyExploration.EXPLORE_MD) + " and "
@@ -108,7 +110,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 + shape.map(x -> ", " + out.resolve(ShapeFollow.FOLLOW_MD) + " and " + out.resolve(ShapeFollow.FOLLOW_JSON))
                         .orElse(""));
         boolean unknown = report.members().stream().anyMatch(m -> m.classes().stream()
-                .anyMatch(c -> c.certificate().isEmpty()) || m.rejected().stream()
+                .anyMatch(c -> c.certification() instanceof FamilyExploration.ClassCertificate.Unknown) || m.rejected().stream()
                 .anyMatch(r -> r instanceof FamilyExploration.Rejected.Unknown));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
     }

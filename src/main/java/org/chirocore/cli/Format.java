@@ -1,6 +1,11 @@
 package org.chirocore.cli;
 
 import java.util.List;
+import java.util.Optional;
+
+import org.chirocore.matroid.NamedMatroid;
+
+import org.chirocore.pipeline.CertifiedReduction;
 
 /** Wording shared by the commands' summaries. */
 final class Format {
@@ -8,6 +13,13 @@ final class Format {
     }
 
     /** "rank 3 on 7 elements". */
+    /** "verified by the independent checker in T ms", naming any check that did not run. */
+    static String verified(CertifiedReduction.Checked checked) {
+        return "verified by the independent checker in " + checked.verifyMillis() + " ms"
+                + (checked.notChecked().isEmpty() ? ""
+                        : "; not checked: " + String.join(", ", checked.notChecked()) + " (run verify with --input)");
+    }
+
     static String shape(int rank, int elements) {
         return "rank " + rank + " on " + elements + " element" + (elements == 1 ? "" : "s");
     }
@@ -18,6 +30,11 @@ final class Format {
     }
 
     /** The labels separated by spaces, or "none". */
+    /** "the Fano plane F7 (source)", or says that the catalogue has no such matroid. */
+    static String named(Optional<NamedMatroid> name) {
+        return name.map(n -> n.title() + " (" + n.source() + ")").orElse("not in the catalogue of named matroids");
+    }
+
     static String labels(List<String> labels) {
         return labels.isEmpty() ? "none" : String.join(" ", labels);
     }

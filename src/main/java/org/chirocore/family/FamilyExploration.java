@@ -5,7 +5,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 
@@ -134,14 +133,41 @@ public final class FamilyExploration {
      *
      * @param core the representative: the core of the class's first run
      * @param attempts the runs whose core lies in the class, in run order
-     * @param certificate the representative's certificate file name and what it states, empty
-     *     when its refutation ran out of budget
-     * @param status "verified", or "unknown: " and why there is no certificate
+     * @param certification the representative's verified certificate, or why there is none
      */
-    public record CoreClass(ExplicitMatroid core, List<Attempt> attempts,
-            Optional<Map.Entry<String, CertificateFacts>> certificate, String status) {
+    public record CoreClass(ExplicitMatroid core, List<Attempt> attempts, ClassCertificate certification) {
         public CoreClass {
             attempts = List.copyOf(attempts);
+        }
+
+        /** The representative's verified certificate, if it has one. */
+        public Optional<ClassCertificate.Verified> certificate() {
+            return certification instanceof ClassCertificate.Verified v ? Optional.of(v) : Optional.empty();
+        }
+
+        /** "verified", or "unknown: " and why there is no certificate. */
+        public String status() {
+            return certification instanceof ClassCertificate.Unknown u ? "unknown: " + u.reason() : "verified";
+        }
+    }
+
+    /** The certificate of a class's representative, or why there is none. */
+    public sealed interface ClassCertificate {
+        /**
+         * Written and accepted by the verifier.
+         *
+         * @param file the certificate's file name in the output directory
+         * @param facts what it states, read back
+         */
+        record Verified(String file, CertificateFacts facts) implements ClassCertificate {
+        }
+
+        /**
+         * The refutation ran out of budget; nothing was written.
+         *
+         * @param reason why, in words
+         */
+        record Unknown(String reason) implements ClassCertificate {
         }
     }
 
@@ -154,8 +180,8 @@ public final class FamilyExploration {
      * @param classes the isomorphism classes, in order of first appearance
      * @param rejected the runs that were filtered out or found no core
      */
-    public record Member(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
-        public Member {
+    public record MemberFindings(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
+        public MemberFindings {
             classes = List.copyOf(classes);
             rejected = List.copyOf(rejected);
         }
@@ -168,8 +194,8 @@ public final class FamilyExploration {
      * @param settings the settings
      * @param members one per n, in increasing n
      */
-    public record Report(FamilyDefinition family, Settings settings, List<Member> members) {
-        public Report {
+    public record Findings(FamilyDefinition family, Settings settings, List<MemberFindings> members) {
+        public Findings {
             members = List.copyOf(members);
         }
 
@@ -188,7 +214,7 @@ public final class FamilyExploration {
             }
             settings.targetRank().ifPresent(r -> b.append("; accepted cores have rank ").append(r));
             b.append(".\n\nEvery core is fully minor-minimal; constraints only filter the runs' cores.\n");
-            for (Member m : members) {
+            for (MemberFindings m : members) {
                 b.append("\n## n = ").append(m.n()).append(" (").append(m.elements()).append(" elements, rank ")
                         .append(m.rank()).append(")\n\n");
                 b.append("| class | elements | rank | bases | non-bases | frequency | runs (seed strategy) "
@@ -200,7 +226,7 @@ public final class FamilyExploration {
                             .append(c.core().rank()).append(" | ").append(c.core().basisCount()).append(" | ")
                             .append(nonBases(c.core())).append(" | ").append(c.attempts().size()).append(" | ")
                             .append(String.join(", ", c.attempts().stream().map(Attempt::toString).toList()))
-                            .append(" | ").append(c.certificate().map(f -> "`" + f.getKey() + "` ").orElse(""))
+                            .append(" | ").append(c.certificate().map(f -> "`" + f.file() + "` ").orElse(""))
                             .append(c.status()).append(" | ").append(String.join(" ", c.core().labels()))
                             .append(" |\n");
                 }
@@ -215,7 +241,7 @@ public final class FamilyExploration {
         /** The report as JSON. */
         public Json.Obj toJson() {
             List<Json> ms = new ArrayList<>();
-            for (Member m : members) {
+            for (MemberFindings m : members) {
                 List<Json> classes = new ArrayList<>();
                 for (CoreClass c : m.classes()) {
                     classes.add(Json.Obj.builder()
@@ -225,8 +251,8 @@ public final class FamilyExploration {
                             .put("labels", Json.Arr.ofStrings(c.core().labels()))
                             .put("frequency", c.attempts().size())
                             .put("runs", new Json.Arr(c.attempts().stream().map(Attempt::toJson).toList()))
-                            .put("certificate", c.certificate().<Json>map(f -> new Json.Str(f.getKey())).orElse(Json.NULL))
-                            .put("sha256", c.certificate().<Json>map(f -> new Json.Str(f.getValue().sha256()))
+                            .put("certificate", c.certificate().<Json>map(f -> new Json.Str(f.file())).orElse(Json.NULL))
+                            .put("sha256", c.certificate().<Json>map(f -> new Json.Str(f.facts().sha256()))
                                     .orElse(Json.NULL))
                             .put("status", c.status())
                             .build());
@@ -276,7 +302,7 @@ public final class FamilyExploration {
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException when the verifier rejects a certificate just written (a bug)
      */
-    public Report run(int from, int to) throws IOException {
+    public Findings run(int from, int to) throws IOException {
         if (from > to) {
             throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
         }
@@ -289,11 +315,11 @@ public final class FamilyExploration {
             kept.add(keptLabels(m, n));
         }
         Files.createDirectories(dir);
-        List<Member> members = new ArrayList<>();
+        List<MemberFindings> members = new ArrayList<>();
         for (int k = 0; k < built.size(); k++) {
             members.add(explore(built.get(k), kept.get(k)));
         }
-        Report report = new Report(family, settings, members);
+        Findings report = new Findings(family, settings, members);
         AtomicFiles.writeString(dir.resolve(EXPLORE_MD), report.toMarkdown());
         AtomicFiles.writeJson(dir.resolve(EXPLORE_JSON), report.toJson());
         return report;
@@ -318,7 +344,7 @@ public final class FamilyExploration {
         return labels;
     }
 
-    private Member explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
+    private MemberFindings explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
         int n = m.construction().n();
         List<MinimalCore> representatives = new ArrayList<>();
         List<MatroidShape> shapes = new ArrayList<>();
@@ -359,13 +385,11 @@ public final class FamilyExploration {
             MinimalCore representative = representatives.get(c);
             CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(representative,
                     new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name));
-            classes.add(outcome instanceof CertifiedReduction.Verified
-                    ? new CoreClass(representative.core(), attempts.get(c), Optional.of(Map.entry(name,
-                            CertificateFacts.read(dir.resolve(name)))), "verified")
-                    : new CoreClass(representative.core(), attempts.get(c), Optional.empty(),
-                            "unknown: " + ((CertifiedReduction.Unknown) outcome).reason()));
+            classes.add(new CoreClass(representative.core(), attempts.get(c),
+                    outcome instanceof CertifiedReduction.Unknown u ? new ClassCertificate.Unknown(u.reason())
+                            : new ClassCertificate.Verified(name, CertificateFacts.read(dir.resolve(name)))));
         }
-        return new Member(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
+        return new MemberFindings(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
     }
 
     /** Why {@code core} is not accepted, or null when it is. */

@@ -14,6 +14,8 @@ import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
 import org.chirocore.cert.Provenance;
 import org.chirocore.cert.Source;
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -22,13 +24,13 @@ import org.chirocore.orient.Budget;
 import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.Orientability;
 import org.chirocore.pipeline.CertifiedReduction;
-import org.chirocore.search.MinimalityProof;
+import org.chirocore.search.MinimalityDecider;
 
 /**
  * Checks a predicted core of each member of a family without searching: the prediction names,
  * per n, the core's vertices S(n) and a contraction set C(n) (file format in docs/families.md);
  * the candidate is M/C restricted to S, where M is the member. It is decided non-orientable, then
- * checked minor-minimal directly by {@link MinimalityProof} (every single-element deletion and
+ * checked minor-minimal directly by {@link MinimalityDecider} (every single-element deletion and
  * contraction orientable, with witnesses), and only then certified into
  * {@code n=K.predicted.cert.json} and verified. Cost per n: building M/C on S (|S| rank
  * queries of M per r-subset), one orientability decision, up to 2|S| more, and the certification.
@@ -72,7 +74,7 @@ public final class FamilyPrediction {
         public static Prediction read(Path file) {
             String source = file.toString();
             try {
-                Json.Obj o = Json.parseUtf8(Files.readAllBytes(file)).asObject("the prediction");
+                Json.Obj o = Json.parseUtf8(InputFiles.read(file)).asObject("the prediction");
                 o.requireOnly(FIELDS);
                 if (o.has("members") == o.has("rule")) {
                     throw new FamilyException(source + ": give either \"members\" (a core per n) or \"rule\" "
@@ -109,7 +111,7 @@ public final class FamilyPrediction {
                 }
                 return new Prediction(source, o.requireString("family"), candidates);
             } catch (IOException e) {
-                throw new FamilyException(source + ": cannot read the file: " + e.getMessage(), e);
+                throw new FamilyException(source + ": cannot read the file: " + IoMessages.plain(e), e);
             } catch (FamilyException e) {
                 throw e;
             } catch (IllegalArgumentException e) {
@@ -223,20 +225,20 @@ public final class FamilyPrediction {
         if (answer instanceof Orientability.Orientable) {
             return new Refuted(n, "the predicted minor is orientable");
         }
-        MinimalityProof.Result proof = MinimalityProof.check(minor, budget);
-        if (proof instanceof MinimalityProof.Unknown u) {
+        MinimalityDecider.Result proof = MinimalityDecider.decide(minor, budget);
+        if (proof instanceof MinimalityDecider.Unknown u) {
             return new Unknown(n, u.reason());
         }
-        if (proof instanceof MinimalityProof.NonOrientableDeletion d) {
+        if (proof instanceof MinimalityDecider.NonOrientableDeletion d) {
             return new Refuted(n, "not minimal: deleting " + minor.labels().get(d.element()) + " leaves a "
                     + "non-orientable minor");
         }
-        if (proof instanceof MinimalityProof.NonOrientableContraction c) {
+        if (proof instanceof MinimalityDecider.NonOrientableContraction c) {
             return new Refuted(n, "not minimal: contracting " + minor.labels().get(c.element()) + " leaves a "
                     + "non-orientable minor");
         }
         CoreFinding found = new CoreFinding(minor, new Provenance(new Source.Constructed(member.construction()),
-                contract, deleted), ((MinimalityProof.Minimal) proof).witnesses(),
+                contract, deleted), ((MinimalityDecider.Minimal) proof).witnesses(),
                 new Discovery.Predicted(1 + 2 * minor.size(), (System.nanoTime() - start) / 1_000_000));
         String name = certificateName(n);
         CertifiedReduction.Outcome written = CertifiedReduction.certify(found, budget, dir.resolve(name));

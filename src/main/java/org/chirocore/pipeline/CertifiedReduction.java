@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 
 import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
@@ -11,6 +12,8 @@ import org.chirocore.cert.Certification;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
+import org.chirocore.io.AtomicFiles;
+import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.search.Progress;
@@ -47,18 +50,14 @@ public final class CertifiedReduction {
      * The verifier rebuilds a construction and checks the path from it; a given matroid's
      * provenance needs its input file, which the pipeline does not pass yet (the verifier's
      * reader of matroid files does not yet accept every file the producer reads), so that check
-     * is listed in {@code notChecked}, never reported as passed.
+     * is listed in {@link Checked#notChecked}, never reported as passed.
      *
      * @param certificate what was certified
      * @param written the files written and the content digest
-     * @param verifyMillis the verifier's wall-clock time
-     * @param notChecked the names of the verifier's checks that did not run (empty for a construction)
+     * @param verification the verifier's acceptance of the written file
      */
-    public record Verified(Certificate certificate, CertificateWriter.Written written, long verifyMillis,
-            List<String> notChecked) implements Outcome {
-        public Verified {
-            notChecked = List.copyOf(notChecked);
-        }
+    public record Verified(Certificate certificate, CertificateWriter.Written written, Checked verification)
+            implements Outcome {
     }
 
     /**
@@ -135,26 +134,53 @@ public final class CertifiedReduction {
      * @throws IllegalStateException when the core turns out orientable, a witness fails its
      *     re-check, or the verifier rejects the file (the files are then removed)
      */
-    public static Outcome certify(CoreFinding found, Budget budget, Path out)
-            throws IOException {
+    public static Outcome certify(CoreFinding found, Budget budget, Path out) throws IOException {
         Certification certification = Certification.of(found, budget);
         if (certification instanceof Certification.OutOfBudget o) {
             return new Unknown("proving the core ran out of budget: " + o.reason());
         }
         Certificate certificate = ((Certification.Certified) certification).certificate();
         CertificateWriter.Written written = CertificateWriter.write(certificate, out);
+        return new Verified(certificate, written, verifyWritten(out, written.dratFile()));
+    }
+
+    /**
+     * The verifier's acceptance of a written certificate.
+     *
+     * @param verifyMillis the verifier's wall-clock time
+     * @param notChecked the names of the checks that did not run (a given matroid's provenance)
+     */
+    public record Checked(long verifyMillis, List<String> notChecked) {
+        public Checked {
+            notChecked = List.copyOf(notChecked);
+        }
+    }
+
+    /**
+     * Writes a certificate document assembled elsewhere (e.g. the readable-proof variant of
+     * {@code explain}) to {@code out} atomically and verifies the written file.
+     *
+     * @throws IOException when the file cannot be written
+     * @throws IllegalStateException when the verifier rejects the file (it is then removed)
+     */
+    public static Checked writeVerified(Json.Obj document, Path out) throws IOException {
+        AtomicFiles.writeJson(out, document);
+        return verifyWritten(out, Optional.empty());
+    }
+
+    /** Verifies {@code out}; on rejection removes it and its proof file and throws. */
+    private static Checked verifyWritten(Path out, Optional<Path> dratFile) throws IOException {
         Report report = CertificateVerifier.verify(out);
         if (!report.passed()) {
             Files.deleteIfExists(out);
-            if (written.dratFile().isPresent()) {
-                Files.deleteIfExists(written.dratFile().get());
+            if (dratFile.isPresent()) {
+                Files.deleteIfExists(dratFile.get());
             }
             throw new IllegalStateException("The verifier rejected the certificate just written to " + out + " ("
                     + firstFailure(report) + "); it was removed.");
         }
-        List<String> notChecked = report.checks().stream().filter(c -> c.status() == Report.Status.NOT_RUN)
-                .map(Report.Check::name).toList();
-        return new Verified(certificate, written, report.millis(), notChecked);
+        return new Checked(report.millis(), report.checks().stream().filter(c -> c.status() == Report.Status.NOT_RUN)
+                .map(Report.Check::name).toList());
     }
 
     private static String firstFailure(Report report) {

@@ -101,20 +101,20 @@ public final class UnsatCoreSearch implements CoreSearch {
                 current = restrict(current, needed, run);
                 continue;
             }
-            MinimalityProof.Result pass = minimalityPass(current, session, run);
-            if (pass instanceof MinimalityProof.Unknown u) {
+            MinimalityDecider.Result pass = minimalityPass(current, session, run);
+            if (pass instanceof MinimalityDecider.Unknown u) {
                 return new SearchResult.Unknown(u.reason());
             }
-            if (pass instanceof MinimalityProof.NonOrientableDeletion d) {
+            if (pass instanceof MinimalityDecider.NonOrientableDeletion d) {
                 current = restrict(current, d.needed(), run);
                 continue;
             }
-            if (pass instanceof MinimalityProof.NonOrientableContraction c) {
+            if (pass instanceof MinimalityDecider.NonOrientableContraction c) {
                 run.contracted.add(current.labels().get(c.element()));
                 current = c.minor();
                 continue;
             }
-            List<MinorWitness> witnesses = ((MinimalityProof.Minimal) pass).witnesses();
+            List<MinorWitness> witnesses = ((MinimalityDecider.Minimal) pass).witnesses();
             checkPath(input, current, run);
             SearchStats stats = new SearchStats(run.decisions, run.grownTo, System.currentTimeMillis() - run.started);
             return new SearchResult.Found(new MinimalCore(current, run.contracted, run.deleted, witnesses, settings, stats));
@@ -225,17 +225,16 @@ public final class UnsatCoreSearch implements CoreSearch {
         return next;
     }
 
-    /** One {@link MinimalityProof} over the elements of {@code m} in a seeded order. */
     /** One pass over the single-element minors of {@code m} in a seeded order: it shrinks m or proves it minimal. */
-    private MinimalityProof.Result minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
+    private MinimalityDecider.Result minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
         List<Integer> order = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
         }
         Collections.shuffle(order, run.random);
-        MinimalityProof proof = new MinimalityProof(decider, settings.strategy(), progress);
-        MinimalityProof.Result result = proof.check(m, session, order);
-        run.decisions += proof.decisions();
+        MinimalityDecider minimality = new MinimalityDecider(decider, settings.strategy(), progress);
+        MinimalityDecider.Result result = minimality.decide(m, session, order);
+        run.decisions += minimality.decisions();
         return result;
     }
 

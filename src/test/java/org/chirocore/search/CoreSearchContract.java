@@ -47,7 +47,7 @@ abstract class CoreSearchContract {
     }
 
     /** Certifies {@code found} and has the independent verifier check the written certificate. */
-    void assertMinimalityProof(MinimalCore found) {
+    void assertMinimalityDecider(MinimalCore found) {
         assertEquals(2 * found.core().size(), found.witnesses().size());
         IndependentCheck.assertCertified(found, dir);
     }
@@ -62,7 +62,7 @@ abstract class CoreSearchContract {
         assertEquals(List.of(), found.contracted());
         assertEquals(List.of(), found.deleted());
         assertEquals(14, found.witnesses().size());
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
     }
 
     @ParameterizedTest
@@ -73,7 +73,7 @@ abstract class CoreSearchContract {
         MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
         assertTrue(isomorphic(found.core(), NamedMatroids.fano()) || isomorphic(found.core(), NamedMatroids.fanoDual()),
                 found.core().toString());
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
     }
 
     @Test
@@ -93,7 +93,7 @@ abstract class CoreSearchContract {
         Matroid m = new Minor(PulledMatroid.pull(cube, h, o), new int[] {o}, new int[0]);
         MinimalCore found = assertInstanceOf(SearchResult.Found.class, reduce(m, 0, Strategy.CONTRACT_FIRST)).core();
         assertTrue(isomorphic(found.core(), NamedMatroids.fano()));
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
     }
 
     @Test
@@ -125,7 +125,7 @@ abstract class CoreSearchContract {
                 construction.focus());
         SearchResult r = search(settings).reduce(m);
         MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
         int[] c = found.contracted().stream().mapToInt(m.labels()::indexOf).sorted().toArray();
         int[] d = found.deleted().stream().mapToInt(m.labels()::indexOf).sorted().toArray();
         assertEquals(found.core(), ExplicitMatroid.of(new Minor(m, c, d)));

@@ -20,11 +20,11 @@ import org.chirocore.orient.WitnessCheck;
  * single-element deletion and contraction: either all are orientable, and their re-checked
  * chirotopes are the proof, or it names the first non-orientable one. Deletions are solved in one
  * selector session on M; contractions on the contracted minor itself. The minimality pass of
- * {@link UnsatCoreSearch} is this check. Cost: up to 2|E| orientability decisions.
+ * {@link UnsatCoreSearch} is this decision. Cost: up to 2|E| orientability decisions.
  */
-public final class MinimalityProof {
+public final class MinimalityDecider {
 
-    /** The outcome of the check. */
+    /** The outcome of the decision. */
     public sealed interface Result {
     }
 
@@ -69,27 +69,27 @@ public final class MinimalityProof {
     private int decisions;
 
     /**
-     * A check deciding the contractions with {@code decider}, trying contractions or deletions
+     * A decision procedure deciding the contractions with {@code decider}, trying contractions or deletions
      * first as {@code strategy} says, reporting each step to {@code progress}.
      */
-    public MinimalityProof(OrientabilityDecider decider, Strategy strategy, Progress progress) {
+    public MinimalityDecider(OrientabilityDecider decider, Strategy strategy, Progress progress) {
         this.decider = decider;
         this.strategy = strategy;
         this.progress = progress;
     }
 
     /**
-     * Checks {@code m} in element order, contractions first.
+     * Decides minimality of {@code m} trying elements in element order, contractions first.
      *
      * @param m a matroid already known to be non-orientable
      */
-    public static Result check(ExplicitMatroid m, Budget budget) {
+    public static Result decide(ExplicitMatroid m, Budget budget) {
         List<Integer> order = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
         }
-        return new MinimalityProof(new LazySatDecider(budget), Strategy.CONTRACT_FIRST, Progress.SILENT)
-                .check(m, new OrientationSession(BasisIndex.of(m), true, budget), order);
+        return new MinimalityDecider(new LazySatDecider(budget), Strategy.CONTRACT_FIRST, Progress.SILENT)
+                .decide(m, new OrientationSession(BasisIndex.of(m), true, budget), order);
     }
 
     /** The orientability decisions made so far by this instance. */
@@ -101,7 +101,7 @@ public final class MinimalityProof {
      * Checks {@code m}, trying its elements in {@code order}; {@code session} is a selector
      * session on {@code m}.
      */
-    Result check(ExplicitMatroid m, OrientationSession session, List<Integer> order) {
+    Result decide(ExplicitMatroid m, OrientationSession session, List<Integer> order) {
         Chirotope[] deletion = new Chirotope[m.size()];
         Chirotope[] contraction = new Chirotope[m.size()];
         List<Operation> phases = strategy == Strategy.CONTRACT_FIRST
