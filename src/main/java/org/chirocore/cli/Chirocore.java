@@ -20,7 +20,8 @@ import picocli.CommandLine.Spec;
         exitCodeList = {"0:a proved answer, or facts printed",
                 "1:internal error (a bug; stack trace printed); for verify: a check failed",
                 "2:bad usage or bad input (message on stderr)",
-                "3:unknown: the budget ran out before an answer"})
+                "3:unknown: the budget ran out before an answer",
+                "4:none exists: a constrained search (reduce --rank/--keep/--avoid) exhausted its space"})
 public final class Chirocore implements Runnable {
     @Spec
     private CommandSpec spec;

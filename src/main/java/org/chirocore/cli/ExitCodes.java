@@ -18,6 +18,11 @@ final class ExitCodes {
     static final int BAD_INPUT = 2;
     /** No answer: a budget ran out. */
     static final int UNKNOWN = 3;
+    /**
+     * A constrained search ({@code reduce --rank/--keep/--avoid}) enumerated its whole space and
+     * proved that no core meets the constraints: an answer, but not the one asked for.
+     */
+    static final int NONE_EXISTS = 4;
 
     private ExitCodes() {
     }

@@ -3,6 +3,8 @@ package org.chirocore.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.Certificate;
@@ -10,9 +12,11 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Certification;
 import org.chirocore.io.ResultJson;
 import org.chirocore.orient.Refutation;
+import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.SearchResult;
 import org.chirocore.search.SearchSettings;
+import org.chirocore.search.SteeredSearch;
 import org.chirocore.search.Strategy;
 import org.chirocore.search.UnsatCoreSearch;
 
@@ -79,6 +83,23 @@ final class ReduceCommand implements Callable<Integer> {
             description = "When the input is orientable, write its chirotope there.")
     private Path witnessOut;
 
+    @Option(names = "--rank", paramLabel = "R",
+            description = "The core must have rank R: exactly rank(M) - R elements are contracted (R = rank(M): "
+                    + "deletions only). The search enumerates contraction sets and backtracks past dead ends.")
+    private Integer rank;
+
+    @Option(names = "--keep", paramLabel = "V", split = ",",
+            description = "Elements (labels) the core must contain; neither contracted nor deleted.")
+    private List<String> keep = List.of();
+
+    @Option(names = "--avoid", paramLabel = "V", split = ",", description = "Elements (labels) that must be deleted.")
+    private List<String> avoid = List.of();
+
+    @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
+            description = "With --rank, --keep or --avoid: wall-clock limit of the whole search, after which it "
+                    + "answers unknown; 0 (default) for none.")
+    private double totalTime;
+
     @Override
     public Integer call() {
         Inputs.Input input = input();
@@ -88,20 +109,29 @@ final class ReduceCommand implements Callable<Integer> {
         }
         SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
                 focus ? input.focus() : List.of());
+        CoreConstraints constraints = constraints(input);
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
-        SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
-        progress.finish();
         PrintWriter w = spec.commandLine().getOut();
         String from = Format.shape(input.matroid().rank(), input.matroid().size());
-        if (result instanceof SearchResult.Found f) {
-            Certification certification = Certification.of(f.core(), input.source(), settings.budget());
-            if (certification instanceof Certification.OutOfBudget o) {
-                w.println("unknown: a core was found, but proving it for the certificate ran out of budget: "
-                        + o.reason() + "; no certificate written");
-                return ExitCodes.UNKNOWN;
+        if (constraints.any()) {
+            SteeredSearch.Result steered = new SteeredSearch(settings, constraints, Math.round(totalTime * 1000),
+                    progress).search(input.matroid());
+            progress.finish();
+            if (steered instanceof SteeredSearch.Found f) {
+                return certify(w, from, f.core(), input);
             }
-            Certificate certificate = ((Certification.Certified) certification).certificate();
-            summarise(w, from, f.core(), certificate, Inputs.write(out, certificate));
+            if (steered instanceof SteeredSearch.NoneExists none) {
+                w.println("none exists: no minor-minimal non-orientable minor meets the constraints; enumerated "
+                        + none.enumerated() + "; no certificate written");
+                return ExitCodes.NONE_EXISTS;
+            }
+            w.println("unknown: " + ((SteeredSearch.Unknown) steered).reason() + "; no certificate written");
+            return ExitCodes.UNKNOWN;
+        }
+        SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
+        progress.finish();
+        if (result instanceof SearchResult.Found f) {
+            return certify(w, from, f.core(), input);
         } else if (result instanceof SearchResult.Orientable o) {
             w.println("orientable: " + from + "; no non-orientable minor to find, no certificate written");
             if (witnessOut != null) {
@@ -112,6 +142,37 @@ final class ReduceCommand implements Callable<Integer> {
             w.println("unknown: " + u.reason() + "; no certificate written");
         }
         return ExitCodes.of(result);
+    }
+
+    /** The constraints of --rank, --keep and --avoid, checked against the input. */
+    private CoreConstraints constraints(Inputs.Input input) {
+        if (totalTime < 0 || Double.isNaN(totalTime)) {
+            throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
+        }
+        try {
+            CoreConstraints c = new CoreConstraints(rank == null ? OptionalInt.empty() : OptionalInt.of(rank), keep,
+                    avoid);
+            c.validate(input.matroid());
+            return c;
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage());
+        }
+    }
+
+    /** Certifies {@code core}, writes and verifies the certificate, and prints the summary. */
+    private int certify(PrintWriter w, String from, MinimalCore core, Inputs.Input input) {
+        Certification certification = Certification.of(core, input.source(), budget.budget());
+        if (certification instanceof Certification.OutOfBudget o) {
+            w.println("unknown: a core was found, but proving it for the certificate ran out of budget: "
+                    + o.reason() + "; no certificate written");
+            return ExitCodes.UNKNOWN;
+        }
+        Certificate certificate = ((Certification.Certified) certification).certificate();
+        // The verifier reads a given matroid's file only with --input, and its reader does not yet
+        // take a matrix file without labels or element count; for a file input the provenance check is
+        // left to `verify CERT --input FILE` and everything else is checked here.
+        summarise(w, from, core, certificate, VerifiedCertificates.writeVerified(out, certificate, Optional.empty()));
+        return ExitCodes.OK;
     }
 
     /** The input chosen by exactly one of FILE and --cube. */
@@ -144,6 +205,6 @@ final class ReduceCommand implements Callable<Integer> {
                 + proof.stats().deletions() + " deletions, " + proof.drat().length() + " bytes of DRAT, "
                 + proof.stats().solve().millis() + " ms");
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
-                + written.dratFile().map(d -> " and " + d).orElse(""));
+                + written.dratFile().map(d -> " and " + d).orElse("") + "; verified by the independent checker");
     }
 }
