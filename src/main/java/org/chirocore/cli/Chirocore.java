@@ -14,7 +14,7 @@ import picocli.CommandLine.Spec;
         description = "Orientability of matroids and minor-minimal non-orientable minors of pulled affine cubes.",
         subcommands = {OrientCommand.class, ReduceCommand.class, VerifyCommand.class, ExportCommand.class,
                 CubeCommand.class, BenchCommand.class, FamilyCommand.class, FamilyMergeCommand.class,
-                ExplainCommand.class, ReportCommand.class,
+                ExplainCommand.class, ReportCommand.class, EnumerateCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
@@ -56,6 +56,6 @@ public final class Chirocore implements Runnable {
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
                 "Missing command: use one of orient, reduce, verify, export, cube, bench, family, family-merge, explain, "
-                        + "report.");
+                        + "report, enumerate.");
     }
 }

@@ -294,7 +294,7 @@ public final class SteeredSearch {
      * {@link #EXPLORED_SUBSETS} r-subsets (the selector session's basis index; its relations are
      * generated lazily, so the scan size matters less than for a single decision).
      */
-    static boolean explorable(Matroid m) {
+    public static boolean explorable(Matroid m) {
         return m.size() <= ExplicitMatroid.MAX_ELEMENTS && ElementSets.binomial(m.size(), m.rank()) <= EXPLORED_SUBSETS;
     }
 
