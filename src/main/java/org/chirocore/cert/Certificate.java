@@ -12,26 +12,22 @@ import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
 import org.chirocore.orient.WitnessCheck;
-import org.chirocore.search.MinimalCore;
 import org.chirocore.search.MinorWitness;
 import org.chirocore.search.Operation;
-import org.chirocore.search.SearchSettings;
-import org.chirocore.search.SearchStats;
 
 /**
  * Everything a certificate of minor-minimal non-orientability states: the core, its provenance,
- * a refutation of its orientability constraints and a witness pair per element; plus the search
- * figures, which go to the unhashed {@code run} member. Immutable.
+ * a refutation of its orientability constraints and a witness pair per element; plus how it was
+ * found, which goes to the unhashed {@code run} member. Immutable.
  *
  * @param core the core
  * @param provenance where it came from
  * @param refutation the proof that it has no chirotope
  * @param minimality one entry per core element, in element order
- * @param settings the search settings (informative)
- * @param searchStats the search figures (informative)
+ * @param discovery how the core was found (informative)
  */
 public record Certificate(ExplicitMatroid core, Provenance provenance, Refutation refutation,
-        List<MinimalityWitness> minimality, SearchSettings settings, SearchStats searchStats) {
+        List<MinimalityWitness> minimality, Discovery discovery) {
     public Certificate {
         minimality = List.copyOf(minimality);
         if (minimality.size() != core.size()) {
@@ -41,14 +37,14 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
     }
 
     /**
-     * The certificate of {@code found}, obtained from {@code source}, refuted by {@code refutation}.
+     * The certificate of {@code found}, refuted by {@code refutation}.
      * Re-checks every witness against the minor rebuilt here (one full relation scan each) and
      * that the refutation's normalisation is the one of the core, so nothing unchecked is written.
      *
      * @throws IllegalStateException when a witness fails its re-check, or the refutation was made
      *     for another matroid
      */
-    public static Certificate of(MinimalCore found, Source source, Refutation refutation) {
+    public static Certificate of(CoreFinding found, Refutation refutation) {
         ExplicitMatroid core = found.core();
         BasisIndex index = BasisIndex.of(core);
         List<Integer> normalisation = Arrays.stream(Normalisation.fixedVariables(index)).boxed().toList();
@@ -62,11 +58,10 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION),
                     checkedSigns(found, core, e, Operation.CONTRACTION)));
         }
-        return new Certificate(core, new Provenance(source, found.contracted(), found.deleted()), refutation,
-                entries, found.settings(), found.stats());
+        return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
-    private static String checkedSigns(MinimalCore found, ExplicitMatroid core, int e, Operation operation) {
+    private static String checkedSigns(CoreFinding found, ExplicitMatroid core, int e, Operation operation) {
         String label = core.labels().get(e);
         MinorWitness w = found.witnesses().stream()
                 .filter(x -> x.element().equals(label) && x.operation() == operation)

@@ -5,17 +5,15 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPOutputStream;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
-import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.io.Sha256;
+import org.chirocore.matroid.Construction;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.GpRelation;
@@ -117,29 +115,31 @@ public final class CertificateWriter {
                 .build();
     }
 
-    /** SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */
+    /** The content digest: SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */
     public static String sha256(Json value) {
-        return sha256(value.toText().getBytes(StandardCharsets.UTF_8));
+        return Sha256.hex(value);
     }
 
-    /** SHA-256, lower-case hex, of {@code bytes}. */
-    public static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("Every Java platform provides SHA-256.", e);
+    /** The {@code provenance.construction} member describing {@code c}: its parts, in order. */
+    public static Json.Obj construction(Construction c) {
+        Json.Obj.Builder b = Json.Obj.builder();
+        for (Construction.Part part : c.provenance()) {
+            b.put(part.name(), json(part.value()));
         }
+        return b.build();
     }
 
-    /** The {@code provenance.construction} member describing {@code c}. */
-    public static Json.Obj construction(CubeConstruction c) {
-        return Json.Obj.builder()
-                .put("cube", c.n())
-                .put("field", c.field().name())
-                .put("hyperplane", Json.Arr.ofStrings(c.hyperplaneVertices()))
-                .put("pulled", c.pulledVertex())
-                .put("contractPulled", c.contractPulled())
-                .build();
+    private static Json json(Object value) {
+        if (value instanceof Integer i) {
+            return Json.Num.of(i);
+        }
+        if (value instanceof Boolean z) {
+            return new Json.Bool(z);
+        }
+        if (value instanceof String t) {
+            return new Json.Str(t);
+        }
+        return Json.Arr.ofStrings(((List<?>) value).stream().map(String.class::cast).toList());
     }
 
     private static Json.Obj provenance(Provenance p) {
@@ -176,7 +176,7 @@ public final class CertificateWriter {
                 .put("relations", new Json.Arr(relations));
         if (dratFile.isPresent()) {
             b.put("dratFile", dratFile.get())
-                    .put("dratSha256", sha256(r.drat().getBytes(StandardCharsets.US_ASCII)));
+                    .put("dratSha256", Sha256.hex(r.drat().getBytes(StandardCharsets.US_ASCII)));
         } else {
             b.put("drat", r.drat());
         }
@@ -191,15 +191,23 @@ public final class CertificateWriter {
 
     private static Json.Obj run(Certificate c) {
         SolveStats s = c.refutation().stats().solve();
-        return Json.Obj.builder()
-                .put("search", Json.Obj.builder()
-                        .put("seed", c.settings().seed())
-                        .put("strategy", c.settings().strategy().id())
-                        .put("decisions", c.searchStats().decisions())
-                        .put("grownTo", c.searchStats().grownTo())
-                        .put("millis", c.searchStats().millis())
-                        .build())
-                .put("refutation", Json.Obj.builder()
+        Json.Obj.Builder run = Json.Obj.builder();
+        if (c.discovery() instanceof Discovery.Searched d) {
+            run.put("search", Json.Obj.builder()
+                    .put("seed", d.seed())
+                    .put("strategy", d.strategy().id())
+                    .put("decisions", d.stats().decisions())
+                    .put("grownTo", d.stats().grownTo())
+                    .put("millis", d.stats().millis())
+                    .build());
+        } else {
+            Discovery.Predicted p = (Discovery.Predicted) c.discovery();
+            run.put("prediction", Json.Obj.builder()
+                    .put("decisions", p.decisions())
+                    .put("millis", p.millis())
+                    .build());
+        }
+        return run.put("refutation", Json.Obj.builder()
                         .put("bases", s.bases())
                         .put("relations", c.refutation().relations().size())
                         .put("clauses", s.clauses())

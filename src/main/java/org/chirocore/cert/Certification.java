@@ -21,16 +21,23 @@ public sealed interface Certification {
     }
 
     /**
-     * Certifies {@code found}, which was reduced from {@code source}, spending at most
-     * {@code budget} on the refutation.
-     *
-     * @throws IllegalStateException when the core turns out orientable or a witness fails its
-     *     re-check: either is a bug of the search, and no certificate must be written then
+     * Certifies {@code found}, which a search reduced from {@code source}, spending at most
+     * {@code budget} on the refutation; as {@link #of(CoreFinding, Budget)}.
      */
     static Certification of(MinimalCore found, Source source, Budget budget) {
+        return of(CoreFinding.searched(found, source), budget);
+    }
+
+    /**
+     * Certifies {@code found}, spending at most {@code budget} on the refutation.
+     *
+     * @throws IllegalStateException when the core turns out orientable or a witness fails its
+     *     re-check: either is a bug of whoever found the core, and no certificate must be written then
+     */
+    static Certification of(CoreFinding found, Budget budget) {
         RefutationSearch.Outcome outcome = new RefutationSearch(budget).refute(found.core());
         if (outcome instanceof RefutationSearch.Refuted r) {
-            return new Certified(Certificate.of(found, source, r.refutation()));
+            return new Certified(Certificate.of(found, r.refutation()));
         }
         if (outcome instanceof RefutationSearch.OutOfBudget o) {
             return new OutOfBudget(o.reason());

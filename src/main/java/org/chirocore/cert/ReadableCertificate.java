@@ -51,8 +51,8 @@ public final class ReadableCertificate {
      *     not positive, or the core turns out to be orientable
      */
     public static Explanation explain(Path file, int maxSteps) throws IOException {
-        Json.Obj document = CertificateExport.readChecked(file);
-        CertificateExport.Claim claim = CertificateExport.claim(document.requireObject("content"));
+        Json.Obj document = CertificateReader.readChecked(file);
+        CertificateReader.Claim claim = CertificateReader.claim(document.requireObject("content"));
         HumanProof.Outcome outcome = new HumanProof(claim.index(), claim.normalised()).derive(maxSteps);
         if (outcome instanceof HumanProof.TooLarge t) {
             return new Unreadable(t);

@@ -1,15 +1,12 @@
 package org.chirocore.cert;
 
-import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.Construction;
 
 /** Where the reduced matroid came from, as a certificate's provenance names it. */
 public sealed interface Source {
 
-    /**
-     * The matroid {@code construction.build()} returns: the pulled cube, contracted by the
-     * pulled vertex when the construction says so.
-     */
-    record Constructed(CubeConstruction construction) implements Source {
+    /** The matroid {@code construction.build()} returns (for a cube construction, the pulled cube, possibly contracted). */
+    record Constructed(Construction construction) implements Source {
     }
 
     /**

@@ -21,6 +21,7 @@ import picocli.CommandLine.Spec;
         description = {"Time the corner construction for n = 3..N: H spanned by the unit vectors, the all-ones "
                 + "vertex pulled to it and contracted, then decided (n <= " + Benchmark.MAX_DECIDED_DIMENSION
                 + ") and reduced with seed 0, contract-first.",
+                "With --orientable, times orientable instances instead.",
                 "Prints figures only; nothing is asserted."})
 final class BenchCommand implements Callable<Integer> {
     private static final String ROW = "%2s %9s %5s %10s %10s %14s %10s %11s %10s%n";
@@ -35,8 +36,26 @@ final class BenchCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Option(names = "--orientable",
+            description = "Instead, time orientable instances: the real 4- and 5-cube as matrices over Q (determinant "
+                    + "signs), the 5-cube by the SAT search alone (--time-limit, default "
+                    + Benchmark.DEFAULT_SEARCH_MILLIS / 1000 + " s; unknown when it runs out) and the Vamos matroid.")
+    private boolean orientable;
+
+    private static final String ORIENTABLE_ROW = "%-12s %9s %5s %12s %12s %10s %10s %10s%n";
+
     @Override
     public Integer call() {
+        if (orientable) {
+            PrintWriter out = spec.commandLine().getOut();
+            out.printf(ORIENTABLE_ROW, "instance", "elements", "rank", "method", "verdict", "bases", "relations", "ms");
+            Benchmark.orientable(budget.budget(), r -> {
+                out.printf(ORIENTABLE_ROW, r.name(), r.elements(), r.rank(), r.method(), r.verdict(), r.bases(),
+                        r.relations(), r.millis());
+                out.flush();
+            });
+            return ExitCodes.OK;
+        }
         if (maxN < 3) {
             throw new ParameterException(spec.commandLine(), "--max-n must be at least 3, not " + maxN + ".");
         }

@@ -8,6 +8,8 @@ import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.search.Strategy;
 
 import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.TypeConversionException;
 
 /**
@@ -16,6 +18,26 @@ import picocli.CommandLine.TypeConversionException;
  */
 final class Converters {
     private Converters() {
+    }
+
+    /**
+     * A range of cube dimensions written "A..B" or "A", as {A, B}.
+     *
+     * @throws ParameterException naming {@code option} when the text is not such a range with A ≤ B
+     */
+    static int[] range(CommandSpec spec, String option, String text) {
+        String[] parts = text.trim().split("\\.\\.", -1);
+        try {
+            int a = Integer.parseInt(parts[0].trim());
+            int b = parts.length == 2 ? Integer.parseInt(parts[1].trim()) : a;
+            if (parts.length <= 2 && a <= b) {
+                return new int[] {a, b};
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new ParameterException(spec.commandLine(), option + " must be A..B with integers A <= B, or one integer; "
+                + "got \"" + text + "\".");
     }
 
     /** A field: "Q", "GF(p)", or just the prime p. */

@@ -2,13 +2,22 @@ package org.chirocore.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
+import org.chirocore.matroid.CubeHyperplane;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.CubeReport;
 import org.chirocore.matroid.Matroid;
+
+import org.chirocore.sweep.GeneralPositionPairs;
+import org.chirocore.sweep.HyperplaneOrbit;
+import org.chirocore.sweep.HyperplaneOrbits;
+import org.chirocore.sweep.PullCandidate;
+import org.chirocore.sweep.SweepRun;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -22,6 +31,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "cube", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = {"Print facts about the affine N-cube: elements, rank, facets, skew facets, rectangles and "
                 + "hyperplanes.",
+                "With --orbits: the hyperplanes up to symmetry and the general-position pairs.",
                 "With --hyperplane: its equation, its vertices and whether it is a hyperplane; with --pull too: "
                         + "whether H and the vertex are in general position."})
 final class CubeCommand implements Callable<Integer> {
@@ -43,6 +53,13 @@ final class CubeCommand implements Callable<Integer> {
             description = "With --save: contract the pulled vertex first (default: yes).")
     private boolean contractPulled;
 
+    @Option(names = "--orbits",
+            description = "List the hyperplanes of the real N-cube up to the cube's symmetry group (one canonical "
+                    + "equation per orbit, its number of vertices and orbit size) and the general-position pairs (H, O) "
+                    + "up to symmetry, for N = 2.." + HyperplaneOrbits.MAX_DIMENSION + " (N = 7 takes seconds, "
+                    + "N = 8 hours).")
+    private boolean orbits;
+
     @Override
     public Integer call() {
         CubeReport r;
@@ -58,7 +75,8 @@ final class CubeCommand implements Callable<Integer> {
         out.println("skew facets: " + r.skewFacets());
         out.println("rectangles: " + r.rectangles());
         out.println("hyperplanes: " + (r.hyperplanes().isPresent() ? String.valueOf(r.hyperplanes().getAsInt())
-                : "not enumerated (only for the real cube with n <= " + CubeGeometry.MAX_ENUMERATED_DIMENSION + ")"));
+                : "not enumerated (listed one by one only for the real cube with n <= "
+                        + CubeGeometry.MAX_ENUMERATED_DIMENSION + "; --orbits counts them up to symmetry)"));
         r.hyperplane().ifPresent(h -> {
             out.println("H: " + h.equation().orElse("(not the vertex set of a real hyperplane)"));
             out.println("H vertices: " + Format.labels(h.vertices()));
@@ -66,6 +84,9 @@ final class CubeCommand implements Callable<Integer> {
         });
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
+        if (orbits) {
+            printOrbits(out);
+        }
         if (save != null) {
             Inputs.requireDirectoryOf(save);
             Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
@@ -77,5 +98,27 @@ final class CubeCommand implements Callable<Integer> {
             out.println("wrote " + save + " (rank " + m.rank() + " on " + m.size() + " elements)");
         }
         return ExitCodes.OK;
+    }
+
+    private void printOrbits(PrintWriter out) {
+        if (n < SweepRun.MIN_DIMENSION || n > HyperplaneOrbits.MAX_DIMENSION) {
+            throw new ParameterException(spec.commandLine(), "--orbits needs N within " + SweepRun.MIN_DIMENSION + ".."
+                    + HyperplaneOrbits.MAX_DIMENSION + ", not " + n + ".");
+        }
+        List<HyperplaneOrbit> found = HyperplaneOrbits.of(n);
+        out.println("hyperplane orbits: " + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize)
+                .sum() + " hyperplanes)");
+        List<PullCandidate> general = new ArrayList<>();
+        for (HyperplaneOrbit h : found) {
+            CubeHyperplane rep = h.representative();
+            out.println("  " + rep.equation() + ": " + rep.vertices().size() + " vertices, orbit size " + h.orbitSize());
+            GeneralPositionPairs.of(h).stream().filter(PullCandidate::inGeneralPosition).forEach(general::add);
+        }
+        out.println("general-position pairs up to symmetry: " + general.size() + " ("
+                + general.stream().mapToLong(PullCandidate::orbitSize).sum() + " pairs)");
+        for (PullCandidate c : general) {
+            out.println("  " + c.hyperplane().representative().equation() + ", O = " + c.vertex() + ": orbit size "
+                    + c.orbitSize());
+        }
     }
 }

@@ -11,10 +11,14 @@ import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.Certification;
+import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Source;
 import org.chirocore.io.Json;
+import org.chirocore.matroid.Construction;
+import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.pipeline.Subject;
 import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.SearchSettings;
 import org.chirocore.search.SteeredSearch;
@@ -87,7 +91,7 @@ final class EnumerateCommand implements Callable<Integer> {
         if (!symmetry.equals("auto") && !symmetry.equals("none")) {
             throw new ParameterException(spec.commandLine(), "--symmetry is auto or none, not \"" + symmetry + "\".");
         }
-        Inputs.Input input = input();
+        Subject input = input();
         if (!SteeredSearch.explorable(input.matroid())) {
             throw new BadInputException("the matroid (rank " + input.matroid().rank() + " on " + input.matroid().size()
                     + " elements) is too large to enumerate: at most 64 elements and " + SteeredSearch.EXPLORED_SUBSETS
@@ -126,7 +130,7 @@ final class EnumerateCommand implements Callable<Integer> {
     }
 
     /** The input chosen by exactly one of FILE and --cube. */
-    private Inputs.Input input() {
+    private Subject input() {
         if ((file == null) == (cube == null)) {
             throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
                     + (file == null ? "neither was given." : "both were given."));
@@ -140,12 +144,12 @@ final class EnumerateCommand implements Callable<Integer> {
         return Inputs.read(file);
     }
 
-    private Symmetry group(Inputs.Input input, ExplicitMatroid m) {
+    private Symmetry group(Subject input, ExplicitMatroid m) {
         if (symmetry.equals("none")) {
             return Symmetry.none(m.size());
         }
         if (input.source() instanceof Source.Constructed c) {
-            return Symmetry.ofCube(c.construction(), m);
+            return c.construction() instanceof CubeConstruction cube ? Symmetry.ofCube(cube, m) : Symmetry.none(m.size());
         }
         try {
             return Symmetry.automorphisms(m);
@@ -156,20 +160,20 @@ final class EnumerateCommand implements Callable<Integer> {
 
     /** The class's certificate, written and verified, or empty when its refutation ran out of budget. */
     private Optional<CertificateWriter.Written> certify(CoreEnumeration.CoreClass c, Source source, int k) {
-        Certification certification = Certification.of(c.example(), source, budget.budget());
-        if (certification instanceof Certification.Certified certified) {
-            // As in reduce: a given matroid's provenance is checked by `verify CERT --input FILE`.
-            return Optional.of(VerifiedCertificates.writeVerified(out.resolve(certificateName(k)),
-                    certified.certificate(), Optional.empty()));
+        try {
+            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(c.example(), source),
+                    budget.budget(), out.resolve(certificateName(k)));
+            return outcome instanceof CertifiedReduction.Verified v ? Optional.of(v.written()) : Optional.empty();
+        } catch (IOException e) {
+            throw new BadInputException(out.resolve(certificateName(k)) + ": cannot write the certificate: " + e, e);
         }
-        return Optional.empty();
     }
 
     static String certificateName(int k) {
         return "class-" + k + ".cert.json";
     }
 
-    private static Json summaryJson(Inputs.Input input, ExplicitMatroid m, Symmetry group,
+    private static Json summaryJson(Subject input, ExplicitMatroid m, Symmetry group,
             CoreEnumeration.Result r, List<Optional<CertificateWriter.Written>> certificates) {
         List<Json> classes = new ArrayList<>();
         for (int k = 0; k < r.classes().size(); k++) {
@@ -194,10 +198,9 @@ final class EnumerateCommand implements Callable<Integer> {
         }
         Json.Obj.Builder source = Json.Obj.builder();
         if (input.source() instanceof Source.Constructed c) {
-            source.put("cube", c.construction().n()).put("field", c.construction().field().toString())
-                    .put("hyperplane", Json.Arr.ofStrings(c.construction().hyperplaneVertices()))
-                    .put("pull", c.construction().pulledVertex())
-                    .put("contractPulled", c.construction().contractPulled());
+            for (Construction.Part part : c.construction().provenance()) {
+                source.put(part.name(), partJson(part.value()));
+            }
         } else if (input.source() instanceof Source.Given g) {
             source.put("sha256", g.sha256());
         }
@@ -217,6 +220,19 @@ final class EnumerateCommand implements Callable<Integer> {
                 .put("millis", r.millis())
                 .put("classes", new Json.Arr(classes))
                 .build();
+    }
+
+    private static Json partJson(Object value) {
+        if (value instanceof Integer i) {
+            return Json.Num.of(i);
+        }
+        if (value instanceof Boolean b) {
+            return new Json.Bool(b);
+        }
+        if (value instanceof String s) {
+            return new Json.Str(s);
+        }
+        return Json.Arr.ofStrings(((List<?>) value).stream().map(String.class::cast).toList());
     }
 
     private static String summaryMarkdown(ExplicitMatroid m, Symmetry group, CoreEnumeration.Result r,

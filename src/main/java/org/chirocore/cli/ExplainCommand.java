@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.ReadableCertificate;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
 
@@ -92,8 +93,12 @@ final class ExplainCommand implements Callable<Integer> {
             stdout.println("wrote " + out);
         }
         if (certificateOut != null) {
-            Inputs.write(certificateOut, r.certificate());
-            stdout.println("wrote " + certificateOut + " (check it with: chirocore verify " + certificateOut + ")");
+            try {
+                CertifiedReduction.Checked checked = CertifiedReduction.writeVerified(r.certificate(), certificateOut);
+                stdout.println("wrote " + certificateOut + "; " + Format.verified(checked));
+            } catch (IOException e) {
+                throw new BadInputException(certificateOut + ": cannot write the certificate: " + e, e);
+            }
         }
         return ExitCodes.OK;
     }

@@ -2,12 +2,21 @@ package org.chirocore.cli;
 
 import java.util.List;
 
+import org.chirocore.pipeline.CertifiedReduction;
+
 /** Wording shared by the commands' summaries. */
 final class Format {
     private Format() {
     }
 
     /** "rank 3 on 7 elements". */
+    /** "verified by the independent checker in T ms", naming any check that did not run. */
+    static String verified(CertifiedReduction.Checked checked) {
+        return "verified by the independent checker in " + checked.verifyMillis() + " ms"
+                + (checked.notChecked().isEmpty() ? ""
+                        : "; not checked: " + String.join(", ", checked.notChecked()) + " (run verify with --input)");
+    }
+
     static String shape(int rank, int elements) {
         return "rank " + rank + " on " + elements + " element" + (elements == 1 ? "" : "s");
     }

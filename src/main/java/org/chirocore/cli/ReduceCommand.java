@@ -1,24 +1,24 @@
 package org.chirocore.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.Certification;
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Discovery;
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.Refutation;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.pipeline.Subject;
 import org.chirocore.search.CoreConstraints;
-import org.chirocore.search.MinimalCore;
-import org.chirocore.search.SearchResult;
-import org.chirocore.search.SearchSettings;
 import org.chirocore.search.SteeredSearch;
 import org.chirocore.search.Strategy;
-import org.chirocore.search.UnsatCoreSearch;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -30,7 +30,8 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code chirocore reduce}: reduces a matroid file or a cube construction to a minor-minimal
- * non-orientable minor and writes its certificate (docs/certificate-format.md). An orientable
+ * non-orientable minor, writes its certificate (docs/certificate-format.md) and verifies the written
+ * file with the independent checker, all through {@link CertifiedReduction}. An orientable
  * input or an exhausted budget gives no certificate: a certificate only ever states minimal
  * non-orientability.
  */
@@ -56,9 +57,8 @@ final class ReduceCommand implements Callable<Integer> {
             description = "Contract the pulled vertex before reducing (default: yes).")
     private boolean contractPulled;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "0",
-            description = "Seed of the element order (default: ${DEFAULT-VALUE}).")
-    private long seed;
+    @Mixin
+    private SeedOption seed;
 
     @Option(names = "--strategy", paramLabel = "STRATEGY", defaultValue = "contract-first",
             converter = Converters.StrategyConverter.class, completionCandidates = Converters.StrategyNames.class,
@@ -76,7 +76,8 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
             description = "Where to write the certificate of the core (written atomically; a large proof goes "
-                    + "beside it as NAME.drat.gz). Nothing is written unless a core is found.")
+                    + "beside it as NAME.drat.gz) and checked by the independent verifier. Nothing is written unless "
+                    + "a core is found.")
     private Path out;
 
     @Option(names = "--witness-out", paramLabel = "FILE",
@@ -102,50 +103,58 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Inputs.Input input = input();
+        Subject input = input();
         Inputs.requireDirectoryOf(out);
         if (witnessOut != null) {
             Inputs.requireDirectoryOf(witnessOut);
         }
-        SearchSettings settings = new SearchSettings(seed, strategy, budget.budget(),
-                focus ? input.focus() : List.of());
         CoreConstraints constraints = constraints(input);
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
+        CertifiedReduction.Outcome outcome;
+        try {
+            CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
+                    budget.budget());
+            Subject subject = focus ? input : input.withoutFocus();
+            if (constraints.any()) {
+                SteeredSearch.Result steered = new SteeredSearch(settings.search(subject), constraints,
+                        Math.round(totalTime * 1000), progress).search(subject.matroid());
+                if (steered instanceof SteeredSearch.NoneExists none) {
+                    spec.commandLine().getOut().println("none exists: no minor-minimal non-orientable minor meets the "
+                            + "constraints; enumerated " + none.enumerated() + "; no certificate written");
+                    return ExitCodes.NONE_EXISTS;
+                }
+                outcome = steered instanceof SteeredSearch.Found f
+                        ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
+                                out)
+                        : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
+            } else {
+                outcome = new CertifiedReduction(settings, progress).run(subject, out);
+            }
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot write the certificate: " + e, e);
+        } finally {
+            progress.finish();
+        }
         PrintWriter w = spec.commandLine().getOut();
         String from = Format.shape(input.matroid().rank(), input.matroid().size());
-        if (constraints.any()) {
-            SteeredSearch.Result steered = new SteeredSearch(settings, constraints, Math.round(totalTime * 1000),
-                    progress).search(input.matroid());
-            progress.finish();
-            if (steered instanceof SteeredSearch.Found f) {
-                return certify(w, from, f.core(), input);
-            }
-            if (steered instanceof SteeredSearch.NoneExists none) {
-                w.println("none exists: no minor-minimal non-orientable minor meets the constraints; enumerated "
-                        + none.enumerated() + "; no certificate written");
-                return ExitCodes.NONE_EXISTS;
-            }
-            w.println("unknown: " + ((SteeredSearch.Unknown) steered).reason() + "; no certificate written");
-            return ExitCodes.UNKNOWN;
+        if (outcome instanceof CertifiedReduction.Verified v) {
+            summarise(w, from, v);
+            return ExitCodes.OK;
         }
-        SearchResult result = new UnsatCoreSearch(settings, progress).reduce(input.matroid());
-        progress.finish();
-        if (result instanceof SearchResult.Found f) {
-            return certify(w, from, f.core(), input);
-        } else if (result instanceof SearchResult.Orientable o) {
+        if (outcome instanceof CertifiedReduction.Orientable o) {
             w.println("orientable: " + from + "; no non-orientable minor to find, no certificate written");
             if (witnessOut != null) {
                 Inputs.write(witnessOut, ResultJson.chirotope(o.witness()));
                 w.println("wrote the witness to " + witnessOut);
             }
-        } else if (result instanceof SearchResult.Unknown u) {
-            w.println("unknown: " + u.reason() + "; no certificate written");
+            return ExitCodes.OK;
         }
-        return ExitCodes.of(result);
+        w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
+        return ExitCodes.UNKNOWN;
     }
 
     /** The constraints of --rank, --keep and --avoid, checked against the input. */
-    private CoreConstraints constraints(Inputs.Input input) {
+    private CoreConstraints constraints(Subject input) {
         if (totalTime < 0 || Double.isNaN(totalTime)) {
             throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
         }
@@ -159,24 +168,8 @@ final class ReduceCommand implements Callable<Integer> {
         }
     }
 
-    /** Certifies {@code core}, writes and verifies the certificate, and prints the summary. */
-    private int certify(PrintWriter w, String from, MinimalCore core, Inputs.Input input) {
-        Certification certification = Certification.of(core, input.source(), budget.budget());
-        if (certification instanceof Certification.OutOfBudget o) {
-            w.println("unknown: a core was found, but proving it for the certificate ran out of budget: "
-                    + o.reason() + "; no certificate written");
-            return ExitCodes.UNKNOWN;
-        }
-        Certificate certificate = ((Certification.Certified) certification).certificate();
-        // The verifier reads a given matroid's file only with --input, and its reader does not yet
-        // take a matrix file without labels or element count; for a file input the provenance check is
-        // left to `verify CERT --input FILE` and everything else is checked here.
-        summarise(w, from, core, certificate, VerifiedCertificates.writeVerified(out, certificate, Optional.empty()));
-        return ExitCodes.OK;
-    }
-
     /** The input chosen by exactly one of FILE and --cube. */
-    private Inputs.Input input() {
+    private Subject input() {
         if ((file == null) == (cube == null)) {
             throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
                     + (file == null ? "neither was given." : "both were given."));
@@ -191,20 +184,25 @@ final class ReduceCommand implements Callable<Integer> {
         return Inputs.read(file);
     }
 
-    private static void summarise(PrintWriter w, String from, MinimalCore core, Certificate certificate,
-            CertificateWriter.Written written) {
-        w.println("non-orientable core: " + Format.shape(core.core().rank(), core.core().size(),
-                core.core().basisCount()) + " (from " + from + ")");
-        w.println("contracted: " + Format.labels(core.contracted()));
-        w.println("deleted: " + Format.labels(core.deleted()));
-        w.println("witnesses: " + core.witnesses().size()
+    private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {
+        Certificate certificate = v.certificate();
+        ExplicitMatroid core = certificate.core();
+        w.println("non-orientable core: " + Format.shape(core.rank(), core.size(), core.basisCount()) + " (from "
+                + from + ")");
+        w.println("contracted: " + Format.labels(certificate.provenance().contracted()));
+        w.println("deleted: " + Format.labels(certificate.provenance().deleted()));
+        w.println("witnesses: " + 2 * certificate.minimality().size()
                 + " (every single-element deletion and contraction is orientable)");
-        w.println("search: " + core.stats().millis() + " ms, " + core.stats().decisions() + " decisions");
+        if (certificate.discovery() instanceof Discovery.Searched s) {
+            w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
+        }
         Refutation proof = certificate.refutation();
         w.println("proof: " + proof.relations().size() + " relations, " + proof.stats().lemmas() + " lemmas, "
                 + proof.stats().deletions() + " deletions, " + proof.drat().length() + " bytes of DRAT, "
                 + proof.stats().solve().millis() + " ms");
+        CertificateWriter.Written written = v.written();
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
-                + written.dratFile().map(d -> " and " + d).orElse("") + "; verified by the independent checker");
+                + written.dratFile().map(d -> " and " + d).orElse(""));
+        w.println(Format.verified(v.verification()));
     }
 }

@@ -8,14 +8,16 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Supplier;
 
-import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.Source;
 import org.chirocore.io.Json;
+import org.chirocore.io.Sha256;
 import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.GeneralPositionException;
 import org.chirocore.matroid.InvalidHyperplaneException;
 import org.chirocore.matroid.Matroid;
+import org.chirocore.pipeline.Subject;
 
 /**
  * A family of cube constructions, one per cube dimension n in a range: the field, a rule for the
@@ -57,6 +59,10 @@ public record FamilyDefinition(String source, String name, String description, F
      * @param matroid the pulled cube, contracted by O when the family says so
      */
     public record Member(CubeConstruction construction, Matroid matroid) {
+        /** The member as the pipeline's subject: its matroid, provenance and focus (H's vertices). */
+        public Subject subject() {
+            return new Subject(matroid, new Source.Constructed(construction), construction.focus());
+        }
     }
 
     /**
@@ -95,7 +101,7 @@ public record FamilyDefinition(String source, String name, String description, F
                 hyperplane(source, o.requireObject("hyperplane")),
                 in(source, "pulled", () -> VertexRule.parse(o.requireString("pulled"))),
                 o.requireBoolean("contractPulled"), range.get(0).asInt("range[0]"), range.get(1).asInt("range[1]"),
-                CertificateWriter.sha256(json));
+                Sha256.hex(json));
     }
 
     /**

@@ -5,10 +5,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Source;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ElementSets;
@@ -16,6 +17,7 @@ import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.matroid.MatroidShape;
 import org.chirocore.orient.Budget;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
@@ -85,13 +87,45 @@ public final class FamilyExploration {
         }
     }
 
-    /**
-     * A run whose core was not accepted, or that found none.
-     *
-     * @param attempt the run
-     * @param reason "filtered: …", "orientable" or "unknown: …"
-     */
-    public record Rejected(Attempt attempt, String reason) {
+    /** A run whose core was not accepted, or that found none. */
+    public sealed interface Rejected {
+        /** The run. */
+        Attempt attempt();
+
+        /** Why, as the report states it: "filtered: …", "orientable" or "unknown: …". */
+        String reason();
+
+        /**
+         * The run's core failed a constraint.
+         *
+         * @param why which constraint, in words
+         */
+        record Filtered(Attempt attempt, String why) implements Rejected {
+            @Override
+            public String reason() {
+                return "filtered: " + why;
+            }
+        }
+
+        /** The member is orientable: the run found no core. */
+        record Orientable(Attempt attempt) implements Rejected {
+            @Override
+            public String reason() {
+                return "orientable";
+            }
+        }
+
+        /**
+         * A budget ran out; nothing is claimed.
+         *
+         * @param why why, in words
+         */
+        record Unknown(Attempt attempt, String why) implements Rejected {
+            @Override
+            public String reason() {
+                return "unknown: " + why;
+            }
+        }
     }
 
     /**
@@ -99,14 +133,41 @@ public final class FamilyExploration {
      *
      * @param core the representative: the core of the class's first run
      * @param attempts the runs whose core lies in the class, in run order
-     * @param certificate the representative's certificate file name and what it states, empty
-     *     when its refutation ran out of budget
-     * @param status "verified", or "unknown: " and why there is no certificate
+     * @param certification the representative's verified certificate, or why there is none
      */
-    public record CoreClass(ExplicitMatroid core, List<Attempt> attempts,
-            Optional<Map.Entry<String, CertificateFacts>> certificate, String status) {
+    public record CoreClass(ExplicitMatroid core, List<Attempt> attempts, ClassCertificate certification) {
         public CoreClass {
             attempts = List.copyOf(attempts);
+        }
+
+        /** The representative's verified certificate, if it has one. */
+        public Optional<ClassCertificate.Verified> certificate() {
+            return certification instanceof ClassCertificate.Verified v ? Optional.of(v) : Optional.empty();
+        }
+
+        /** "verified", or "unknown: " and why there is no certificate. */
+        public String status() {
+            return certification instanceof ClassCertificate.Unknown u ? "unknown: " + u.reason() : "verified";
+        }
+    }
+
+    /** The certificate of a class's representative, or why there is none. */
+    public sealed interface ClassCertificate {
+        /**
+         * Written and accepted by the verifier.
+         *
+         * @param file the certificate's file name in the output directory
+         * @param facts what it states, read back
+         */
+        record Verified(String file, CertificateFacts facts) implements ClassCertificate {
+        }
+
+        /**
+         * The refutation ran out of budget; nothing was written.
+         *
+         * @param reason why, in words
+         */
+        record Unknown(String reason) implements ClassCertificate {
         }
     }
 
@@ -119,8 +180,8 @@ public final class FamilyExploration {
      * @param classes the isomorphism classes, in order of first appearance
      * @param rejected the runs that were filtered out or found no core
      */
-    public record Member(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
-        public Member {
+    public record MemberFindings(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
+        public MemberFindings {
             classes = List.copyOf(classes);
             rejected = List.copyOf(rejected);
         }
@@ -133,8 +194,8 @@ public final class FamilyExploration {
      * @param settings the settings
      * @param members one per n, in increasing n
      */
-    public record Report(FamilyDefinition family, Settings settings, List<Member> members) {
-        public Report {
+    public record Findings(FamilyDefinition family, Settings settings, List<MemberFindings> members) {
+        public Findings {
             members = List.copyOf(members);
         }
 
@@ -153,7 +214,7 @@ public final class FamilyExploration {
             }
             settings.targetRank().ifPresent(r -> b.append("; accepted cores have rank ").append(r));
             b.append(".\n\nEvery core is fully minor-minimal; constraints only filter the runs' cores.\n");
-            for (Member m : members) {
+            for (MemberFindings m : members) {
                 b.append("\n## n = ").append(m.n()).append(" (").append(m.elements()).append(" elements, rank ")
                         .append(m.rank()).append(")\n\n");
                 b.append("| class | elements | rank | bases | non-bases | frequency | runs (seed strategy) "
@@ -165,7 +226,7 @@ public final class FamilyExploration {
                             .append(c.core().rank()).append(" | ").append(c.core().basisCount()).append(" | ")
                             .append(nonBases(c.core())).append(" | ").append(c.attempts().size()).append(" | ")
                             .append(String.join(", ", c.attempts().stream().map(Attempt::toString).toList()))
-                            .append(" | ").append(c.certificate().map(f -> "`" + f.getKey() + "` ").orElse(""))
+                            .append(" | ").append(c.certificate().map(f -> "`" + f.file() + "` ").orElse(""))
                             .append(c.status()).append(" | ").append(String.join(" ", c.core().labels()))
                             .append(" |\n");
                 }
@@ -180,7 +241,7 @@ public final class FamilyExploration {
         /** The report as JSON. */
         public Json.Obj toJson() {
             List<Json> ms = new ArrayList<>();
-            for (Member m : members) {
+            for (MemberFindings m : members) {
                 List<Json> classes = new ArrayList<>();
                 for (CoreClass c : m.classes()) {
                     classes.add(Json.Obj.builder()
@@ -190,8 +251,8 @@ public final class FamilyExploration {
                             .put("labels", Json.Arr.ofStrings(c.core().labels()))
                             .put("frequency", c.attempts().size())
                             .put("runs", new Json.Arr(c.attempts().stream().map(Attempt::toJson).toList()))
-                            .put("certificate", c.certificate().<Json>map(f -> new Json.Str(f.getKey())).orElse(Json.NULL))
-                            .put("sha256", c.certificate().<Json>map(f -> new Json.Str(f.getValue().sha256()))
+                            .put("certificate", c.certificate().<Json>map(f -> new Json.Str(f.file())).orElse(Json.NULL))
+                            .put("sha256", c.certificate().<Json>map(f -> new Json.Str(f.facts().sha256()))
                                     .orElse(Json.NULL))
                             .put("status", c.status())
                             .build());
@@ -241,7 +302,7 @@ public final class FamilyExploration {
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException when the verifier rejects a certificate just written (a bug)
      */
-    public Report run(int from, int to) throws IOException {
+    public Findings run(int from, int to) throws IOException {
         if (from > to) {
             throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
         }
@@ -254,11 +315,11 @@ public final class FamilyExploration {
             kept.add(keptLabels(m, n));
         }
         Files.createDirectories(dir);
-        List<Member> members = new ArrayList<>();
+        List<MemberFindings> members = new ArrayList<>();
         for (int k = 0; k < built.size(); k++) {
             members.add(explore(built.get(k), kept.get(k)));
         }
-        Report report = new Report(family, settings, members);
+        Findings report = new Findings(family, settings, members);
         AtomicFiles.writeString(dir.resolve(EXPLORE_MD), report.toMarkdown());
         AtomicFiles.writeJson(dir.resolve(EXPLORE_JSON), report.toJson());
         return report;
@@ -283,7 +344,7 @@ public final class FamilyExploration {
         return labels;
     }
 
-    private Member explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
+    private MemberFindings explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
         int n = m.construction().n();
         List<MinimalCore> representatives = new ArrayList<>();
         List<MatroidShape> shapes = new ArrayList<>();
@@ -293,19 +354,19 @@ public final class FamilyExploration {
             Attempt attempt = new Attempt(settings.seed(j), Settings.strategy(j));
             listener.stage(n, "run " + (j + 1) + " of " + settings.runs() + " (seed " + attempt + ")");
             SearchResult result = new UnsatCoreSearch(new SearchSettings(attempt.seed(), attempt.strategy(),
-                    settings.budget(), m.construction().hyperplaneVertices()), Progress.SILENT).reduce(m.matroid());
+                    settings.budget(), m.construction().focus()), Progress.SILENT).reduce(m.matroid());
             if (result instanceof SearchResult.Orientable) {
-                rejected.add(new Rejected(attempt, "orientable"));
+                rejected.add(new Rejected.Orientable(attempt));
                 continue;
             }
             if (result instanceof SearchResult.Unknown u) {
-                rejected.add(new Rejected(attempt, "unknown: " + u.reason()));
+                rejected.add(new Rejected.Unknown(attempt, u.reason()));
                 continue;
             }
             MinimalCore core = ((SearchResult.Found) result).core();
             String filter = filter(core.core(), kept);
             if (filter != null) {
-                rejected.add(new Rejected(attempt, "filtered: " + filter));
+                rejected.add(new Rejected.Filtered(attempt, filter));
                 continue;
             }
             int cls = classOf(core.core(), representatives, shapes);
@@ -321,16 +382,14 @@ public final class FamilyExploration {
         for (int c = 0; c < representatives.size(); c++) {
             String name = certificateName(n, c + 1);
             listener.stage(n, "certifying and verifying class " + (c + 1));
-            MemberCertifier.Outcome outcome = MemberCertifier.certify(representatives.get(c), m.construction(),
-                    settings.budget(), dir.resolve(name));
-            classes.add(outcome instanceof MemberCertifier.Written w
-                    ? new CoreClass(representatives.get(c).core(), attempts.get(c), Optional.of(Map.entry(name,
-                            w.facts())), w.verification().text())
-                    : new CoreClass(representatives.get(c).core(), attempts.get(c), Optional.empty(),
-                            "unknown: proving the core ran out of budget: "
-                                    + ((MemberCertifier.OutOfBudget) outcome).reason()));
+            MinimalCore representative = representatives.get(c);
+            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(representative,
+                    new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name));
+            classes.add(new CoreClass(representative.core(), attempts.get(c),
+                    outcome instanceof CertifiedReduction.Unknown u ? new ClassCertificate.Unknown(u.reason())
+                            : new ClassCertificate.Verified(name, CertificateFacts.read(dir.resolve(name)))));
         }
-        return new Member(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
+        return new MemberFindings(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
     }
 
     /** Why {@code core} is not accepted, or null when it is. */

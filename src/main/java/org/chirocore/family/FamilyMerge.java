@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -96,7 +97,7 @@ public final class FamilyMerge {
         int elements = pulled.requireInt("elements");
         int rank = pulled.requireInt("rank");
         if (!row.has("certificate")) {
-            return new MemberResult.NoCore(n, elements, rank, row.requireString("status"));
+            return MemberResult.withoutCore(n, elements, rank, row.requireString("status"));
         }
         String name = FamilyRun.certificateName(n);
         Path source = shard.resolve(name);
@@ -114,12 +115,11 @@ public final class FamilyMerge {
         }
         CertificateFacts facts = CertificateFacts.read(target);
         if (!facts.construction().equals(CertificateWriter.construction(family.construction(n)))
-                || facts.seed() != seed || !facts.strategy().equals(strategy.id())) {
+                || !facts.search().equals(Optional.of(new CertificateFacts.Search(seed, strategy.id())))) {
             throw new FamilyException(source + ": the certificate of n = " + n + " records another construction, "
                     + "seed or strategy than " + family.source() + " with seed " + seed + " and " + strategy.id() + ".");
         }
-        return new MemberResult.Certified(n, elements, rank, name, Verification.of(report), true, facts,
-                report.millis());
+        return new MemberResult.Certified(n, elements, rank, name, true, facts, report.millis());
     }
 
     private static boolean sameContent(MemberResult a, MemberResult b) {

@@ -10,6 +10,10 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
 
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Discovery;
+import org.chirocore.cert.Provenance;
+import org.chirocore.cert.Source;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -17,17 +21,14 @@ import org.chirocore.matroid.Minor;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.Orientability;
-import org.chirocore.search.MinimalCore;
-import org.chirocore.search.MinimalityProof;
-import org.chirocore.search.SearchSettings;
-import org.chirocore.search.SearchStats;
-import org.chirocore.search.Strategy;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.search.MinimalityDecider;
 
 /**
  * Checks a predicted core of each member of a family without searching: the prediction names,
  * per n, the core's vertices S(n) and a contraction set C(n) (file format in docs/families.md);
  * the candidate is M/C restricted to S, where M is the member. It is decided non-orientable, then
- * checked minor-minimal directly by {@link MinimalityProof} (every single-element deletion and
+ * checked minor-minimal directly by {@link MinimalityDecider} (every single-element deletion and
  * contraction orientable, with witnesses), and only then certified into
  * {@code n=K.predicted.cert.json} and verified. Cost per n: building M/C on S (|S| rank
  * queries of M per r-subset), one orientability decision, up to 2|S| more, and the certification.
@@ -214,6 +215,7 @@ public final class FamilyPrediction {
         used.addAll(contract);
         List<String> deleted = m.labels().stream().filter(l -> !used.contains(l)).toList();
         ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, indices(m, contract), indices(m, deleted)));
+        long start = System.nanoTime();
         Orientability answer = new LazySatDecider(budget).decide(minor);
         if (answer instanceof Orientability.Unknown u) {
             return new Unknown(n, u.reason());
@@ -221,29 +223,27 @@ public final class FamilyPrediction {
         if (answer instanceof Orientability.Orientable) {
             return new Refuted(n, "the predicted minor is orientable");
         }
-        MinimalityProof.Result proof = MinimalityProof.check(minor, budget);
-        if (proof instanceof MinimalityProof.Unknown u) {
+        MinimalityDecider.Result proof = MinimalityDecider.decide(minor, budget);
+        if (proof instanceof MinimalityDecider.Unknown u) {
             return new Unknown(n, u.reason());
         }
-        if (proof instanceof MinimalityProof.NonOrientableDeletion d) {
+        if (proof instanceof MinimalityDecider.NonOrientableDeletion d) {
             return new Refuted(n, "not minimal: deleting " + minor.labels().get(d.element()) + " leaves a "
                     + "non-orientable minor");
         }
-        if (proof instanceof MinimalityProof.NonOrientableContraction c) {
+        if (proof instanceof MinimalityDecider.NonOrientableContraction c) {
             return new Refuted(n, "not minimal: contracting " + minor.labels().get(c.element()) + " leaves a "
                     + "non-orientable minor");
         }
-        // the minimality check's order is the element order, contractions first; seed 0 stands for it
-        MinimalCore found = new MinimalCore(minor, contract, deleted, ((MinimalityProof.Minimal) proof).witnesses(),
-                new SearchSettings(0, Strategy.CONTRACT_FIRST, budget), new SearchStats(1 + 2 * minor.size(),
-                        minor.size(), 0));
+        CoreFinding found = new CoreFinding(minor, new Provenance(new Source.Constructed(member.construction()),
+                contract, deleted), ((MinimalityDecider.Minimal) proof).witnesses(),
+                new Discovery.Predicted(1 + 2 * minor.size(), (System.nanoTime() - start) / 1_000_000));
         String name = certificateName(n);
-        MemberCertifier.Outcome written = MemberCertifier.certify(found, member.construction(), budget,
-                dir.resolve(name));
-        if (written instanceof MemberCertifier.OutOfBudget o) {
-            return new Unknown(n, "proving the core ran out of budget: " + o.reason());
+        CertifiedReduction.Outcome written = CertifiedReduction.certify(found, budget, dir.resolve(name));
+        if (written instanceof CertifiedReduction.Unknown u) {
+            return new Unknown(n, u.reason());
         }
-        return new Confirmed(n, name, ((MemberCertifier.Written) written).facts());
+        return new Confirmed(n, name, CertificateFacts.read(dir.resolve(name)));
     }
 
     /** The labels of {@code rules} at n, each an element of {@code m}, none twice, none in {@code kept}. */

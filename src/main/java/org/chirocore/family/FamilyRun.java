@@ -15,11 +15,9 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
 import org.chirocore.orient.Budget;
+import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.Progress;
-import org.chirocore.search.SearchResult;
-import org.chirocore.search.SearchSettings;
 import org.chirocore.search.Strategy;
-import org.chirocore.search.UnsatCoreSearch;
 
 /**
  * Runs a family over a range of n: for each n, builds the member (checking that H is a
@@ -162,33 +160,26 @@ public final class FamilyRun {
                 return reused.get();
             }
         }
-        listener.stage(n, "reducing");
-        SearchSettings search = new SearchSettings(settings.seed(), settings.strategy(), settings.budget(),
-                m.construction().hyperplaneVertices());
-        SearchResult result = new UnsatCoreSearch(search, Progress.SILENT).reduce(m.matroid());
-        if (result instanceof SearchResult.Orientable) {
-            return noCore(n, elements, rank, file, "orientable");
+        listener.stage(n, "reducing, certifying and verifying");
+        CertifiedReduction.Outcome outcome = new CertifiedReduction(new CertifiedReduction.Settings(settings.seed(),
+                settings.strategy(), settings.budget()), Progress.SILENT).run(m.subject(), file);
+        if (outcome instanceof CertifiedReduction.Orientable) {
+            return noCore(file, new MemberResult.Orientable(n, elements, rank));
         }
-        if (result instanceof SearchResult.Unknown u) {
-            return noCore(n, elements, rank, file, "unknown: " + u.reason());
+        if (outcome instanceof CertifiedReduction.Unknown u) {
+            return noCore(file, new MemberResult.Unknown(n, elements, rank, u.reason()));
         }
-        listener.stage(n, "certifying and verifying");
-        MemberCertifier.Outcome outcome = MemberCertifier.certify(((SearchResult.Found) result).core(),
-                m.construction(), settings.budget(), file);
-        if (outcome instanceof MemberCertifier.OutOfBudget o) {
-            return noCore(n, elements, rank, file, "unknown: proving the core ran out of budget: " + o.reason());
-        }
-        MemberCertifier.Written w = (MemberCertifier.Written) outcome;
-        listener.stage(n, w.verification().text());
-        return new MemberResult.Certified(n, elements, rank, file.getFileName().toString(), w.verification(), false,
-                w.facts(), w.verifyMillis());
+        CertifiedReduction.Verified v = (CertifiedReduction.Verified) outcome;
+        MemberResult.Certified certified = new MemberResult.Certified(n, elements, rank,
+                file.getFileName().toString(), false, CertificateFacts.read(file), v.verification().verifyMillis());
+        listener.stage(n, certified.status());
+        return certified;
     }
 
     /** The existing certificate as this run's result, when it verifies and matches the member. */
     private Optional<MemberResult> reuse(FamilyDefinition.Member m, Path file) throws IOException {
         Report report = CertificateVerifier.verify(file);
-        Verification verification = Verification.of(report);
-        if (verification == Verification.FAILED) {
+        if (!report.passed()) {
             return Optional.empty();
         }
         CertificateFacts facts;
@@ -199,17 +190,18 @@ public final class FamilyRun {
             return Optional.empty();
         }
         boolean same = facts.construction().equals(CertificateWriter.construction(m.construction()))
-                && facts.seed() == settings.seed() && facts.strategy().equals(settings.strategy().id());
+                && facts.search().equals(Optional.of(new CertificateFacts.Search(settings.seed(),
+                        settings.strategy().id())));
         return same ? Optional.of(new MemberResult.Certified(m.construction().n(), m.matroid().size(),
-                m.matroid().rank(), file.getFileName().toString(), verification, true, facts, report.millis()))
+                m.matroid().rank(), file.getFileName().toString(), true, facts, report.millis()))
                 : Optional.empty();
     }
 
     /** No core at n; a stale certificate under the member's name is removed so the directory stays truthful. */
-    private MemberResult noCore(int n, int elements, int rank, Path file, String reason) throws IOException {
+    private MemberResult noCore(Path file, MemberResult result) throws IOException {
         Files.deleteIfExists(file);
-        listener.stage(n, reason);
-        return new MemberResult.NoCore(n, elements, rank, reason);
+        listener.stage(result.n(), result.status());
+        return result;
     }
 
     private static RuntimeException rethrow(Throwable cause) throws IOException {

@@ -88,9 +88,9 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
                         .append(" | ").append(f.relations()).append(" | ").append(f.lemmas()).append(" | ")
                         .append(f.dratBytes()).append(" | ").append(f.searchMillis()).append(" | ")
                         .append(f.refutationMillis()).append(" | ").append(c.verifyMillis()).append(" | ")
-                        .append(c.verification().text()).append(" |\n");
+                        .append(c.status()).append(" |\n");
             } else {
-                b.append("– | ".repeat(12)).append(((MemberResult.NoCore) m).reason()).append(" |\n");
+                b.append("– | ".repeat(12)).append(m.status()).append(" |\n");
             }
         }
         for (Row row : rows) {
@@ -98,11 +98,11 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
             if (row.member() instanceof MemberResult.Certified c) {
                 CoreDescription d = row.description().orElseThrow();
                 b.append("- certificate: `").append(c.certificate()).append("` (sha256 ").append(c.facts().sha256())
-                        .append("), ").append(c.verification().text()).append("\n");
+                        .append("), ").append(c.status()).append("\n");
                 b.append("- core vertices by weight: ").append(d.verticesText()).append("\n");
                 b.append("- non-bases by weights: ").append(d.nonBasesText()).append("\n");
             } else {
-                b.append("- no core: ").append(((MemberResult.NoCore) row.member()).reason()).append("\n");
+                b.append("- no core: ").append(row.member().status()).append("\n");
             }
         }
         return b.toString();
@@ -119,7 +119,7 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
             if (m instanceof MemberResult.Certified c) {
                 ExplicitMatroid core = c.facts().core();
                 CertificateFacts f = c.facts();
-                b.put("status", c.verification().text())
+                b.put("status", c.status())
                         .put("certificate", c.certificate())
                         .put("sha256", f.sha256())
                         .put("reused", c.reused())
@@ -144,7 +144,7 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
                                 .put("verify", c.verifyMillis())
                                 .build());
             } else {
-                b.put("status", ((MemberResult.NoCore) m).reason());
+                b.put("status", m.status());
             }
             members.add(b.build());
         }

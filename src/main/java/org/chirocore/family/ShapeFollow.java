@@ -88,10 +88,10 @@ public final class ShapeFollow {
     }
 
     /** The followed shape over the exploration's members, in increasing n. */
-    public static List<Row> follow(FamilyExploration.Report report, Shape shape) {
+    public static List<Row> follow(FamilyExploration.Findings report, Shape shape) {
         List<Row> rows = new ArrayList<>();
         Optional<ExplicitMatroid> previous = Optional.empty();
-        for (FamilyExploration.Member m : report.members()) {
+        for (FamilyExploration.MemberFindings m : report.members()) {
             Optional<FamilyExploration.CoreClass> chosen = Optional.empty();
             for (FamilyExploration.CoreClass c : m.classes()) {
                 if (shape.fits(c.core(), m.n())
@@ -118,7 +118,7 @@ public final class ShapeFollow {
         for (Row r : rows) {
             String core = r.chosen().map(c -> "rank " + c.core().rank() + " on " + c.core().size() + " elements, "
                     + c.core().basisCount() + " bases").orElse("no core of this shape among " + r.runs() + " runs");
-            String certificate = r.chosen().flatMap(FamilyExploration.CoreClass::certificate).map(e -> e.getKey())
+            String certificate = r.chosen().flatMap(FamilyExploration.CoreClass::certificate).map(FamilyExploration.ClassCertificate.Verified::file)
                     .orElse("–");
             String iso = r.isomorphicToPrevious().map(b -> b ? "yes" : "no").orElse("–");
             md.append("| ").append(r.n()).append(" | ").append(core).append(" | ").append(r.frequency()).append(" of ")

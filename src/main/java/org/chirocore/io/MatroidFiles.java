@@ -3,12 +3,9 @@ package org.chirocore.io;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -79,16 +76,7 @@ public final class MatroidFiles {
         } catch (JsonFormatException e) {
             throw notJson(file.toString(), e);
         }
-        return new Hashed(fromJson(json, file.toString()), sha256(bytes));
-    }
-
-    private static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            // Every Java platform must provide SHA-256 (MessageDigest's specification).
-            throw new IllegalStateException(e);
-        }
+        return new Hashed(fromJson(json, file.toString()), Sha256.hex(bytes));
     }
 
     /**

@@ -5,8 +5,11 @@ import java.util.List;
 
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.Matroid;
+import org.chirocore.matroid.MatrixMatroid;
+import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.Orientability;
+import org.chirocore.orient.Realised;
 import org.chirocore.orient.SolveStats;
 
 /**
@@ -51,6 +54,55 @@ public final class ResultJson {
             b.put("reason", u.reason());
         }
         return b.build();
+    }
+
+    /**
+     * The verdict on {@code m} decided from a realisation over Q: {@code verdict} "orientable",
+     * {@code elements}, {@code rank}, {@code bases}, {@code stats} (no relations, clauses, rounds
+     * or conflicts: no solver ran), and {@code realisation}, the matrix object of the matroid file
+     * format with exactly {@code rank} rows.
+     */
+    public static Json.Obj realised(Matroid m, Realised result) {
+        Json.Obj matrix = MatroidFiles.toJson(result.witness().matrix());
+        return Json.Obj.builder()
+                .put("verdict", "orientable")
+                .put("elements", m.size())
+                .put("rank", m.rank())
+                .put("bases", result.bases())
+                .put("stats", Json.Obj.builder()
+                        .put("relations", 0)
+                        .put("clauses", 0)
+                        .put("rounds", 0)
+                        .put("conflicts", 0)
+                        .put("millis", result.millis())
+                        .build())
+                .put("realisation", matrix.require("matrix"))
+                .build();
+    }
+
+    /**
+     * A realisation witness file: a matroid file ({@code rank}, {@code labels}, {@code matrix})
+     * whose matrix is over Q with exactly {@code rank} rows, so that its maximal minors are the
+     * determinants of the r-subsets of columns.
+     */
+    public static Json.Obj realisation(Realisation r) {
+        return MatroidFiles.toJson(r.matrix());
+    }
+
+    /**
+     * Reads the form written by {@link #realisation}. Checks the shape (a matrix over Q with as
+     * many rows as its rank); whether it realises a given matroid is {@code RealisationCheck}'s
+     * question.
+     *
+     * @throws MatroidFileException naming {@code source} and the offending field
+     */
+    public static Realisation readRealisation(Json json, String source) throws MatroidFileException {
+        Matroid m = MatroidFiles.fromJson(json, source);
+        if (!(m instanceof MatrixMatroid matrix) || !matrix.field().isRational() || matrix.rows() != matrix.rank()) {
+            throw new MatroidFileException(source, "a realisation needs a \"matrix\" over Q with exactly \"rank\" ("
+                    + m.rank() + ") rows", null);
+        }
+        return Realisation.of(matrix).orElseThrow();
     }
 
     /** The chirotope as {@code labels}, {@code rank}, {@code bases} (canonical order) and {@code signs}. */

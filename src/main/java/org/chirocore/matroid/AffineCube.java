@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collection;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * The affine n-cube over a field: the vector matroid on the 2^n vertices v of {0,1}^n, vertex v
@@ -23,14 +25,12 @@ public final class AffineCube implements Matroid {
     /** Largest supported dimension (2^16 elements). */
     public static final int MAX_DIMENSION = 16;
 
+    private static final Map<List<Object>, AffineCube> CACHE = new ConcurrentHashMap<>();
+
     private final int dimension;
     private final MatrixMatroid matrix;
 
     private AffineCube(int dimension, Field field) {
-        if (dimension < 1 || dimension > MAX_DIMENSION) {
-            throw new IllegalArgumentException("The cube dimension must be between 1 and " + MAX_DIMENSION
-                    + ", not " + dimension + ".");
-        }
         this.dimension = dimension;
         int size = 1 << dimension;
         List<long[]> columns = new ArrayList<>(size);
@@ -48,17 +48,27 @@ public final class AffineCube implements Matroid {
     }
 
     /**
-     * The affine n-cube over {@code field}.
+     * The affine n-cube over {@code field}, built once per (n, field) and shared: building the
+     * 16-cube's matrix is the expensive part of every construction on it, and the cube is
+     * immutable. The cache holds at most one cube per dimension and field asked for.
      *
      * @throws IllegalArgumentException when n is not between 1 and {@link #MAX_DIMENSION}
      */
     public static AffineCube of(int n, Field field) {
-        return new AffineCube(n, field);
+        requireDimension(n);
+        return CACHE.computeIfAbsent(List.of(n, field), k -> new AffineCube(n, field));
     }
 
-    /** The real affine n-cube (over Q). */
+    private static void requireDimension(int n) {
+        if (n < 1 || n > MAX_DIMENSION) {
+            throw new IllegalArgumentException("The cube dimension must be between 1 and " + MAX_DIMENSION
+                    + ", not " + n + ".");
+        }
+    }
+
+    /** The real affine n-cube (over Q), as {@link #of}. */
     public static AffineCube real(int n) {
-        return new AffineCube(n, Field.RATIONALS);
+        return of(n, Field.RATIONALS);
     }
 
     /** The dimension n; the matroid has 2^n elements and rank n + 1. */

@@ -7,12 +7,14 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * The construction of math-notes §3 as data: the affine n-cube over a field, a hyperplane H of
- * it, and a vertex O outside H pulled to H; optionally O is then contracted. {@link #build()}
- * validates every part and returns the resulting matroid as a rank oracle.
+ * The pulled-cube construction as data: the affine n-cube over a field, a hyperplane H of it,
+ * and a vertex O outside H pulled to H; optionally O is then contracted. {@link #build()}
+ * validates every part and returns the resulting matroid as a rank oracle; the focus is H's
+ * vertices, where the obstruction sits.
  *
  * <p>Building costs resolving H (2^n rank queries) plus the general-position check of
- * {@link PulledMatroid#pull}. Immutable.
+ * {@link PulledMatroid#pull}; the cube itself is built once per (n, field) and shared
+ * ({@link AffineCube#of}). Immutable.
  *
  * @param n the cube dimension, 1..{@link AffineCube#MAX_DIMENSION}
  * @param field the field of the cube's representation
@@ -21,7 +23,7 @@ import java.util.Optional;
  * @param contractPulled whether O is contracted after pulling
  */
 public record CubeConstruction(int n, Field field, HyperplaneSpec hyperplane, String pulledVertex,
-        boolean contractPulled) {
+        boolean contractPulled) implements Construction {
     public CubeConstruction {
         Objects.requireNonNull(field, "A cube construction needs a field.");
         Objects.requireNonNull(hyperplane, "A cube construction needs a hyperplane.");
@@ -63,6 +65,7 @@ public record CubeConstruction(int n, Field field, HyperplaneSpec hyperplane, St
      * @throws GeneralPositionException when (H, O) are not in general position, naming the
      *     hyperline and the extra point of its closure
      */
+    @Override
     public Matroid build() {
         AffineCube cube = cube();
         int[] h = hyperplane.resolve(cube);
@@ -79,6 +82,22 @@ public record CubeConstruction(int n, Field field, HyperplaneSpec hyperplane, St
     public List<String> hyperplaneVertices() {
         AffineCube cube = cube();
         return labels(cube, hyperplane.vertices(cube));
+    }
+
+    /** H's vertices: contracting them first reaches the obstruction of a large pulled cube. */
+    @Override
+    public List<String> focus() {
+        return hyperplaneVertices();
+    }
+
+    /**
+     * The cube dimension, the field's name, H's vertices, O's label and whether O is contracted,
+     * as {@code cube}, {@code field}, {@code hyperplane}, {@code pulled}, {@code contractPulled}.
+     */
+    @Override
+    public List<Part> provenance() {
+        return List.of(new Part("cube", n), new Part("field", field.name()), new Part("hyperplane", hyperplaneVertices()),
+                new Part("pulled", pulledVertex), new Part("contractPulled", contractPulled));
     }
 
     /**

@@ -179,7 +179,7 @@ public final class MatrixMatroid implements Matroid {
     }
 
     /** Bareiss determinant with row swaps tracked; exact division at every step. */
-    private static BigInteger bareissDeterminant(BigInteger[][] a) {
+    static BigInteger bareissDeterminant(BigInteger[][] a) {
         int n = a.length;
         BigInteger prev = BigInteger.ONE;
         int sign = 1;

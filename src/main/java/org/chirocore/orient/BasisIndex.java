@@ -32,7 +32,7 @@ public final class BasisIndex {
         this.rank = m.rank();
         long subsets = ElementSets.binomial(size, rank);
         if (size > 64 || subsets > MAX_SUBSETS) {
-            throw new IllegalArgumentException("A matroid of rank " + rank + " on " + size + " elements has "
+            throw new EnumerationLimitException("A matroid of rank " + rank + " on " + size + " elements has "
                     + (subsets == Long.MAX_VALUE ? "too many" : Long.toString(subsets)) + " candidate bases; at most "
                     + MAX_SUBSETS + " on at most 64 elements are enumerated. Reduce it to a smaller minor first.");
         }
@@ -58,7 +58,7 @@ public final class BasisIndex {
     /**
      * Enumerates the bases of {@code m}.
      *
-     * @throws IllegalArgumentException when {@code m} has more than 64 elements or more than
+     * @throws EnumerationLimitException when {@code m} has more than 64 elements or more than
      *     {@link #MAX_SUBSETS} candidate subsets
      */
     public static BasisIndex of(Matroid m) {

@@ -1,6 +1,7 @@
 package org.chirocore.orient;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 import org.chirocore.matroid.ElementSets;
@@ -16,6 +17,8 @@ final class RelationScan {
     private final BasisIndex index;
     private final int rank;
     private int[][] table = new int[0][0];
+    /** variables[i][j]: the variable of X ∪ {rest[i], rest[j]}, 0 when it is not a basis. */
+    private int[][] variables = new int[0][0];
     private int[] rest = new int[0];
     private int[] parity = new int[0];
     private int[] keep = new int[0];
@@ -41,12 +44,7 @@ final class RelationScan {
         if (k < 0 || n < rank + 2) {
             return out;
         }
-        if (table.length < n) {
-            table = new int[n][n];
-            rest = new int[n];
-            parity = new int[n];
-            keep = new int[n];
-        }
+        ensureTables(n);
         int[] comb = ElementSets.range(k);
         do {
             long x = 0;
@@ -62,6 +60,85 @@ final class RelationScan {
             }
         } while (ElementSets.nextCombination(comb, n));
         return out;
+    }
+
+    private void ensureTables(int n) {
+        if (table.length < n) {
+            table = new int[n][n];
+            variables = new int[n][n];
+            rest = new int[n];
+            parity = new int[n];
+            keep = new int[n];
+        }
+    }
+
+    /**
+     * Counts, over every relation of the whole matroid with a non-zero term, for each variable
+     * the relations whose non-zero terms use its basis ({@code involved}) and how many of those
+     * {@code signs} violates ({@code violated}); both arrays are indexed v − 1 and overwritten.
+     * Costs one full scan.
+     *
+     * @return the number of violated relations
+     */
+    long tally(byte[] signs, int[] involved, int[] violated) {
+        Arrays.fill(involved, 0);
+        Arrays.fill(violated, 0);
+        int[] elements = ElementSets.range(index.size());
+        int n = elements.length;
+        int k = rank - 2;
+        if (k < 0 || n < rank + 2) {
+            return 0;
+        }
+        ensureTables(n);
+        long total = 0;
+        int[] comb = ElementSets.range(k);
+        do {
+            int m = tabulate(signs, ElementSets.mask(comb), elements);
+            total += tallyX(m, involved, violated);
+        } while (ElementSets.nextCombination(comb, n));
+        return total;
+    }
+
+    private long tallyX(int m, int[] involved, int[] violated) {
+        int[][] t = table;
+        int[][] w = variables;
+        long total = 0;
+        for (int a = 0; a < m; a++) {
+            for (int b = a + 1; b < m; b++) {
+                for (int c = b + 1; c < m; c++) {
+                    for (int d = c + 1; d < m; d++) {
+                        int t1 = t[a][b] * t[c][d];
+                        int t2 = -t[a][c] * t[b][d];
+                        int t3 = t[a][d] * t[b][c];
+                        if (t1 == 0 && t2 == 0 && t3 == 0) {
+                            continue;
+                        }
+                        int pos = (t1 > 0 ? 1 : 0) + (t2 > 0 ? 1 : 0) + (t3 > 0 ? 1 : 0);
+                        int neg = (t1 < 0 ? 1 : 0) + (t2 < 0 ? 1 : 0) + (t3 < 0 ? 1 : 0);
+                        int bad = (pos == 0) != (neg == 0) ? 1 : 0;
+                        total += bad;
+                        if (t1 != 0) {
+                            count(w[a][b], bad, involved, violated);
+                            count(w[c][d], bad, involved, violated);
+                        }
+                        if (t2 != 0) {
+                            count(w[a][c], bad, involved, violated);
+                            count(w[b][d], bad, involved, violated);
+                        }
+                        if (t3 != 0) {
+                            count(w[a][d], bad, involved, violated);
+                            count(w[b][c], bad, involved, violated);
+                        }
+                    }
+                }
+            }
+        }
+        return total;
+    }
+
+    private static void count(int variable, int bad, int[] involved, int[] violated) {
+        involved[variable - 1]++;
+        violated[variable - 1] += bad;
     }
     /**
      * Fills {@code table[i][j]} = χ(x, rest[i], rest[j]) for the elements outside X that are not
@@ -86,6 +163,8 @@ final class RelationScan {
                 int value = v == 0 ? 0 : ((parity[i] ^ parity[j]) == 0 ? signs[v - 1] : -signs[v - 1]);
                 table[i][j] = value;
                 table[j][i] = -value;
+                variables[i][j] = v;
+                variables[j][i] = v;
             }
         }
         // Drop loops of M/X (all-zero rows): they take part in no non-trivial relation. Rows and
@@ -103,8 +182,11 @@ final class RelationScan {
         for (int i = 0; i < kept; i++) {
             int[] from = table[keep[i]];
             int[] to = table[i];
+            int[] fromVariables = variables[keep[i]];
+            int[] toVariables = variables[i];
             for (int j = 0; j < kept; j++) {
                 to[j] = from[keep[j]];
+                toVariables[j] = fromVariables[keep[j]];
             }
             rest[i] = rest[keep[i]];
         }

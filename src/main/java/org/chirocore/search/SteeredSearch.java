@@ -15,6 +15,7 @@ import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Budget;
+import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.OrientationSession;
 import org.chirocore.search.marco.RestrictionExplorer;
 
@@ -25,7 +26,7 @@ import org.chirocore.search.marco.RestrictionExplorer;
  * order), and for each it enumerates the minimal non-orientable restrictions of M/C\A (A the
  * avoided elements) that contain the kept elements ({@link RestrictionExplorer}). Such a
  * restriction N is deletion-minimal; it is a core exactly when every N/e is orientable too
- * ({@link MinimalityProof}). When some N/e is non-orientable the path dead-ends (N is not a core
+ * ({@link MinimalityDecider}). When some N/e is non-orientable the path dead-ends (N is not a core
  * of rank R) and the enumeration goes on: the next restriction, then the next contraction set.
  *
  * <p>Answers: a core (with its witnesses), "none exists" when every contraction set's
@@ -250,11 +251,12 @@ public final class SteeredSearch {
             RestrictionExplorer explorer, Tally tally) {
         ExplicitMatroid core = ExplicitMatroid.of(Minor.restriction(space, ElementSets.elements(set)));
         progress.report("checking a minimal non-orientable restriction", core.size(), core.rank(), tally.decisions);
-        MinimalityProof proof = new MinimalityProof(settings.budget(), Strategy.CONTRACT_FIRST, Progress.SILENT);
-        MinimalityProof.Result result = proof.check(core, new OrientationSession(BasisIndex.of(core), true,
+        MinimalityDecider proof = new MinimalityDecider(new LazySatDecider(settings.budget()), Strategy.CONTRACT_FIRST,
+                Progress.SILENT);
+        MinimalityDecider.Result result = proof.decide(core, new OrientationSession(BasisIndex.of(core), true,
                 settings.budget()), range(core.size()));
         tally.decisions += proof.decisions();
-        if (result instanceof MinimalityProof.Minimal minimal) {
+        if (result instanceof MinimalityDecider.Minimal minimal) {
             List<String> deleted = new ArrayList<>();
             for (String label : input.labels()) {
                 if (!contracted.contains(label) && !core.labels().contains(label)) {
@@ -270,13 +272,13 @@ public final class SteeredSearch {
                     System.currentTimeMillis() - tally.started);
             return new MinimalCore(core, contracted, deleted, minimal.witnesses(), settings, stats);
         }
-        if (result instanceof MinimalityProof.Unknown u) {
+        if (result instanceof MinimalityDecider.Unknown u) {
             tally.incomplete = "deciding the single-element minors of a candidate ran out of budget: " + u.reason();
-        } else if (result instanceof MinimalityProof.NonOrientableDeletion) {
+        } else if (result instanceof MinimalityDecider.NonOrientableDeletion) {
             throw new IllegalStateException("A restriction found minimal non-orientable has a non-orientable deletion.");
         } else {
             tally.deadEnds++;
-            MinimalityProof.NonOrientableContraction c = (MinimalityProof.NonOrientableContraction) result;
+            MinimalityDecider.NonOrientableContraction c = (MinimalityDecider.NonOrientableContraction) result;
             OrientationSession.Outcome o = new OrientationSession(BasisIndex.of(c.minor()), true, settings.budget())
                     .solve(ElementSets.allMask(c.minor().size()));
             tally.decisions++;

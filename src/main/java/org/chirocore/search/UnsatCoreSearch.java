@@ -16,6 +16,7 @@ import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.LazySatDecider;
 import org.chirocore.orient.Orientability;
+import org.chirocore.orient.OrientabilityDecider;
 import org.chirocore.orient.OrientationSession;
 import org.chirocore.orient.WitnessCheck;
 
@@ -40,11 +41,22 @@ public final class UnsatCoreSearch implements CoreSearch {
     public static final long SCAN_LIMIT = 50_000_000;
 
     private final SearchSettings settings;
+    private final OrientabilityDecider decider;
     private final Progress progress;
 
-    public UnsatCoreSearch(SearchSettings settings, Progress progress) {
+    /**
+     * A search with {@code settings} that decides whole matroids with {@code decider} (the
+     * selector sessions of the deletion steps are the search's own), reporting to {@code progress}.
+     */
+    public UnsatCoreSearch(SearchSettings settings, OrientabilityDecider decider, Progress progress) {
         this.settings = settings;
+        this.decider = decider;
         this.progress = progress;
+    }
+
+    /** A search deciding with the lazy SAT decider under the settings' budget. */
+    public UnsatCoreSearch(SearchSettings settings, Progress progress) {
+        this(settings, new LazySatDecider(settings.budget()), progress);
     }
 
     /** Mutable state of one reduction. */
@@ -89,20 +101,20 @@ public final class UnsatCoreSearch implements CoreSearch {
                 current = restrict(current, needed, run);
                 continue;
             }
-            MinimalityProof.Result pass = minimalityPass(current, session, run);
-            if (pass instanceof MinimalityProof.Unknown u) {
+            MinimalityDecider.Result pass = minimalityPass(current, session, run);
+            if (pass instanceof MinimalityDecider.Unknown u) {
                 return new SearchResult.Unknown(u.reason());
             }
-            if (pass instanceof MinimalityProof.NonOrientableDeletion d) {
+            if (pass instanceof MinimalityDecider.NonOrientableDeletion d) {
                 current = restrict(current, d.needed(), run);
                 continue;
             }
-            if (pass instanceof MinimalityProof.NonOrientableContraction c) {
+            if (pass instanceof MinimalityDecider.NonOrientableContraction c) {
                 run.contracted.add(current.labels().get(c.element()));
                 current = c.minor();
                 continue;
             }
-            List<MinorWitness> witnesses = ((MinimalityProof.Minimal) pass).witnesses();
+            List<MinorWitness> witnesses = ((MinimalityDecider.Minimal) pass).witnesses();
             checkPath(input, current, run);
             SearchStats stats = new SearchStats(run.decisions, run.grownTo, System.currentTimeMillis() - run.started);
             return new SearchResult.Found(new MinimalCore(current, run.contracted, run.deleted, witnesses, settings, stats));
@@ -177,7 +189,7 @@ public final class UnsatCoreSearch implements CoreSearch {
         ExplicitMatroid found;
         if (enumerable(candidate)) {
             ExplicitMatroid explicit = ExplicitMatroid.of(candidate);
-            Orientability answer = new LazySatDecider(settings.budget()).decide(explicit);
+            Orientability answer = decider.decide(explicit);
             run.decisions++;
             found = answer instanceof Orientability.NonOrientable ? explicit : null;
         } else {
@@ -213,17 +225,16 @@ public final class UnsatCoreSearch implements CoreSearch {
         return next;
     }
 
-    /** One {@link MinimalityProof} over the elements of {@code m} in a seeded order. */
     /** One pass over the single-element minors of {@code m} in a seeded order: it shrinks m or proves it minimal. */
-    private MinimalityProof.Result minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
+    private MinimalityDecider.Result minimalityPass(ExplicitMatroid m, OrientationSession session, Run run) {
         List<Integer> order = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
         }
         Collections.shuffle(order, run.random);
-        MinimalityProof proof = new MinimalityProof(settings.budget(), settings.strategy(), progress);
-        MinimalityProof.Result result = proof.check(m, session, order);
-        run.decisions += proof.decisions();
+        MinimalityDecider minimality = new MinimalityDecider(decider, settings.strategy(), progress);
+        MinimalityDecider.Result result = minimality.decide(m, session, order);
+        run.decisions += minimality.decisions();
         return result;
     }
 

@@ -39,6 +39,16 @@ class DependencyRulesTest {
         "report, org.sat4j", "report, org.chirocore.cli", "report, org.chirocore.matroid", "report, org.chirocore.orient",
         "report, org.chirocore.search", "report, org.chirocore.cert", "report, org.chirocore.family",
         "check, org.chirocore.report", "family, org.chirocore.report",
+        "sweep, org.sat4j", "sweep, org.chirocore.cli", "sweep, org.chirocore.report", "sweep, org.chirocore.proof",
+        "matroid, org.chirocore.sweep", "orient, org.chirocore.sweep", "search, org.chirocore.sweep",
+        "io, org.chirocore.sweep", "cert, org.chirocore.sweep", "check, org.chirocore.sweep",
+        "family, org.chirocore.sweep", "pipeline, org.chirocore.sweep", "report, org.chirocore.sweep", "proof, org.chirocore.sweep",
+        "pipeline, org.sat4j", "pipeline, org.chirocore.cli", "pipeline, org.chirocore.family",
+        "pipeline, org.chirocore.report", "pipeline, org.chirocore.proof",
+        "matroid, org.chirocore.pipeline", "orient, org.chirocore.pipeline", "search, org.chirocore.pipeline",
+        "io, org.chirocore.pipeline", "cert, org.chirocore.pipeline", "check, org.chirocore.pipeline",
+        "report, org.chirocore.pipeline",
+        "family, org.chirocore.cert.Certification", "sweep, org.chirocore.cert.Certification", "cli, org.chirocore.cert.Certification",
     })
     void packageDoesNotImport(String pkg, String forbidden) throws IOException {
         assertEquals(List.of(), importsOf(pkg, forbidden));

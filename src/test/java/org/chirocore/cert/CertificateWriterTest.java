@@ -16,6 +16,7 @@ import java.util.stream.Stream;
 
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.io.Json;
+import org.chirocore.io.Sha256;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.Matroid;
@@ -178,7 +179,7 @@ class CertificateWriterTest {
         assertEquals(List.of("normalised", "relations", "dratFile", "dratSha256"),
                 List.copyOf(proof.members().keySet()));
         assertEquals("fano.drat.gz", proof.requireString("dratFile"));
-        assertEquals(CertificateWriter.sha256(c.refutation().drat().getBytes(StandardCharsets.US_ASCII)),
+        assertEquals(Sha256.hex(c.refutation().drat().getBytes(StandardCharsets.US_ASCII)),
                 proof.requireString("dratSha256"));
         // export decompresses it and checks its digest
         Path out = Files.createDirectory(dir.resolve("out"));

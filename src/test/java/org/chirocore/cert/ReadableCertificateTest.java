@@ -81,7 +81,7 @@ class ReadableCertificateTest {
         Forced step = forced.get(0);
         forced.set(0, new Forced(step.relation(), step.variable(), -step.sign()));
         ReadableProof tampered = new ReadableProof(proof.normalised(), new Branch(forced, proof.root().ending()));
-        Json.Obj document = CertificateExport.readChecked(FANO);
+        Json.Obj document = CertificateReader.readChecked(FANO);
         Report report = verify(ReadableCertificate.variant(document, tampered));
         assertFalse(report.passed());
         assertEquals(Report.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());

@@ -77,6 +77,24 @@ class CubeAndBenchCommandTest {
         assertTrue(lines[1].matches(" 3\\s+7\\s+3\\s+\\d+\\s+\\d+\\s+7\\s+3\\s+28\\s+\\d+"), lines[1]);
     }
 
+    /**
+     * The orientable table: the real cubes are realisable, hence orientable (Björner et al.,
+     * <i>Oriented Matroids</i>, 2nd ed., §3.5, from memory), and so is the Vámos matroid (ibid.,
+     * non-realisable but orientable); the searched 5-cube may run out of its one second, and is
+     * then unknown, never non-orientable.
+     */
+    @Test
+    void benchOrientablePrintsTheOrientableInstances() {
+        CliRun run = CliRun.of("bench", "--orientable", "--time-limit", "1");
+        assertEquals(0, run.exit(), run.err());
+        String[] lines = run.out().split("\n");
+        assertEquals(5, lines.length, run.out());
+        assertTrue(lines[1].matches("real 4-cube\\s+16\\s+5\\s+realisation\\s+orientable\\s+\\d+\\s+0\\s+\\d+"), lines[1]);
+        assertTrue(lines[2].matches("real 5-cube\\s+32\\s+6\\s+realisation\\s+orientable\\s+\\d+\\s+0\\s+\\d+"), lines[2]);
+        assertTrue(lines[3].matches("Vamos V8\\s+8\\s+4\\s+search\\s+orientable\\s+65\\s+.*"), lines[3]);
+        assertTrue(lines[4].matches("real 5-cube\\s+32\\s+6\\s+search\\s+(orientable|unknown)\\s+.*"), lines[4]);
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"", "orient", "reduce", "cube", "bench"})
     void helpAndVersionWorkOnEveryCommand(String command) {

@@ -17,11 +17,11 @@ class FamilyCommandTest {
     @Test
     void runsAFamilyAndWritesTheTable() {
         Path out = dir.resolve("corner");
-        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3..4", "--out", out.toString());
+        CliRun run = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.out().contains("n = 3: core rank 3 on 7 elements, 28 bases; verified"), run.out());
         assertTrue(Files.exists(out.resolve("table.md")) && Files.exists(out.resolve("n=4.cert.json")));
-        CliRun again = CliRun.of("family", "families/corner.json", "--n", "3..4", "--out", out.toString());
+        CliRun again = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--out", out.toString());
         assertTrue(again.out().contains("verified (reused)"), again.out());
     }
 
@@ -30,51 +30,54 @@ class FamilyCommandTest {
         Path f = dir.resolve("w3.json");
         Files.writeString(f, "{\"name\": \"w3\", \"description\": \"d\", \"field\": \"Q\", \"hyperplane\": "
                 + "{\"vertices\": \"weight 3\"}, \"pulled\": \"all zeros\", \"contractPulled\": true, \"range\": [3, 5]}");
-        CliRun run = CliRun.of("family", f.toString(), "--n", "3..5", "--out", dir.resolve("o").toString());
+        CliRun run = CliRun.of("family", "run", f.toString(), "--n", "3..5", "--out", dir.resolve("o").toString());
         assertEquals(2, run.exit());
         assertTrue(run.err().contains(f + ": hyperplane at n = 3: "), run.err());
     }
 
     @Test
     void aBadRangeIsBadUsage() {
-        CliRun run = CliRun.of("family", "families/corner.json", "--n", "5..3", "--out", dir.toString());
+        CliRun run = CliRun.of("family", "run", "families/corner.json", "--n", "5..3", "--out", dir.toString());
         assertEquals(2, run.exit());
         assertTrue(run.err().contains("--n must be A..B"), run.err());
-        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "2..4", "--out", dir.toString()).exit());
+        assertEquals(2, CliRun.of("family", "run", "families/corner.json", "--n", "2..4", "--out", dir.toString())
+                .exit());
     }
 
     @Test
     void exploresWithFiltersAndRejectsFiltersWithoutExplore() {
         Path out = dir.resolve("explore");
-        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--explore", "2", "--keep", "000,001",
-                "--out", out.toString());
+        CliRun run = CliRun.of("family", "explore", "families/corner.json", "--n", "3", "--runs", "2",
+                "--keep", "000,001", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.out().contains("n = 3: 1 class of cores, 0 of 2 runs"), run.out());
         assertTrue(Files.exists(out.resolve("n=3.core-1.cert.json")) && Files.exists(out.resolve("explore.json")));
-        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3", "--keep", "000", "--out",
+        assertEquals(2, CliRun.of("family", "run", "families/corner.json", "--n", "3", "--keep", "000", "--out",
                 out.toString()).exit());
-        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--explore", "1", "--keep", "000",
-                "--out", out.toString()).exit());
+        assertEquals(2, CliRun.of("family", "explore", "families/corner.json", "--n", "3..4", "--runs", "1",
+                "--keep", "000", "--out", out.toString()).exit());
+        CliRun bare = CliRun.of("family", "families/corner.json", "--n", "3", "--out", out.toString());
+        assertEquals(2, bare.exit());
     }
 
     @Test
     void predictsTheKnownCores() {
         Path out = dir.resolve("predict");
-        CliRun run = CliRun.of("family", "families/corner.json", "--n", "3", "--predict", "families/corner.predict.json",
-                "--out", out.toString());
+        CliRun run = CliRun.of("family", "predict", "families/corner.json", "--n", "3", "--prediction",
+                "families/corner.predict.json", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases; verified"),
                 run.out());
-        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--predict",
+        assertEquals(2, CliRun.of("family", "predict", "families/corner.json", "--n", "3..4", "--prediction",
                 "families/corner.predict.json", "--out", out.toString()).exit());
-        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3", "--predict",
+        assertEquals(2, CliRun.of("family", "predict", "families/corner.json", "--n", "3", "--prediction",
                 "families/corner.predict.json", "--threads", "2", "--out", out.toString()).exit());
     }
 
     @Test
     void shardsAndMerges() {
         for (int i = 0; i < 2; i++) {
-            CliRun shard = CliRun.of("family", "families/corner.json", "--n", "3..4", "--shard", i + "/2", "--out",
+            CliRun shard = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--shard", i + "/2", "--out",
                     dir.resolve("s" + i).toString());
             assertEquals(0, shard.exit(), shard.err());
         }
@@ -82,7 +85,7 @@ class FamilyCommandTest {
                 dir.resolve("s1").toString(), "--out", dir.resolve("m").toString());
         assertEquals(0, merge.exit(), merge.err());
         assertTrue(merge.out().contains("merged 2 members from 2 shards"), merge.out());
-        assertEquals(2, CliRun.of("family", "families/corner.json", "--n", "3..4", "--shard", "2/2", "--out",
+        assertEquals(2, CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--shard", "2/2", "--out",
                 dir.resolve("x").toString()).exit());
         assertEquals(2, CliRun.of("family-merge", "families/corner-uncontracted.json", dir.resolve("s0").toString(),
                 "--out", dir.resolve("m2").toString()).exit());

@@ -27,7 +27,7 @@ class ShapeFollowTest {
     void theFanoShapeIsFoundAtOddNAndMissedAtEvenN() throws IOException {
         FamilyExploration.Settings settings = new FamilyExploration.Settings(0, 4, Budget.UNLIMITED, List.of(),
                 OptionalInt.empty());
-        FamilyExploration.Report report = new FamilyExploration(CORNER, dir, settings, FamilyRun.Listener.SILENT)
+        FamilyExploration.Findings report = new FamilyExploration(CORNER, dir, settings, FamilyRun.Listener.SILENT)
                 .run(3, 5);
         ShapeFollow.Shape shape = ShapeFollow.Shape.parse("elements=7,rank=3");
         List<ShapeFollow.Row> rows = ShapeFollow.follow(report, shape);

@@ -14,7 +14,7 @@ import org.chirocore.matroid.MatroidShape;
 import org.chirocore.matroid.Minor;
 import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.MinimalCore;
-import org.chirocore.search.MinimalityProof;
+import org.chirocore.search.MinimalityDecider;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchSettings;
 import org.chirocore.search.SearchStats;
@@ -25,7 +25,7 @@ import org.chirocore.search.SearchStats;
  * rank(M) − R; so for each rank, each independent C up to the symmetry group (the smallest mask
  * of its orbit), it enumerates every minimal non-orientable restriction of M/C completely
  * ({@link RestrictionExplorer}, seeds grown to maximal orientable restrictions), and keeps those
- * whose single-element contractions are all orientable ({@link MinimalityProof}, whose witnesses
+ * whose single-element contractions are all orientable ({@link MinimalityDecider}, whose witnesses
  * then prove minimality). The images of each core under the group are the cores of the other
  * members of C's orbit; a minor is counted once as a matroid on its labelled ground set, however
  * many (C, S) give it. Ranks below 3 are not enumerated: every matroid of rank at most 2 is
@@ -168,16 +168,16 @@ public final class CoreEnumeration {
 
     private void candidate(ExplicitMatroid m, ExplicitMatroid n0, long set, List<String> contracted, Run run) {
         ExplicitMatroid core = ExplicitMatroid.of(Minor.restriction(n0, ElementSets.elements(set)));
-        MinimalityProof.Result result = MinimalityProof.check(core, settings.budget());
+        MinimalityDecider.Result result = MinimalityDecider.decide(core, settings.budget());
         run.solverCalls += 2 * core.size();
-        if (result instanceof MinimalityProof.Unknown u) {
+        if (result instanceof MinimalityDecider.Unknown u) {
             run.incomplete = "deciding the single-element minors of a restriction ran out of budget: " + u.reason();
             return;
         }
-        if (result instanceof MinimalityProof.NonOrientableDeletion) {
+        if (result instanceof MinimalityDecider.NonOrientableDeletion) {
             throw new IllegalStateException("A restriction found minimal non-orientable has a non-orientable deletion.");
         }
-        if (result instanceof MinimalityProof.NonOrientableContraction) {
+        if (result instanceof MinimalityDecider.NonOrientableContraction) {
             run.deadEnds++;
             return;
         }
@@ -203,7 +203,7 @@ public final class CoreEnumeration {
         List<String> deleted = m.labels().stream().filter(l -> !contracted.contains(l) && !core.labels().contains(l))
                 .toList();
         long millis = System.currentTimeMillis() - run.started;
-        MinimalCore example = new MinimalCore(core, contracted, deleted, ((MinimalityProof.Minimal) result).witnesses(),
+        MinimalCore example = new MinimalCore(core, contracted, deleted, ((MinimalityDecider.Minimal) result).witnesses(),
                 settings, new SearchStats(run.solverCalls, n0.size(), millis));
         progress.report("found class " + (run.classes.size() + 1), core.size(), core.rank(), run.solverCalls);
         run.classes.add(new CoreClass(example, images.size(), millis, run.solverCalls));

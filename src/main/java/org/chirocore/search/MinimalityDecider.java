@@ -10,6 +10,7 @@ import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.LazySatDecider;
+import org.chirocore.orient.OrientabilityDecider;
 import org.chirocore.orient.Orientability;
 import org.chirocore.orient.OrientationSession;
 import org.chirocore.orient.WitnessCheck;
@@ -19,11 +20,11 @@ import org.chirocore.orient.WitnessCheck;
  * single-element deletion and contraction: either all are orientable, and their re-checked
  * chirotopes are the proof, or it names the first non-orientable one. Deletions are solved in one
  * selector session on M; contractions on the contracted minor itself. The minimality pass of
- * {@link UnsatCoreSearch} is this check. Cost: up to 2|E| orientability decisions.
+ * {@link UnsatCoreSearch} is this decision. Cost: up to 2|E| orientability decisions.
  */
-public final class MinimalityProof {
+public final class MinimalityDecider {
 
-    /** The outcome of the check. */
+    /** The outcome of the decision. */
     public sealed interface Result {
     }
 
@@ -62,33 +63,33 @@ public final class MinimalityProof {
     public record Unknown(String reason) implements Result {
     }
 
-    private final Budget budget;
+    private final OrientabilityDecider decider;
     private final Strategy strategy;
     private final Progress progress;
     private int decisions;
 
     /**
-     * A check spending at most {@code budget} per decision, trying contractions or deletions first
-     * as {@code strategy} says, reporting each step to {@code progress}.
+     * A decision procedure deciding the contractions with {@code decider}, trying contractions or deletions
+     * first as {@code strategy} says, reporting each step to {@code progress}.
      */
-    public MinimalityProof(Budget budget, Strategy strategy, Progress progress) {
-        this.budget = budget;
+    public MinimalityDecider(OrientabilityDecider decider, Strategy strategy, Progress progress) {
+        this.decider = decider;
         this.strategy = strategy;
         this.progress = progress;
     }
 
     /**
-     * Checks {@code m} in element order, contractions first.
+     * Decides minimality of {@code m} trying elements in element order, contractions first.
      *
      * @param m a matroid already known to be non-orientable
      */
-    public static Result check(ExplicitMatroid m, Budget budget) {
+    public static Result decide(ExplicitMatroid m, Budget budget) {
         List<Integer> order = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             order.add(e);
         }
-        return new MinimalityProof(budget, Strategy.CONTRACT_FIRST, Progress.SILENT)
-                .check(m, new OrientationSession(BasisIndex.of(m), true, budget), order);
+        return new MinimalityDecider(new LazySatDecider(budget), Strategy.CONTRACT_FIRST, Progress.SILENT)
+                .decide(m, new OrientationSession(BasisIndex.of(m), true, budget), order);
     }
 
     /** The orientability decisions made so far by this instance. */
@@ -100,7 +101,7 @@ public final class MinimalityProof {
      * Checks {@code m}, trying its elements in {@code order}; {@code session} is a selector
      * session on {@code m}.
      */
-    Result check(ExplicitMatroid m, OrientationSession session, List<Integer> order) {
+    Result decide(ExplicitMatroid m, OrientationSession session, List<Integer> order) {
         Chirotope[] deletion = new Chirotope[m.size()];
         Chirotope[] contraction = new Chirotope[m.size()];
         List<Operation> phases = strategy == Strategy.CONTRACT_FIRST
@@ -128,7 +129,7 @@ public final class MinimalityProof {
                     deletion[e] = WitnessCheck.checked(new Minor(m, new int[0], single), w);
                 } else if (op == Operation.CONTRACTION && !loop) {
                     ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, single, new int[0]));
-                    Orientability answer = new LazySatDecider(budget).decide(minor);
+                    Orientability answer = decider.decide(minor);
                     decisions++;
                     if (answer instanceof Orientability.Unknown u) {
                         return new Unknown(u.reason());

@@ -4,50 +4,52 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Path;
 import java.util.List;
 
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.matroid.AffineCube;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
-import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.HyperplaneSpec;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.matroid.PulledMatroid;
 import org.chirocore.orient.Budget;
-import org.chirocore.orient.LazySatDecider;
-import org.chirocore.orient.WitnessCheck;
-import org.junit.jupiter.api.Tag;
+import org.chirocore.pipeline.IndependentCheck;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.EnumSource;
 
-/** Reductions to minimal cores, checked against published excluded minors (math-notes §4). */
-class CoreSearchTest {
+/**
+ * The contract of every {@link CoreSearch}: reductions of the named fixtures to minimal cores,
+ * checked against published excluded minors (sources beside each case). Every core found is
+ * certified through the pipeline, whose verifier run checks its non-orientability (DRAT) and
+ * every minimality witness; every orientable answer's witness passes the independent checker.
+ * One subclass per implementation supplies the search.
+ */
+abstract class CoreSearchContract {
+    @TempDir
+    Path dir;
 
-    static SearchResult reduce(Matroid m, long seed, Strategy strategy) {
-        return new UnsatCoreSearch(new SearchSettings(seed, strategy, Budget.UNLIMITED), Progress.SILENT).reduce(m);
+    /** The search under test with {@code settings}. */
+    abstract CoreSearch search(SearchSettings settings);
+
+    SearchResult reduce(Matroid m, long seed, Strategy strategy) {
+        return search(new SearchSettings(seed, strategy, Budget.UNLIMITED)).reduce(m);
     }
 
     static boolean isomorphic(Matroid a, Matroid b) {
         return new HyperplaneIsomorphismInspector(a, b).find().isPresent();
     }
 
-    /** Re-checks every minimality witness against the minor built here from the core. */
-    static void assertMinimalityProof(MinimalCore found) {
-        ExplicitMatroid core = found.core();
-        assertEquals(2 * core.size(), found.witnesses().size());
-        for (MinorWitness w : found.witnesses()) {
-            int e = core.labels().indexOf(w.element());
-            int[] single = {e};
-            Matroid minor = w.operation() == Operation.DELETION
-                    ? new Minor(core, new int[0], single) : new Minor(core, single, new int[0]);
-            assertTrue(WitnessCheck.defect(minor, w.witness()).isEmpty(), () -> w.operation() + " " + w.element());
-        }
-        // The core itself is non-orientable: minimal means non-orientable with orientable minors.
-        assertEquals("non-orientable", new LazySatDecider(Budget.UNLIMITED).decide(core).verdict());
+    /** Certifies {@code found} and has the independent verifier check the written certificate. */
+    void assertMinimalityDecider(MinimalCore found) {
+        assertEquals(2 * found.core().size(), found.witnesses().size());
+        IndependentCheck.assertCertified(found, dir);
     }
 
     @ParameterizedTest
@@ -60,7 +62,7 @@ class CoreSearchTest {
         assertEquals(List.of(), found.contracted());
         assertEquals(List.of(), found.deleted());
         assertEquals(14, found.witnesses().size());
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
     }
 
     @ParameterizedTest
@@ -71,7 +73,7 @@ class CoreSearchTest {
         MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
         assertTrue(isomorphic(found.core(), NamedMatroids.fano()) || isomorphic(found.core(), NamedMatroids.fanoDual()),
                 found.core().toString());
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
     }
 
     @Test
@@ -79,7 +81,7 @@ class CoreSearchTest {
         // The non-Fano matroid is real-representable, hence orientable (BLSWZ §1.2, common practice).
         SearchResult r = reduce(NamedMatroids.nonFano(), 0, Strategy.CONTRACT_FIRST);
         SearchResult.Orientable o = assertInstanceOf(SearchResult.Orientable.class, r);
-        assertTrue(WitnessCheck.defect(NamedMatroids.nonFano(), o.witness()).isEmpty());
+        IndependentCheck.assertOrients(NamedMatroids.nonFano(), o.witness());
     }
 
     @Test
@@ -91,7 +93,7 @@ class CoreSearchTest {
         Matroid m = new Minor(PulledMatroid.pull(cube, h, o), new int[] {o}, new int[0]);
         MinimalCore found = assertInstanceOf(SearchResult.Found.class, reduce(m, 0, Strategy.CONTRACT_FIRST)).core();
         assertTrue(isomorphic(found.core(), NamedMatroids.fano()));
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
     }
 
     @Test
@@ -120,35 +122,12 @@ class CoreSearchTest {
         CubeConstruction construction = CubeConstruction.corner(n);
         Matroid m = construction.build();
         SearchSettings settings = new SearchSettings(seed, Strategy.CONTRACT_FIRST, Budget.UNLIMITED,
-                construction.hyperplaneVertices());
-        SearchResult r = new UnsatCoreSearch(settings, Progress.SILENT).reduce(m);
+                construction.focus());
+        SearchResult r = search(settings).reduce(m);
         MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
-        assertMinimalityProof(found);
+        assertMinimalityDecider(found);
         int[] c = found.contracted().stream().mapToInt(m.labels()::indexOf).sorted().toArray();
         int[] d = found.deleted().stream().mapToInt(m.labels()::indexOf).sorted().toArray();
         assertEquals(found.core(), ExplicitMatroid.of(new Minor(m, c, d)));
-    }
-
-    @Test
-    void growthFindsANonOrientableRestriction() {
-        // AG(3,2) is non-orientable (binary, not regular: Oxley §6.6), so growth must stop at a
-        // non-orientable restriction of full rank.
-        Matroid m = NamedMatroids.binaryAffineCube();
-        RestrictionGrowth.Grown grown = new RestrictionGrowth(m,
-                new SearchSettings(3, Strategy.CONTRACT_FIRST, Budget.UNLIMITED), Progress.SILENT).grow();
-        Matroid restriction = Minor.restriction(m, grown.elements());
-        assertEquals(m.rank(), restriction.rank());
-        assertEquals("non-orientable", new LazySatDecider(Budget.UNLIMITED).decide(restriction).verdict());
-    }
-
-    @Test
-    @Tag("slow")
-    void withoutFocusTheFiveCubeIsReducedThroughGrowth() {
-        Matroid m = CubeConstruction.corner(5).build();
-        SearchResult r = new UnsatCoreSearch(new SearchSettings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED),
-                Progress.SILENT).reduce(m);
-        MinimalCore found = assertInstanceOf(SearchResult.Found.class, r).core();
-        assertTrue(found.stats().grownTo() < m.size());
-        assertMinimalityProof(found);
     }
 }

@@ -1,0 +1,51 @@
+package org.chirocore.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class SweepCommandTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void sweepsTheThreeCubeWithProgressLinesAndMerges() {
+        Path out = dir.resolve("s");
+        CliRun run = CliRun.of("sweep", "--n", "3", "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("n = 3: 3 hyperplane orbits, 20 hyperplanes, 1 general-position pairs"), run.out());
+        // progress: whole lines on standard error, even when it is not a terminal
+        assertTrue(run.err().contains("n = 3: pair 1 of 1 n3_a1-1-1_b1_o111: pulled non-orientable, contracted "
+                + "non-orientable, core 7 elements rank 3 (F7)"), run.err());
+        assertTrue(Files.exists(out.resolve("sweep.json")) && Files.exists(out.resolve("sweep.md")));
+        CliRun merged = CliRun.of("sweep-merge", out.toString(), "--out", dir.resolve("m").toString());
+        assertEquals(0, merged.exit(), merged.err());
+        assertTrue(Files.exists(dir.resolve("m/n=3/n3_a1-1-1_b1_o111.pulled.cert.json")));
+    }
+
+    @Test
+    void badRangesAndShardsAreBadUsage() {
+        CliRun low = CliRun.of("sweep", "--n", "1..3", "--out", dir.toString());
+        assertEquals(2, low.exit());
+        assertTrue(low.err().contains("--n must lie within 2.."), low.err());
+        assertEquals(2, CliRun.of("sweep", "--n", "3", "--shard", "2/2", "--out", dir.toString()).exit());
+        CliRun missing = CliRun.of("sweep-merge", dir.resolve("nothing").toString(), "--out", dir.toString());
+        assertEquals(2, missing.exit());
+        assertTrue(missing.err().contains("sweep.json: is missing"), missing.err());
+    }
+
+    /** OEIS A363505 (6 orbits) and A007847 (140 hyperplanes) at n = 4; the pairs as in docs/sweep.md. */
+    @Test
+    void cubeListsOrbitsAndPairs() {
+        CliRun run = CliRun.of("cube", "4", "--orbits");
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("hyperplane orbits: 6 (140 hyperplanes)"), run.out());
+        assertTrue(run.out().contains("general-position pairs up to symmetry: 2 (80 pairs)"), run.out());
+        assertTrue(run.out().contains("x1 + x2 + x3 + 2·x4 = 2, O = 1111: orbit size 64"), run.out());
+    }
+}

@@ -1,0 +1,76 @@
+package org.chirocore.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.chirocore.cert.CertificateWriter;
+import org.chirocore.check.CertificateVerifier;
+import org.chirocore.check.Report;
+import org.chirocore.io.Json;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The sweep stored in {@code certificates/sweep} (n = 3..6, docs/sweep.md): complete against a
+ * fresh enumeration, and every certificate passes every check of the independent verifier and
+ * records its own pair's construction.
+ */
+class StoredSweepTest {
+    private static final Path DIR = Path.of("certificates/sweep");
+    private static SweepResult stored;
+
+    @BeforeAll
+    static void read() throws IOException {
+        stored = SweepResult.fromJson(Json.parseUtf8(Files.readAllBytes(DIR.resolve(SweepRun.SWEEP_JSON)))
+                .asObject("sweep.json"));
+    }
+
+    static Stream<PairResult> pairs() throws IOException {
+        read();
+        return stored.levels().stream().flatMap(l -> l.pairs().stream());
+    }
+
+    /** Counts: OEIS A363505 (orbits) and A007847 (hyperplanes); the pairs are those of a fresh enumeration. */
+    @Test
+    void storedSweepIsComplete() {
+        assertEquals(List.of(3, 4, 5, 6), stored.levels().stream().map(SweepLevel::n).toList());
+        assertEquals(List.of(3, 6, 15, 63), stored.levels().stream().map(SweepLevel::orbits).toList(), "OEIS A363505");
+        assertEquals(List.of(20L, 140L, 3254L, 252434L), stored.levels().stream().map(SweepLevel::hyperplanes).toList(),
+                "OEIS A007847");
+        for (SweepLevel level : stored.levels()) {
+            List<String> fresh = HyperplaneOrbits.of(level.n()).stream()
+                    .flatMap(h -> GeneralPositionPairs.of(h).stream())
+                    .filter(PullCandidate::inGeneralPosition)
+                    .map(c -> PairResult.id(level.n(), c.hyperplane().normal(), c.hyperplane().offset(), c.vertex()))
+                    .toList();
+            assertEquals(fresh, level.pairs().stream().map(PairResult::id).toList(), "n = " + level.n());
+        }
+        assertEquals(List.of(), stored.discoveries());
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("pairs")
+    void bothCertificatesVerify(PairResult pair) throws IOException {
+        assertInstanceOf(Verdict.NonOrientable.class, pair.pulledVerdict());
+        assertInstanceOf(Verdict.NonOrientable.class, pair.contractedVerdict());
+        for (boolean contract : new boolean[] {false, true}) {
+            Verdict v = contract ? pair.contractedVerdict() : pair.pulledVerdict();
+            Path file = SweepRun.levelDirectory(DIR, pair.n()).resolve(v.file());
+            Report report = CertificateVerifier.verify(file);
+            for (Report.Check c : report.checks()) {
+                assertTrue(c.status() == Report.Status.PASS, file + ": " + c);
+            }
+            assertEquals(CertificateWriter.construction(SweepRun.construction(pair.n(), pair.normal(), pair.offset(),
+                    pair.pulled(), contract)), RecordedCertificate.read(file).construction(), file.toString());
+        }
+    }
+}
