@@ -14,7 +14,6 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Source;
 import org.chirocore.io.Json;
-import org.chirocore.matroid.Construction;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.pipeline.CertifiedReduction;
@@ -77,8 +76,8 @@ final class EnumerateCommand implements Callable<Integer> {
                     + "none: no symmetry.")
     private String symmetry;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "0", description = "Seed of the element order.")
-    private long seed;
+    @Mixin
+    private SeedOption seed;
 
     @Mixin
     private BudgetOptions budget;
@@ -111,7 +110,7 @@ final class EnumerateCommand implements Callable<Integer> {
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot create the output directory: " + e, e);
         }
-        SearchSettings settings = new SearchSettings(seed, Strategy.CONTRACT_FIRST, budget.budget());
+        SearchSettings settings = new SearchSettings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget());
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CoreEnumeration.Result result = new CoreEnumeration(settings, constraints, group, progress).enumerate(m);
         progress.finish();
@@ -131,17 +130,7 @@ final class EnumerateCommand implements Callable<Integer> {
 
     /** The input chosen by exactly one of FILE and --cube. */
     private Subject input() {
-        if ((file == null) == (cube == null)) {
-            throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
-                    + (file == null ? "neither was given." : "both were given."));
-        }
-        if (file == null) {
-            return Inputs.build(construction.construction(cube, contractPulled));
-        }
-        if (construction.anyGiven()) {
-            throw new ParameterException(spec.commandLine(), "--field, --hyperplane and --pull only go with --cube.");
-        }
-        return Inputs.read(file);
+        return Inputs.choose(spec, file, cube, construction, contractPulled);
     }
 
     private Symmetry group(Subject input, ExplicitMatroid m) {
@@ -198,9 +187,7 @@ final class EnumerateCommand implements Callable<Integer> {
         }
         Json.Obj.Builder source = Json.Obj.builder();
         if (input.source() instanceof Source.Constructed c) {
-            for (Construction.Part part : c.construction().provenance()) {
-                source.put(part.name(), partJson(part.value()));
-            }
+            source.put("construction", CertificateWriter.construction(c.construction()));
         } else if (input.source() instanceof Source.Given g) {
             source.put("sha256", g.sha256());
         }
@@ -220,19 +207,6 @@ final class EnumerateCommand implements Callable<Integer> {
                 .put("millis", r.millis())
                 .put("classes", new Json.Arr(classes))
                 .build();
-    }
-
-    private static Json partJson(Object value) {
-        if (value instanceof Integer i) {
-            return Json.Num.of(i);
-        }
-        if (value instanceof Boolean b) {
-            return new Json.Bool(b);
-        }
-        if (value instanceof String s) {
-            return new Json.Str(s);
-        }
-        return Json.Arr.ofStrings(((List<?>) value).stream().map(String.class::cast).toList());
     }
 
     private static String summaryMarkdown(ExplicitMatroid m, Symmetry group, CoreEnumeration.Result r,

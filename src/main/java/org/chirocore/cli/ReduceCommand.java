@@ -170,18 +170,7 @@ final class ReduceCommand implements Callable<Integer> {
 
     /** The input chosen by exactly one of FILE and --cube. */
     private Subject input() {
-        if ((file == null) == (cube == null)) {
-            throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
-                    + (file == null ? "neither was given." : "both were given."));
-        }
-        if (file == null) {
-            return Inputs.build(construction.construction(cube, contractPulled));
-        }
-        if (construction.anyGiven() || spec.commandLine().getParseResult().hasMatchedOption("--contract-pulled")) {
-            throw new ParameterException(spec.commandLine(),
-                    "--field, --hyperplane, --pull and --[no-]contract-pulled only go with --cube, not with FILE.");
-        }
-        return Inputs.read(file);
+        return Inputs.choose(spec, file, cube, construction, contractPulled);
     }
 
     private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {
