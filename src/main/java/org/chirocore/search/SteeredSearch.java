@@ -268,7 +268,7 @@ public final class SteeredSearch {
             if (!rebuilt.equals(core)) {
                 throw new IllegalStateException("The contraction and deletion sets do not rebuild the core.");
             }
-            SearchStats stats = new SearchStats(tally.decisions, space.size(),
+            SearchStats stats = new SearchStats(tally.decisions + explorer.solverCalls(), space.size(),
                     System.currentTimeMillis() - tally.started);
             return new MinimalCore(core, contracted, deleted, minimal.witnesses(), settings, stats);
         }
