@@ -11,6 +11,7 @@ import org.chirocore.matroid.CubeGeometry;
 import org.chirocore.matroid.CubeHyperplane;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.CubeReport;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 
 import org.chirocore.sweep.GeneralPositionPairs;
@@ -22,8 +23,8 @@ import org.chirocore.sweep.SweepRun;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -44,9 +45,13 @@ final class CubeCommand implements Callable<Integer> {
     @Mixin
     private ConstructionOptions construction;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--save", paramLabel = "FILE",
             description = "Write the pulled matroid (needs --hyperplane and --pull) to FILE as a matroid file with "
-                    + "its bases, at most 64 elements.")
+                    + "its bases: at most " + Limits.ELEMENTS + " elements and " + Limits.EXPLICIT_SUBSETS
+                    + " subsets of the rank's size (n <= 5).")
     private Path save;
 
     @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
@@ -62,6 +67,7 @@ final class CubeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        output.checkFiles(List.of(), save);
         CubeReport r;
         try {
             r = CubeReport.of(n, construction.field(), construction.hyperplane(), construction.pull());
@@ -88,12 +94,9 @@ final class CubeCommand implements Callable<Integer> {
             printOrbits(out);
         }
         if (save != null) {
-            Inputs.requireDirectoryOf(save);
             Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
-            if (m.size() > ExplicitMatroid.MAX_ELEMENTS) {
-                throw new ParameterException(spec.commandLine(), "--save writes at most " + ExplicitMatroid.MAX_ELEMENTS
-                        + " elements as bases; this matroid has " + m.size() + ".");
-            }
+            // Checked before the C(n, r) rank tests of the enumeration, which are the long part.
+            Limits.requireExplicit(m.size(), m.rank(), "--save " + save + ": the pulled matroid");
             Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(m)));
             out.println("wrote " + save + " (rank " + m.rank() + " on " + m.size() + " elements)");
         }

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
@@ -85,11 +86,15 @@ final class EnumerateCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output directory.")
     private Path out;
 
+    @Mixin
+    private OutputOptions output;
+
     @Override
     public Integer call() {
         if (!symmetry.equals("auto") && !symmetry.equals("none")) {
             throw new ParameterException(spec.commandLine(), "--symmetry is auto or none, not \"" + symmetry + "\".");
         }
+        output.checkDirectory(out, Arrays.asList(file), List.of(SUMMARY_JSON, SUMMARY_MD));
         Subject input = input();
         if (!SteeredSearch.explorable(input.matroid())) {
             throw new BadInputException("the matroid (rank " + input.matroid().rank() + " on " + input.matroid().size()

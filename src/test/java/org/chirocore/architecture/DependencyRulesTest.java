@@ -36,7 +36,7 @@ class DependencyRulesTest {
         "proof, org.sat4j", "proof, org.chirocore.cli", "proof, org.chirocore.io", "proof, org.chirocore.cert",
         "proof, org.chirocore.check", "proof, org.chirocore.search", "proof, org.chirocore.family",
         "matroid, org.chirocore.proof", "orient, org.chirocore.proof", "check, org.chirocore.proof",
-        "report, org.sat4j", "report, org.chirocore.cli", "report, org.chirocore.matroid", "report, org.chirocore.orient",
+        "report, org.sat4j", "report, org.chirocore.cli", "report, org.chirocore.orient",
         "report, org.chirocore.search", "report, org.chirocore.cert", "report, org.chirocore.family",
         "check, org.chirocore.report", "family, org.chirocore.report",
         "sweep, org.sat4j", "sweep, org.chirocore.cli", "sweep, org.chirocore.report", "sweep, org.chirocore.proof",
