@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.NamedMatroid;
@@ -68,10 +68,10 @@ public final class RunReport {
      * @param name the core's isomorphism class in the catalogue
      * @param failure why it is not described, empty when it passed
      */
-    private record Checked(Report verdict, CertificateSummary summary, Optional<NamedMatroid> name, String failure) {
+    private record Checked(VerificationReport verdict, CertificateSummary summary, Optional<NamedMatroid> name, String failure) {
         static Checked of(Path file) {
             try {
-                Report verdict = CertificateReport.verified(file, Optional.empty());
+                VerificationReport verdict = CertificateReport.verified(file, Optional.empty());
                 CertificateSummary s = CertificateSummary.read(file);
                 return new Checked(verdict, s, Catalogue.identify(s.core()), "");
             } catch (ReportException e) {
