@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import org.chirocore.family.Shard;
 import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
 import org.chirocore.matroid.CubeHyperplane;
@@ -65,6 +66,11 @@ final class CubeCommand implements Callable<Integer> {
                     + "N = 8 hours).")
     private boolean orbits;
 
+    @Option(names = "--part", paramLabel = "i/k",
+            description = "With --orbits: only part i of k of the enumeration (its search prefixes dealt out "
+                    + "round-robin), for splitting N >= 8 over machines; the parts together give every orbit once.")
+    private String part;
+
     @Override
     public Integer call() {
         output.checkFiles(List.of(), save);
@@ -90,6 +96,9 @@ final class CubeCommand implements Callable<Integer> {
         });
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
+        if (part != null && !orbits) {
+            throw new ParameterException(spec.commandLine(), "--part splits the enumeration of --orbits; give --orbits too.");
+        }
         if (orbits) {
             printOrbits(out);
         }
@@ -108,9 +117,17 @@ final class CubeCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--orbits needs N within " + SweepRun.MIN_DIMENSION + ".."
                     + HyperplaneOrbits.MAX_DIMENSION + ", not " + n + ".");
         }
-        List<HyperplaneOrbit> found = HyperplaneOrbits.of(n);
-        out.println("hyperplane orbits: " + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize)
-                .sum() + " hyperplanes)");
+        Shard split;
+        try {
+            split = part == null ? Shard.ALL : Shard.parse(part);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--part: " + e.getMessage());
+        }
+        long[] candidates = {0};
+        List<HyperplaneOrbit> found = HyperplaneOrbits.part(n, split.index(), split.count(), v -> candidates[0] += v);
+        out.println("hyperplane orbits" + (part == null ? "" : " in part " + split.index() + "/" + split.count()) + ": "
+                + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize).sum() + " hyperplanes; "
+                + candidates[0] + " candidate normals searched)");
         List<PullCandidate> general = new ArrayList<>();
         for (HyperplaneOrbit h : found) {
             CubeHyperplane rep = h.representative();

@@ -10,7 +10,7 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code reduce --rank/--keep/--avoid}: a verified core, "none exists" with exit 4, bad constraints with exit 2. */
+/** {@code reduce --rank/--keep/--avoid}: a verified core, "none exists" with exit 5, bad constraints with exit 2. */
 class ReduceConstraintsCommandTest {
     @TempDir
     Path dir;
