@@ -6,14 +6,12 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
 
 import org.chirocore.io.Json;
+import org.chirocore.io.Sha256;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.InvalidMatroidException;
 
@@ -54,20 +52,11 @@ public record CertificateSummary(String file, String contentSha256, String fileS
             byte[] bytes = Files.readAllBytes(file);
             Json.Obj cert = Json.parseUtf8(bytes).asObject("certificate");
             Json.Obj content = cert.requireObject("content");
-            return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), sha256(bytes),
+            return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), Sha256.hex(bytes),
                     core(content.requireObject("core")), origin(content.requireObject("provenance")),
                     proof(content.requireObject("nonOrientability"), file.toAbsolutePath().getParent()));
         } catch (IOException | IllegalArgumentException e) {
             throw new ReportException(file + ": cannot be read as a certificate: " + e.getMessage(), e);
-        }
-    }
-
-    /** The SHA-256 of {@code bytes}, 64 lower-case hex digits. */
-    static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("Every Java platform has SHA-256.", e);
         }
     }
 
