@@ -10,6 +10,7 @@ import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
 import org.chirocore.matroid.CubeHyperplane;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Field;
 import org.chirocore.matroid.CubeReport;
 import org.chirocore.matroid.Matroid;
 
@@ -62,6 +63,24 @@ final class CubeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        // Every option is checked before the first line is printed, so bad input leaves no partial output.
+        if (orbits && (n < SweepRun.MIN_DIMENSION || n > HyperplaneOrbits.MAX_DIMENSION)) {
+            throw new ParameterException(spec.commandLine(), "--orbits needs N within " + SweepRun.MIN_DIMENSION + ".."
+                    + HyperplaneOrbits.MAX_DIMENSION + ", not " + n + ".");
+        }
+        if (orbits && !construction.field().equals(Field.RATIONALS)) {
+            throw new ParameterException(spec.commandLine(), "--orbits lists the hyperplanes of the real cube; "
+                    + "it cannot be combined with --field " + construction.field() + ".");
+        }
+        Matroid saved = null;
+        if (save != null) {
+            Inputs.requireDirectoryOf(save);
+            saved = Inputs.build(construction.construction(n, contractPulled)).matroid();
+            if (saved.size() > ExplicitMatroid.MAX_ELEMENTS) {
+                throw new ParameterException(spec.commandLine(), "--save writes at most " + ExplicitMatroid.MAX_ELEMENTS
+                        + " elements as bases; this matroid has " + saved.size() + ".");
+            }
+        }
         CubeReport r;
         try {
             r = CubeReport.of(n, construction.field(), construction.hyperplane(), construction.pull());
@@ -87,24 +106,14 @@ final class CubeCommand implements Callable<Integer> {
         if (orbits) {
             printOrbits(out);
         }
-        if (save != null) {
-            Inputs.requireDirectoryOf(save);
-            Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
-            if (m.size() > ExplicitMatroid.MAX_ELEMENTS) {
-                throw new ParameterException(spec.commandLine(), "--save writes at most " + ExplicitMatroid.MAX_ELEMENTS
-                        + " elements as bases; this matroid has " + m.size() + ".");
-            }
-            Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(m)));
-            out.println("wrote " + save + " (rank " + m.rank() + " on " + m.size() + " elements)");
+        if (saved != null) {
+            Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(saved)));
+            out.println("wrote " + save + " (rank " + saved.rank() + " on " + saved.size() + " elements)");
         }
         return ExitCodes.OK;
     }
 
     private void printOrbits(PrintWriter out) {
-        if (n < SweepRun.MIN_DIMENSION || n > HyperplaneOrbits.MAX_DIMENSION) {
-            throw new ParameterException(spec.commandLine(), "--orbits needs N within " + SweepRun.MIN_DIMENSION + ".."
-                    + HyperplaneOrbits.MAX_DIMENSION + ", not " + n + ".");
-        }
         List<HyperplaneOrbit> found = HyperplaneOrbits.of(n);
         out.println("hyperplane orbits: " + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize)
                 .sum() + " hyperplanes)");
