@@ -66,7 +66,7 @@ public final class CertificateWriter {
         byte[] drat = c.refutation().drat().getBytes(StandardCharsets.US_ASCII);
         Optional<Path> dratFile = Optional.empty();
         if (drat.length > inlineLimit) {
-            Path file = target.resolveSibling(baseName(target) + ".drat.gz");
+            Path file = dratFile(target);
             AtomicFiles.write(file, gzip(drat));
             dratFile = Optional.of(file);
         }
@@ -74,6 +74,11 @@ public final class CertificateWriter {
         Json.Obj document = document(c, content);
         AtomicFiles.writeJson(target, document);
         return new Written(target, dratFile, sha256(content));
+    }
+
+    /** Where a proof too long to inline goes beside {@code certificate}: "c5.json" gives "c5.drat.gz". */
+    public static Path dratFile(Path certificate) {
+        return certificate.resolveSibling(baseName(certificate) + ".drat.gz");
     }
 
     /** The file name without a final {@code .json}: "c5.json" gives "c5". */

@@ -3,6 +3,7 @@ package org.chirocore.cli;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
+import org.chirocore.matroid.Limits;
 import org.chirocore.search.Benchmark;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.SearchResult;
@@ -30,7 +31,7 @@ final class BenchCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     @Option(names = "--max-n", paramLabel = "N", defaultValue = "5",
-            description = "Largest dimension to run (default: ${DEFAULT-VALUE}).")
+            description = "Largest dimension to run, at most " + Limits.CUBE_DIMENSION + " (default: ${DEFAULT-VALUE}).")
     private int maxN;
 
     @Mixin
@@ -59,6 +60,7 @@ final class BenchCommand implements Callable<Integer> {
         if (maxN < 3) {
             throw new ParameterException(spec.commandLine(), "--max-n must be at least 3, not " + maxN + ".");
         }
+        Limits.requireCube(maxN, "--max-n");
         SearchSettings settings = new SearchSettings(0, Strategy.CONTRACT_FIRST, budget.budget());
         PrintWriter out = spec.commandLine().getOut();
         out.printf(ROW, "n", "elements", "rank", "decide ms", "reduce ms", "core elements", "core rank", "core bases",

@@ -1,5 +1,8 @@
 package org.chirocore.cli;
 
+import org.chirocore.matroid.Limits;
+import org.chirocore.matroid.TooLargeException;
+
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -19,17 +22,22 @@ import picocli.CommandLine.Spec;
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
-                "1:internal error (a bug; stack trace printed); for verify: a check failed",
-                "2:bad usage or bad input (message on stderr)",
+                "1:internal error (a bug; set " + Chirocore.STACKTRACE_VARIABLE + "=1 for its stack trace); for verify: a check failed",
+                "2:bad usage, bad input, an input beyond the limits, or out of memory (message on stderr)",
                 "3:unknown: the budget ran out before an answer"})
 public final class Chirocore implements Runnable {
     @Spec
     private CommandSpec spec;
 
+    /** Set (to anything) to print the stack trace of an internal error as well. */
+    static final String STACKTRACE_VARIABLE = "CHIROCORE_STACKTRACE";
+
     /**
-     * Makes {@code commandLine} report bad usage and bad input as one line on its error stream
-     * with {@link ExitCodes#BAD_INPUT}. Other exceptions are left to picocli, which prints them
-     * with their stack trace and exits with {@link ExitCodes#INTERNAL_ERROR}.
+     * Makes {@code commandLine} report bad usage, bad input, inputs beyond {@link Limits} and
+     * memory exhaustion as plain lines on its error stream with {@link ExitCodes#BAD_INPUT}, and
+     * any other exception as one line with {@link ExitCodes#INTERNAL_ERROR}; the stack trace of
+     * an internal error is printed only when the environment variable {@value #STACKTRACE_VARIABLE}
+     * is set.
      *
      * @return {@code commandLine}, for chaining
      */
@@ -42,12 +50,31 @@ public final class Chirocore implements Runnable {
                     cl.getErr().println("Try '" + cl.getCommandSpec().qualifiedName() + " --help' for more information.");
                     return ExitCodes.BAD_INPUT;
                 })
+                .setExecutionStrategy(parseResult -> {
+                    try {
+                        return new CommandLine.RunLast().execute(parseResult);
+                    } catch (OutOfMemoryError e) {
+                        // What held the memory is unreachable now, so there is room to say so.
+                        commandLine.getErr().println("chirocore: out of memory while running '"
+                                + String.join(" ", parseResult.originalArgs()) + "': the input is too large for the "
+                                + (Runtime.getRuntime().maxMemory() >> 20) + " MB the Java heap may use; give Java more "
+                                + "memory (java -Xmx8g -jar chirocore.jar ...) or make the input smaller.");
+                        return ExitCodes.BAD_INPUT;
+                    }
+                })
                 .setExecutionExceptionHandler((ex, cl, parseResult) -> {
-                    if (ex instanceof BadInputException) {
+                    if (ex instanceof BadInputException || ex instanceof TooLargeException) {
                         cl.getErr().println("chirocore: " + ex.getMessage());
                         return ExitCodes.BAD_INPUT;
                     }
-                    throw ex;
+                    cl.getErr().println("chirocore: internal error: "
+                            + (ex.getMessage() == null ? "an unexpected failure" : ex.getMessage())
+                            + " This is a bug; run again with the environment variable " + STACKTRACE_VARIABLE
+                            + "=1 to see where it happened.");
+                    if (System.getenv(STACKTRACE_VARIABLE) != null) {
+                        ex.printStackTrace(cl.getErr());
+                    }
+                    return ExitCodes.INTERNAL_ERROR;
                 });
     }
 

@@ -12,6 +12,7 @@ import org.chirocore.matroid.CubeHyperplane;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.CubeReport;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 
 import org.chirocore.sweep.GeneralPositionPairs;
@@ -23,8 +24,8 @@ import org.chirocore.sweep.SweepRun;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -45,9 +46,13 @@ final class CubeCommand implements Callable<Integer> {
     @Mixin
     private ConstructionOptions construction;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--save", paramLabel = "FILE",
             description = "Write the pulled matroid (needs --hyperplane and --pull) to FILE as a matroid file with "
-                    + "its bases, at most 64 elements.")
+                    + "its bases: at most " + Limits.ELEMENTS + " elements and " + Limits.EXPLICIT_SUBSETS
+                    + " subsets of the rank's size (n <= 5).")
     private Path save;
 
     @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
@@ -72,14 +77,12 @@ final class CubeCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--orbits lists the hyperplanes of the real cube; "
                     + "it cannot be combined with --field " + construction.field() + ".");
         }
+        output.checkFiles(List.of(), save);
         Matroid saved = null;
         if (save != null) {
-            Inputs.requireDirectoryOf(save);
             saved = Inputs.build(construction.construction(n, contractPulled)).matroid();
-            if (saved.size() > ExplicitMatroid.MAX_ELEMENTS) {
-                throw new ParameterException(spec.commandLine(), "--save writes at most " + ExplicitMatroid.MAX_ELEMENTS
-                        + " elements as bases; this matroid has " + saved.size() + ".");
-            }
+            // Checked before the C(n, r) rank tests of the enumeration, which are the long part.
+            Limits.requireExplicit(saved.size(), saved.rank(), "--save " + save + ": the pulled matroid");
         }
         CubeReport r;
         try {

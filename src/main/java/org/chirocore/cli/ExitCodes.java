@@ -10,7 +10,7 @@ import org.chirocore.search.SearchResult;
 final class ExitCodes {
     /** A proved answer (orientable, non-orientable, a minimal core) or facts printed. */
     static final int OK = 0;
-    /** A bug: an unexpected exception, printed with its stack trace by picocli. */
+    /** A bug: an unexpected exception, reported in one line (its stack trace on request, see {@link Chirocore#configure}). */
     static final int INTERNAL_ERROR = 1;
     /** {@code verify}: some check of some certificate failed (shares its value with INTERNAL_ERROR, as the spec of verify asks). */
     static final int CHECK_FAILED = 1;

@@ -3,6 +3,7 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
@@ -10,8 +11,10 @@ import org.chirocore.cert.ReadableCertificate;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
+import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -41,6 +44,9 @@ final class ExplainCommand implements Callable<Integer> {
     @Option(names = "--input", paramLabel = "FILE", description = "The matroid file of a given-matroid provenance.")
     private Path input;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--max-steps", paramLabel = "N", defaultValue = "200",
             description = "Largest number of steps of a readable proof (default: ${DEFAULT-VALUE}).")
     private int maxSteps;
@@ -57,11 +63,7 @@ final class ExplainCommand implements Callable<Integer> {
         if (maxSteps < 1) {
             throw new BadInputException("--max-steps must be positive, got " + maxSteps, null);
         }
-        for (Path file : new Path[] {out, certificateOut}) {
-            if (file != null) {
-                Inputs.requireDirectoryOf(file);
-            }
-        }
+        output.checkFiles(Arrays.asList(certificate, input), out, certificateOut);
         PrintWriter stdout = spec.commandLine().getOut();
         Report report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
         if (!report.passed()) {
@@ -75,7 +77,7 @@ final class ExplainCommand implements Callable<Integer> {
         try {
             explanation = ReadableCertificate.explain(certificate, maxSteps);
         } catch (IOException e) {
-            throw new BadInputException(certificate + ": " + e, e);
+            throw new BadInputException(certificate + ": cannot read it: " + IoMessages.plain(e), e);
         } catch (IllegalArgumentException e) {
             // Unreachable for a verified certificate; reported as bad input all the same.
             throw new BadInputException(certificate + ": cannot explain: " + e.getMessage(), e);
@@ -97,7 +99,7 @@ final class ExplainCommand implements Callable<Integer> {
                 CertifiedReduction.Checked checked = CertifiedReduction.writeVerified(r.certificate(), certificateOut);
                 stdout.println("wrote " + certificateOut + "; " + Format.verified(checked));
             } catch (IOException e) {
-                throw new BadInputException(certificateOut + ": cannot write the certificate: " + e, e);
+                throw new BadInputException(certificateOut + ": cannot write the certificate: " + IoMessages.plain(e), e);
             }
         }
         return ExitCodes.OK;

@@ -3,11 +3,15 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.CertificateExport;
+import org.chirocore.cert.CertificateWriter;
+import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -31,6 +35,9 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--out-dir", paramLabel = "DIR", required = true, description = "An existing directory.")
     private Path outDir;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--lrat", description = "Also write DIR/NAME.lrat: the proof with the unit-propagation hints "
             + "the verifier finds for every step.")
     private boolean lrat;
@@ -40,11 +47,14 @@ final class ExportCommand implements Callable<Integer> {
         if (!Files.isDirectory(outDir)) {
             throw new BadInputException(outDir + ": not an existing directory", null);
         }
+        String name = CertificateWriter.baseName(certificate);
+        output.checkDirectory(outDir, List.of(certificate),
+                lrat ? List.of(name + ".cnf", name + ".drat", name + ".lrat") : List.of(name + ".cnf", name + ".drat"));
         CertificateExport.Exported e;
         try {
             e = CertificateExport.export(certificate, outDir, lrat);
         } catch (IOException ex) {
-            throw new BadInputException(certificate + ": " + ex, ex);
+            throw new BadInputException(certificate + ": cannot export it: " + IoMessages.plain(ex), ex);
         } catch (IllegalArgumentException ex) {
             // Malformed JSON, a wrong digest, bases that are no matroid's and malformed relations
             // are all reported as IllegalArgumentException subclasses with a full sentence.

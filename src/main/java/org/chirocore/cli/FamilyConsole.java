@@ -1,30 +1,59 @@
 package org.chirocore.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
 
 import org.chirocore.family.FamilyRun;
+import org.chirocore.family.MemberResult;
 
 /**
- * Progress of a family run on a terminal: one line per stage of a member ("  12.3 s  n = 5:
- * certifying"), so that members running on several threads do not overwrite each other. Silent
- * when the JVM has no terminal.
+ * The console of a family run. Each member's line goes to standard output, flushed, as soon as
+ * the member is complete, so that a batch job stopped by its time limit still leaves every
+ * finished member in its log. Progress goes to standard error, one line per stage of a member
+ * ("  12.3 s  n = 5: certifying") so that members running on several threads do not overwrite
+ * each other: on a terminal, or always with {@code --progress} (for a log file).
  */
 final class FamilyConsole implements FamilyRun.Listener {
+    private final PrintWriter out;
     private final PrintWriter err;
+    private final boolean progress;
+    private final Path dir;
     private final long started = System.nanoTime();
 
-    private FamilyConsole(PrintWriter err) {
+    private FamilyConsole(PrintWriter out, PrintWriter err, boolean progress, Path dir) {
+        this.out = out;
         this.err = err;
+        this.progress = progress;
+        this.dir = dir;
     }
 
-    /** Progress on {@code err} when the JVM has a terminal; silent otherwise. */
-    static FamilyRun.Listener ifInteractive(PrintWriter err) {
-        return System.console() != null ? new FamilyConsole(err) : FamilyRun.Listener.SILENT;
+    /**
+     * Member lines on {@code out}; progress on {@code err} when the JVM has a terminal or
+     * {@code forceProgress} is set.
+     *
+     * @param dir the run's directory, to name the certificates in member lines
+     */
+    static FamilyConsole of(PrintWriter out, PrintWriter err, boolean forceProgress, Path dir) {
+        return new FamilyConsole(out, err, forceProgress || System.console() != null, dir);
     }
 
     @Override
     public synchronized void stage(int n, String stage) {
-        err.println(String.format("%7.1f s  n = %d: %s", (System.nanoTime() - started) / 1e9, n, stage));
-        err.flush();
+        if (progress) {
+            err.println(String.format("%7.1f s  n = %d: %s", (System.nanoTime() - started) / 1e9, n, stage));
+            err.flush();
+        }
+    }
+
+    @Override
+    public synchronized void finished(MemberResult m) {
+        if (m instanceof MemberResult.Certified c) {
+            out.println("n = " + m.n() + ": core " + Format.shape(c.facts().core().rank(), c.facts().core().size(),
+                    c.facts().core().basisCount()) + "; " + c.status() + (c.reused() ? " (reused)" : "") + "; "
+                    + dir.resolve(c.certificate()));
+        } else {
+            out.println("n = " + m.n() + ": " + m.status());
+        }
+        out.flush();
     }
 }

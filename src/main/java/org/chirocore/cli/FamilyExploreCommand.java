@@ -13,6 +13,7 @@ import org.chirocore.family.FamilyException;
 import org.chirocore.family.FamilyExploration;
 import org.chirocore.family.ShapeFollow;
 import org.chirocore.family.VertexRule;
+import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -63,6 +64,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
     public Integer call() {
         int[] bounds = family.bounds();
         Path out = family.out();
+        family.checkOut();
         if (runs < 1) {
             throw new ParameterException(spec.commandLine(), "--runs must be at least 1, not " + runs + ".");
         }
@@ -83,15 +85,15 @@ final class FamilyExploreCommand implements Callable<Integer> {
             shape = follow == null ? Optional.empty() : Optional.of(ShapeFollow.Shape.parse(follow));
             FamilyExploration.Settings settings = new FamilyExploration.Settings(seed.seed(), runs, budget.budget(),
                     rules, targetRank == null ? OptionalInt.empty() : OptionalInt.of(targetRank));
-            report = new FamilyExploration(family.definition(), out, settings,
-                    FamilyConsole.ifInteractive(spec.commandLine().getErr())).run(bounds[0], bounds[1]);
+            report = new FamilyExploration(family.definition(), out, settings, family.console())
+                    .run(bounds[0], bounds[1]);
             if (shape.isPresent()) {
                 ShapeFollow.write(out, shape.get(), ShapeFollow.follow(report, shape.get()));
             }
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the exploration's files: " + e, e);
+            throw new BadInputException(out + ": cannot write the exploration's files: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
         for (FamilyExploration.MemberFindings m : report.members()) {

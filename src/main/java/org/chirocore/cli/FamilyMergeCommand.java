@@ -3,6 +3,7 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
@@ -11,8 +12,10 @@ import org.chirocore.family.FamilyException;
 import org.chirocore.family.FamilyMerge;
 import org.chirocore.family.FamilyRun;
 import org.chirocore.family.FamilyTable;
+import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -25,8 +28,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "family-merge", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = {"Join the output directories of the shards of one family run (family --shard i/k) into DIR: "
                 + "the certificates, re-verified, and one table DIR/table.md and DIR/table.json.",
-                "Refuses shards of another family or definition, seed or strategy, and an n present twice with "
-                        + "different content."})
+                "Refuses shards of another family or definition, seed or strategy, and a set of shards with one "
+                        + "missing or given twice."})
 final class FamilyMergeCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -40,15 +43,23 @@ final class FamilyMergeCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "The merged directory (created if missing).")
     private Path out;
 
+    @Mixin
+    private OutputOptions output;
+
     @Override
     public Integer call() {
+        List<Path> inputs = new ArrayList<>(List.of(file));
+        for (Path shard : shards) {
+            inputs.add(shard.resolve(FamilyRun.TABLE_JSON));
+        }
+        output.checkDirectory(out, inputs, List.of(FamilyRun.TABLE_MD, FamilyRun.TABLE_JSON));
         FamilyTable table;
         try {
             table = FamilyMerge.merge(FamilyDefinition.read(file), shards, out);
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException("cannot merge into " + out + ": " + e, e);
+            throw new BadInputException("cannot merge into " + out + ": " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
         w.println("merged " + table.rows().size() + " members from " + shards.size() + " shards; wrote "

@@ -1,6 +1,9 @@
 package org.chirocore.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
 
 import org.chirocore.family.FamilyDefinition;
 import org.chirocore.family.FamilyException;
@@ -25,9 +28,30 @@ final class FamilyOptions {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "The output directory (created if missing).")
     private Path out;
 
+    @Option(names = "--progress", description = "Print progress lines on standard error even when it is not a "
+            + "terminal (e.g. a batch job's log file).")
+    private boolean progress;
+
     /** The output directory. */
     Path out() {
         return out;
+    }
+
+    /**
+     * Checks the output directory before any work: not an input, creatable, writable.
+     *
+     * @param otherInputs input files besides the definition (e.g. a prediction)
+     * @throws BadInputException naming the directory when it cannot be used
+     */
+    void checkOut(Path... otherInputs) {
+        List<Path> inputs = new ArrayList<>(Arrays.asList(otherInputs));
+        inputs.add(file);
+        OutputOptions.checkRunDirectory(out, inputs);
+    }
+
+    /** Member lines on standard output as they complete; progress on standard error (terminal or --progress). */
+    FamilyConsole console() {
+        return FamilyConsole.of(mixee.commandLine().getOut(), mixee.commandLine().getErr(), progress, out);
     }
 
     /**

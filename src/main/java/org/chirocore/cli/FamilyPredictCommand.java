@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 
 import org.chirocore.family.FamilyException;
 import org.chirocore.family.FamilyPrediction;
+import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -41,6 +42,7 @@ final class FamilyPredictCommand implements Callable<Integer> {
     public Integer call() {
         int[] bounds = family.bounds();
         Path out = family.out();
+        family.checkOut(predict);
         List<FamilyPrediction.Outcome> outcomes;
         try {
             FamilyPrediction.Prediction prediction = FamilyPrediction.Prediction.read(predict);
@@ -49,7 +51,7 @@ final class FamilyPredictCommand implements Callable<Integer> {
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the prediction's certificates: " + e, e);
+            throw new BadInputException(out + ": cannot write the prediction's certificates: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
         int exit = ExitCodes.OK;

@@ -9,6 +9,7 @@ import org.chirocore.family.FamilyRun;
 import org.chirocore.family.FamilyTable;
 import org.chirocore.family.MemberResult;
 import org.chirocore.family.Shard;
+import org.chirocore.io.IoMessages;
 import org.chirocore.search.Strategy;
 
 import picocli.CommandLine.Command;
@@ -40,6 +41,9 @@ final class FamilyRunCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--threads", paramLabel = "T", defaultValue = "1",
             description = "How many members run at once (default: ${DEFAULT-VALUE}); the certificates do not depend on it.")
     private int threads;
@@ -52,6 +56,7 @@ final class FamilyRunCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         int[] bounds = family.bounds();
+        family.checkOut();
         if (threads < 1) {
             throw new ParameterException(spec.commandLine(), "--threads must be at least 1, not " + threads + ".");
         }
@@ -59,26 +64,17 @@ final class FamilyRunCommand implements Callable<Integer> {
         try {
             FamilyRun.Settings settings = new FamilyRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(),
                     threads);
-            table = new FamilyRun(family.definition(), family.out(), settings,
-                    FamilyConsole.ifInteractive(spec.commandLine().getErr())).run(bounds[0], bounds[1], shard());
+            FamilyRun run = new FamilyRun(family.definition(), family.out(), settings, family.console());
+            output.checkReplacing(run.otherRun());
+            table = run.run(bounds[0], bounds[1], shard());
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(family.out() + ": cannot write the family's files: " + e, e);
+            throw new BadInputException(family.out() + ": cannot write the family's files: " + IoMessages.plain(e), e);
         }
+        // The member lines were printed by the console as each member completed.
         PrintWriter w = spec.commandLine().getOut();
-        boolean unknown = false;
-        for (FamilyTable.Row row : table.rows()) {
-            MemberResult m = row.member();
-            if (m instanceof MemberResult.Certified c) {
-                w.println("n = " + m.n() + ": core " + Format.shape(c.facts().core().rank(), c.facts().core().size(),
-                        c.facts().core().basisCount()) + "; " + c.status() + (c.reused() ? " (reused)" : "") + "; "
-                        + family.out().resolve(c.certificate()));
-            } else {
-                unknown |= m instanceof MemberResult.Unknown;
-                w.println("n = " + m.n() + ": " + m.status());
-            }
-        }
+        boolean unknown = table.rows().stream().anyMatch(row -> row.member() instanceof MemberResult.Unknown);
         w.println("wrote " + family.out().resolve(FamilyRun.TABLE_MD) + " and "
                 + family.out().resolve(FamilyRun.TABLE_JSON));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;

@@ -1,6 +1,9 @@
 package org.chirocore.cli;
 
 import java.util.List;
+import java.util.Optional;
+
+import org.chirocore.matroid.NamedMatroid;
 
 import org.chirocore.pipeline.CertifiedReduction;
 
@@ -27,6 +30,11 @@ final class Format {
     }
 
     /** The labels separated by spaces, or "none". */
+    /** "the Fano plane F7 (source)", or says that the catalogue has no such matroid. */
+    static String named(Optional<NamedMatroid> name) {
+        return name.map(n -> n.title() + " (" + n.source() + ")").orElse("not in the catalogue of named matroids");
+    }
+
     static String labels(List<String> labels) {
         return labels.isEmpty() ? "none" : String.join(" ", labels);
     }

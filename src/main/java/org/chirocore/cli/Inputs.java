@@ -1,10 +1,10 @@
 package org.chirocore.cli;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.chirocore.io.AtomicFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.io.MatroidFileException;
 import org.chirocore.io.MatroidFiles;
@@ -42,24 +42,12 @@ final class Inputs {
         }
     }
 
-    /**
-     * Fails early when {@code file}'s directory does not exist, so a long search is not wasted on
-     * an output that cannot be written.
-     */
-    static void requireDirectoryOf(Path file) {
-        Path parent = file.toAbsolutePath().getParent();
-        if (parent == null || !Files.isDirectory(parent)) {
-            throw new BadInputException(file + ": cannot write the file: the directory " + parent + " does not exist",
-                    null);
-        }
-    }
-
     /** Writes {@code json} to {@code file} atomically. */
     static void write(Path file, Json json) {
         try {
             AtomicFiles.writeJson(file, json);
         } catch (IOException e) {
-            throw new BadInputException(file + ": cannot write the file: " + e, e);
+            throw new BadInputException(file + ": cannot write the file: " + IoMessages.plain(e), e);
         }
     }
 
@@ -68,7 +56,7 @@ final class Inputs {
         try {
             AtomicFiles.writeString(file, text);
         } catch (IOException e) {
-            throw new BadInputException(file + ": cannot write the file: " + e, e);
+            throw new BadInputException(file + ": cannot write the file: " + IoMessages.plain(e), e);
         }
     }
 }

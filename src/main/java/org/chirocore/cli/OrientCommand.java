@@ -2,6 +2,7 @@ package org.chirocore.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
@@ -65,11 +66,12 @@ final class OrientCommand implements Callable<Integer> {
             description = "Decide a matrix over Q by the SAT search too, ignoring its determinant signs.")
     private boolean noRealisation;
 
+    @Mixin
+    private OutputOptions output;
+
     @Override
     public Integer call() {
-        if (witnessOut != null) {
-            Inputs.requireDirectoryOf(witnessOut);
-        }
+        output.checkFiles(Arrays.asList(file, start), witnessOut);
         Matroid m = Inputs.read(file).matroid();
         OrientabilityDecider search = new LazySatDecider(budget.budget());
         if (start != null) {

@@ -3,12 +3,15 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Discovery;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.Refutation;
 import org.chirocore.pipeline.CertifiedReduction;
@@ -69,6 +72,9 @@ final class ReduceCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private OutputOptions output;
+
     @Option(names = "--out", paramLabel = "FILE", required = true,
             description = "Where to write the certificate of the core (written atomically; a large proof goes "
                     + "beside it as NAME.drat.gz) and checked by the independent verifier. Nothing is written unless "
@@ -81,18 +87,16 @@ final class ReduceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        // A large proof goes beside the certificate, so its name is an output too.
+        output.checkFiles(Arrays.asList(file), out, CertificateWriter.dratFile(out), witnessOut);
         Subject input = input();
-        Inputs.requireDirectoryOf(out);
-        if (witnessOut != null) {
-            Inputs.requireDirectoryOf(witnessOut);
-        }
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CertifiedReduction.Outcome outcome;
         try {
             outcome = new CertifiedReduction(new CertifiedReduction.Settings(seed.seed(), strategy, budget.budget()), progress)
                     .run(focus ? input : input.withoutFocus(), out);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the certificate: " + e, e);
+            throw new BadInputException(out + ": cannot write the certificate: " + IoMessages.plain(e), e);
         } finally {
             progress.finish();
         }
@@ -135,6 +139,7 @@ final class ReduceCommand implements Callable<Integer> {
         ExplicitMatroid core = certificate.core();
         w.println("non-orientable core: " + Format.shape(core.rank(), core.size(), core.basisCount()) + " (from "
                 + from + ")");
+        w.println("isomorphism class: " + Format.named(Catalogue.identify(core)));
         w.println("contracted: " + Format.labels(certificate.provenance().contracted()));
         w.println("deleted: " + Format.labels(certificate.provenance().deleted()));
         w.println("witnesses: " + 2 * certificate.minimality().size()

@@ -3,22 +3,27 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 
+import org.chirocore.io.IoMessages;
 import org.chirocore.report.CertificateReport;
 import org.chirocore.report.Document;
-import org.chirocore.report.FamilyReport;
 import org.chirocore.report.ReportException;
 import org.chirocore.report.ReportFormat;
 import org.chirocore.report.ReportWriter;
+import org.chirocore.report.RunReport;
 
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -29,7 +34,7 @@ import picocli.CommandLine.Spec;
  * Markdown, LaTeX or HTML (docs/reports.md).
  */
 @Command(name = "report", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-        description = {"Write a report for a paper on a certificate (only if it verifies) or on a family run directory: "
+        description = {"Write a report for a paper on a certificate (only if it verifies) or on a run directory: "
                 + "the statement, the construction, the core, the proof's size, the hashes and the verify command."},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:report written",
@@ -45,9 +50,16 @@ final class ReportCommand implements Callable<Integer> {
             description = "md, tex or html (default: ${DEFAULT-VALUE}).")
     private ReportFormat format;
 
-    @Option(names = "--out", paramLabel = "FILE", required = true, description = "The report file; a Markdown report's "
-            + "pictures go beside it as FILE-STEM-NAME.svg.")
+    @Option(names = "--out", paramLabel = "FILE", required = true, description = "The report file (a directory with "
+            + "--index); a Markdown report's pictures go beside it as STEM-NAME.svg.")
     private Path out;
+
+    @Option(names = "--index", description = "With --run: --out is a directory, and the run's report (run.EXT), "
+            + "a report on each of its certificates that verifies, and index.EXT linking them are written into it.")
+    private boolean index;
+
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--input", paramLabel = "FILE", description = "The matroid file of a given-matroid provenance: "
             + "the provenance is verified too and the file is named in the verify command.")
@@ -58,7 +70,8 @@ final class ReportCommand implements Callable<Integer> {
         @Parameters(paramLabel = "CERT", description = "A certificate file.")
         private Path certificate;
 
-        @Option(names = "--family", paramLabel = "DIR", description = "A family run directory (with table.json).")
+        @Option(names = {"--run", "--family"}, paramLabel = "DIR", description = "A run directory: a family run "
+                + "(table.json), an exploration (explore.json) or a checked prediction (n=K.predicted.cert.json).")
         private Path family;
     }
 
@@ -84,16 +97,44 @@ final class ReportCommand implements Callable<Integer> {
         if (subject.family != null && !Files.isDirectory(subject.family)) {
             throw new BadInputException(subject.family + ": not an existing directory", null);
         }
+        if (index && subject.family == null) {
+            throw new BadInputException("--index applies to --run DIR, not to a certificate", null);
+        }
+        if (index) {
+            String ext = "." + format.extension();
+            output.checkDirectory(out, reportInputs(), List.of("index" + ext, "run" + ext));
+        } else {
+            output.checkFiles(reportInputs(), out);
+        }
         try {
-            Document doc = subject.family != null ? FamilyReport.of(subject.family)
-                    : CertificateReport.of(subject.certificate, Optional.ofNullable(input));
-            List<Path> written = ReportWriter.write(doc, format, out);
+            List<Path> written;
+            if (index) {
+                Files.createDirectories(out);
+                written = RunReport.writeAll(subject.family, format, out);
+            } else {
+                Document doc = subject.family != null ? RunReport.of(subject.family)
+                        : CertificateReport.of(subject.certificate, Optional.ofNullable(input));
+                written = ReportWriter.write(doc, format, out);
+            }
             spec.commandLine().getOut().println("wrote " + written.stream().map(Path::toString).collect(Collectors.joining(", ")));
         } catch (ReportException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot be written: " + e, e);
+            throw new BadInputException(out + ": cannot be written: " + IoMessages.plain(e), e);
         }
         return ExitCodes.OK;
+    }
+
+    /** The files the report reads: the certificate and --input, or the family directory's files. */
+    private List<Path> reportInputs() {
+        List<Path> inputs = new ArrayList<>(Arrays.asList(subject.certificate, input));
+        if (subject.family != null) {
+            try (Stream<Path> files = Files.list(subject.family)) {
+                files.forEach(inputs::add);
+            } catch (IOException e) {
+                throw new BadInputException(subject.family + ": cannot list the directory: " + IoMessages.plain(e), e);
+            }
+        }
+        return inputs;
     }
 }

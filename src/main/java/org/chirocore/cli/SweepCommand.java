@@ -3,9 +3,11 @@ package org.chirocore.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.chirocore.family.Shard;
+import org.chirocore.io.IoMessages;
 import org.chirocore.search.Strategy;
 import org.chirocore.sweep.HyperplaneOrbits;
 import org.chirocore.sweep.PairResult;
@@ -73,7 +75,7 @@ final class SweepCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--n must lie within " + SweepRun.MIN_DIMENSION + ".."
                     + HyperplaneOrbits.MAX_DIMENSION + "; got \"" + range + "\".");
         }
-        Inputs.requireDirectoryOf(out);
+        OutputOptions.checkRunDirectory(out, List.of());
         PrintWriter err = spec.commandLine().getErr();
         long started = System.nanoTime();
         SweepRun.Listener progress = line -> {
@@ -88,7 +90,7 @@ final class SweepCommand implements Callable<Integer> {
             result = new SweepRun(out, new SweepRun.Settings(seed, Strategy.CONTRACT_FIRST, budget.budget(), threads,
                     part), progress).run(bounds[0], bounds[1]);
         } catch (IOException e) {
-            throw new BadInputException(out + ": cannot write the sweep's files: " + e, e);
+            throw new BadInputException(out + ": cannot write the sweep's files: " + IoMessages.plain(e), e);
         }
         return report(spec.commandLine().getOut(), result, out);
     }

@@ -12,6 +12,9 @@ import java.util.concurrent.Callable;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
 import org.chirocore.io.Json;
+import org.chirocore.matroid.Catalogue;
+import org.chirocore.report.CertificateSummary;
+import org.chirocore.report.ReportException;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -71,12 +74,25 @@ final class VerifyCommand implements Callable<Integer> {
                 out.println(file + ": " + (report.passed() ? "verified" : "REJECTED") + " (" + report.millis() + " ms"
                         + producedMillis(file).map(p -> "; producing it took " + p + " ms, by its run section").orElse("")
                         + ")");
+                if (report.passed()) {
+                    // named only after the independent check passed, by producer code outside the checker
+                    out.println(file + ": isomorphism class of the core: " + named(file));
+                }
             }
         }
         if (json) {
             out.println(new Json.Arr(reports).toText());
         }
         return allPassed ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+    }
+
+    /** The core's name in the catalogue; a core the report model cannot hold (over 64 elements) is not named. */
+    private static String named(Path file) {
+        try {
+            return Format.named(Catalogue.identify(CertificateSummary.read(file).core()));
+        } catch (ReportException e) {
+            return "not named (" + e.getMessage() + ")";
+        }
     }
 
     private static Json toJson(Report report) {

@@ -9,6 +9,8 @@ import java.util.Set;
 import java.util.function.Supplier;
 
 import org.chirocore.cert.Source;
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.io.Sha256;
 import org.chirocore.matroid.AffineCube;
@@ -73,9 +75,9 @@ public record FamilyDefinition(String source, String name, String description, F
     public static FamilyDefinition read(Path file) {
         String source = file.toString();
         try {
-            return parse(source, Json.parseUtf8(Files.readAllBytes(file)));
+            return parse(source, Json.parseUtf8(InputFiles.read(file)));
         } catch (IOException e) {
-            throw new FamilyException(source + ": cannot read the file: " + e.getMessage(), e);
+            throw new FamilyException(source + ": cannot read the file: " + IoMessages.plain(e), e);
         } catch (FamilyException e) {
             throw e;
         } catch (IllegalArgumentException e) {

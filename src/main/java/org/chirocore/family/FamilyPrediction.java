@@ -14,6 +14,8 @@ import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
 import org.chirocore.cert.Provenance;
 import org.chirocore.cert.Source;
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -72,7 +74,7 @@ public final class FamilyPrediction {
         public static Prediction read(Path file) {
             String source = file.toString();
             try {
-                Json.Obj o = Json.parseUtf8(Files.readAllBytes(file)).asObject("the prediction");
+                Json.Obj o = Json.parseUtf8(InputFiles.read(file)).asObject("the prediction");
                 o.requireOnly(FIELDS);
                 if (o.has("members") == o.has("rule")) {
                     throw new FamilyException(source + ": give either \"members\" (a core per n) or \"rule\" "
@@ -109,7 +111,7 @@ public final class FamilyPrediction {
                 }
                 return new Prediction(source, o.requireString("family"), candidates);
             } catch (IOException e) {
-                throw new FamilyException(source + ": cannot read the file: " + e.getMessage(), e);
+                throw new FamilyException(source + ": cannot read the file: " + IoMessages.plain(e), e);
             } catch (FamilyException e) {
                 throw e;
             } catch (IllegalArgumentException e) {

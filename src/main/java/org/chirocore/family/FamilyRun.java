@@ -14,6 +14,8 @@ import java.util.concurrent.Future;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.Report;
+import org.chirocore.io.InputFiles;
+import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.search.Progress;
@@ -61,13 +63,21 @@ public final class FamilyRun {
         }
     }
 
-    /** Receives the stage each member is in ("reducing", "certifying", …); called from worker threads. */
+    /**
+     * Receives the stage each member is in ("reducing", "certifying", …) and each member's result
+     * as soon as it is complete, so a batch job's log holds every finished member even when the
+     * job is stopped; called from worker threads.
+     */
     @FunctionalInterface
     public interface Listener {
         /** A listener that ignores everything. */
         Listener SILENT = (n, stage) -> { };
 
         void stage(int n, String stage);
+
+        /** The member's result, its certificate (if any) written and verified; by default ignored. */
+        default void finished(MemberResult member) {
+        }
     }
 
     private final FamilyDefinition family;
@@ -81,6 +91,34 @@ public final class FamilyRun {
         this.dir = dir;
         this.settings = settings;
         this.listener = listener;
+    }
+
+    /**
+     * Why the directory holds another run, whose certificates this run would replace: its table
+     * records another family, definition, seed or strategy, or is not a family table at all.
+     * Empty when the directory is new or holds an earlier part of this same run (resuming).
+     */
+    public Optional<String> otherRun() {
+        Path file = dir.resolve(TABLE_JSON);
+        if (!Files.exists(file)) {
+            return Optional.empty();
+        }
+        try {
+            Json.Obj table = Json.parseUtf8(InputFiles.read(file)).asObject("the table");
+            String family = table.requireString("family");
+            boolean sameDefinition = table.requireString("definitionSha256").equals(this.family.sha256());
+            long seed = table.requireLong("seed");
+            String strategy = table.requireString("strategy");
+            if (family.equals(this.family.name()) && sameDefinition && seed == settings.seed()
+                    && strategy.equals(settings.strategy().id())) {
+                return Optional.empty();
+            }
+            return Optional.of(file + " records a run of family \"" + family + "\""
+                    + (sameDefinition ? "" : " (another definition)") + " with seed " + seed + " and strategy "
+                    + strategy + ", not this one");
+        } catch (IOException | IllegalArgumentException e) {
+            return Optional.of(file + " is not a family table");
+        }
     }
 
     /** The certificate's file name of the member at n: {@code n=K.cert.json}. */
@@ -129,7 +167,11 @@ public final class FamilyRun {
         try {
             List<Future<MemberResult>> futures = new ArrayList<>();
             for (FamilyDefinition.Member m : members) {
-                futures.add(pool.submit(() -> member(m)));
+                futures.add(pool.submit(() -> {
+                    MemberResult result = member(m);
+                    listener.finished(result);
+                    return result;
+                }));
             }
             for (Future<MemberResult> f : futures) {
                 results.add(f.get());
@@ -143,7 +185,7 @@ public final class FamilyRun {
             pool.shutdownNow();
         }
         FamilyTable table = FamilyTable.of(family, settings, results);
-        table.write(dir);
+        table.write(dir, from, to, shard);
         return table;
     }
 

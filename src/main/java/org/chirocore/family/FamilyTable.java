@@ -3,14 +3,18 @@ package org.chirocore.family;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
+import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.NamedMatroid;
 
 /**
  * The family table: one row per n with the pulled matroid's size and rank, the core's size,
@@ -57,11 +61,22 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
         return new FamilyTable(family, settings, rows);
     }
 
-    /** Writes {@link FamilyRun#TABLE_MD} and {@link FamilyRun#TABLE_JSON} into {@code dir}, atomically. */
-    void write(Path dir) throws IOException {
+    /**
+     * Writes {@link FamilyRun#TABLE_MD} and {@link FamilyRun#TABLE_JSON} into {@code dir},
+     * atomically. The JSON records which part of which range the table covers (member
+     * {@value #PART}: from, to, shard, of), so that {@link FamilyMerge} can tell a complete set of
+     * shards from one with a shard missing or repeated.
+     */
+    void write(Path dir, int from, int to, Shard shard) throws IOException {
         AtomicFiles.writeString(dir.resolve(FamilyRun.TABLE_MD), toMarkdown());
-        AtomicFiles.writeJson(dir.resolve(FamilyRun.TABLE_JSON), toJson());
+        Map<String, Json> members = new LinkedHashMap<>(toJson().members());
+        members.put(PART, Json.Obj.builder().put("from", from).put("to", to).put("shard", shard.index())
+                .put("of", shard.count()).build());
+        AtomicFiles.writeJson(dir.resolve(FamilyRun.TABLE_JSON), new Json.Obj(members));
     }
+
+    /** The member of the table's JSON file naming the part of the run it covers. */
+    static final String PART = "part";
 
     /** The table in Markdown. */
     public String toMarkdown() {
@@ -99,6 +114,8 @@ public record FamilyTable(FamilyDefinition family, FamilyRun.Settings settings, 
                 CoreDescription d = row.description().orElseThrow();
                 b.append("- certificate: `").append(c.certificate()).append("` (sha256 ").append(c.facts().sha256())
                         .append("), ").append(c.status()).append("\n");
+                b.append("- isomorphism class: ").append(Catalogue.identify(c.facts().core()).map(NamedMatroid::title)
+                        .orElse("not in the catalogue of named matroids")).append("\n");
                 b.append("- core vertices by weight: ").append(d.verticesText()).append("\n");
                 b.append("- non-bases by weights: ").append(d.nonBasesText()).append("\n");
             } else {

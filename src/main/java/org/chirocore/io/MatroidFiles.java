@@ -1,7 +1,6 @@
 package org.chirocore.io;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -16,6 +15,7 @@ import org.chirocore.matroid.Field;
 import org.chirocore.matroid.InvalidMatroidException;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.MatrixMatroid;
+import org.chirocore.matroid.TooLargeException;
 
 /**
  * Reads and writes the matroid file format of {@code docs/matroid-format.md}: a JSON object with
@@ -66,9 +66,9 @@ public final class MatroidFiles {
     public static Hashed readHashed(Path file) throws MatroidFileException {
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(file);
+            bytes = InputFiles.read(file);
         } catch (IOException e) {
-            throw new MatroidFileException(file.toString(), "cannot read the file: " + e, e);
+            throw new MatroidFileException(file.toString(), "cannot read the file: " + IoMessages.plain(e), e);
         }
         Json json;
         try {
@@ -188,6 +188,8 @@ public final class MatroidFiles {
         try {
             return data.equals("bases") ? ExplicitMatroid.fromBases(names, rank, sets)
                     : ExplicitMatroid.fromNonBases(names, rank, sets);
+        } catch (TooLargeException e) {
+            throw new JsonValueException("too large: " + e.getMessage());
         } catch (InvalidMatroidException e) {
             throw new JsonValueException((data.equals("bases") ? "the bases do not form a matroid: "
                     : "the non-bases do not define a matroid: ") + e.getMessage());

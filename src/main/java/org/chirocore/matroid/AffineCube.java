@@ -22,8 +22,8 @@ import java.util.concurrent.ConcurrentHashMap;
  * for k elements); label look-ups cost O(n). Immutable.
  */
 public final class AffineCube implements Matroid {
-    /** Largest supported dimension (2^16 elements). */
-    public static final int MAX_DIMENSION = 16;
+    /** Largest supported dimension: {@link Limits#CUBE_DIMENSION}. */
+    public static final int MAX_DIMENSION = Limits.CUBE_DIMENSION;
 
     private static final Map<List<Object>, AffineCube> CACHE = new ConcurrentHashMap<>();
 

@@ -18,8 +18,8 @@ import java.util.Set;
  * <p>Rank queries cost O(|bases|); basis tests cost O(1). Immutable.
  */
 public final class ExplicitMatroid implements Matroid {
-    /** Largest ground set an explicit matroid holds (bases are 64-bit masks). */
-    public static final int MAX_ELEMENTS = 64;
+    /** Largest ground set an explicit matroid holds: {@link Limits#ELEMENTS} (bases are 64-bit masks). */
+    public static final int MAX_ELEMENTS = Limits.ELEMENTS;
 
     private final List<String> labels;
     private final int rank;
@@ -42,9 +42,14 @@ public final class ExplicitMatroid implements Matroid {
      *
      * @throws InvalidMatroidException when the family is empty, a basis has the wrong size, an
      *     index is out of range or repeated, or basis exchange fails (the message names the pair)
+     * @throws TooLargeException when more than {@link Limits#EXPLICIT_SUBSETS} bases are given
      */
     public static ExplicitMatroid fromBases(List<String> labels, int rank, Collection<int[]> bases) {
         checkGround(labels, rank);
+        if (bases.size() > Limits.EXPLICIT_SUBSETS) {
+            throw new TooLargeException(bases.size() + " bases are given; a matroid given by its bases has at most "
+                    + Limits.EXPLICIT_SUBSETS + ".");
+        }
         Set<Long> seen = new HashSet<>();
         List<Long> masks = new ArrayList<>();
         for (int[] b : bases) {
@@ -65,9 +70,11 @@ public final class ExplicitMatroid implements Matroid {
      * The matroid whose bases are all {@code rank}-subsets except the listed non-bases.
      *
      * @throws InvalidMatroidException as {@link #fromBases}
+     * @throws TooLargeException before enumerating, when C(size, rank) exceeds {@link Limits#EXPLICIT_SUBSETS}
      */
     public static ExplicitMatroid fromNonBases(List<String> labels, int rank, Collection<int[]> nonBases) {
         checkGround(labels, rank);
+        Limits.requireExplicit(labels.size(), rank, "The matroid");
         Set<Long> excluded = new HashSet<>();
         for (int[] b : nonBases) {
             excluded.add(checkedMask(labels.size(), rank, b, "non-basis"));

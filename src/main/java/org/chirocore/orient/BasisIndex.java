@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 
 /**
@@ -15,8 +16,8 @@ import org.chirocore.matroid.Matroid;
  * <p>Holds at most 64 elements and {@value #MAX_SUBSETS} candidate subsets. Immutable.
  */
 public final class BasisIndex {
-    /** Largest C(size, rank) for which the subset table is built (1 GiB of ints would be too much). */
-    public static final long MAX_SUBSETS = 1L << 27;
+    /** Largest C(size, rank) for which the subset table is built: {@link Limits#INDEXED_SUBSETS}. */
+    public static final long MAX_SUBSETS = Limits.INDEXED_SUBSETS;
 
     private final List<String> labels;
     private final int size;
@@ -31,7 +32,7 @@ public final class BasisIndex {
         this.size = m.size();
         this.rank = m.rank();
         long subsets = ElementSets.binomial(size, rank);
-        if (size > 64 || subsets > MAX_SUBSETS) {
+        if (size > Limits.ELEMENTS || subsets > MAX_SUBSETS) {
             throw new EnumerationLimitException("A matroid of rank " + rank + " on " + size + " elements has "
                     + (subsets == Long.MAX_VALUE ? "too many" : Long.toString(subsets)) + " candidate bases; at most "
                     + MAX_SUBSETS + " on at most 64 elements are enumerated. Reduce it to a smaller minor first.");

@@ -8,11 +8,14 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
 
 import org.chirocore.io.Json;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.InvalidMatroidException;
 
 /**
  * What a report says about a certificate, read from its JSON (docs/certificate-format.md). It
@@ -22,11 +25,11 @@ import org.chirocore.io.Json;
  * @param file the certificate's file name
  * @param contentSha256 the {@code sha256} member: the hash of the canonical content
  * @param fileSha256 the SHA-256 of the file's bytes
- * @param core the core
+ * @param core the core, as a matroid given by its bases
  * @param origin its provenance
  * @param proof the size of the non-orientability proof
  */
-public record CertificateSummary(String file, String contentSha256, String fileSha256, Core core, Origin origin,
+public record CertificateSummary(String file, String contentSha256, String fileSha256, ExplicitMatroid core, Origin origin,
         ProofSize proof) {
 
     /**
@@ -68,20 +71,23 @@ public record CertificateSummary(String file, String contentSha256, String fileS
         }
     }
 
-    private static Core core(Json.Obj core) {
+    private static ExplicitMatroid core(Json.Obj core) {
         List<String> labels = strings(core.requireArray("labels"), "core.labels");
         Json.Arr bases = core.requireArray("bases");
-        long[] masks = new long[bases.size()];
-        for (int i = 0; i < masks.length; i++) {
-            for (Json e : bases.get(i).asArray("core.bases[" + i + "]").elements()) {
-                int element = e.asInt("an element of core.bases[" + i + "]");
-                if (element < 0 || element >= Long.SIZE) {
-                    throw new IllegalArgumentException("core.bases[" + i + "] names element " + element + ", not in 0..63");
-                }
-                masks[i] |= 1L << element;
+        List<int[]> sets = new ArrayList<>();
+        for (int i = 0; i < bases.size(); i++) {
+            List<Json> elements = bases.get(i).asArray("core.bases[" + i + "]").elements();
+            int[] set = new int[elements.size()];
+            for (int j = 0; j < set.length; j++) {
+                set[j] = elements.get(j).asInt("an element of core.bases[" + i + "]");
             }
+            sets.add(set);
         }
-        return new Core(core.requireInt("rank"), labels, masks);
+        try {
+            return ExplicitMatroid.fromBases(labels, core.requireInt("rank"), sets);
+        } catch (InvalidMatroidException e) {
+            throw new IllegalArgumentException("core: " + e.getMessage(), e);
+        }
     }
 
     private static Origin origin(Json.Obj provenance) {

@@ -31,7 +31,7 @@ public final class CubePicture {
             throw new IllegalArgumentException("The cube is drawn for 1 <= n <= " + MAX_CUBE + " only, but n = " + n + ".");
         }
         double[][] xy = layout(n);
-        Svg svg = new Svg(SIZE, SIZE + LEGEND);
+        Canvas svg = new Canvas(SIZE, SIZE + LEGEND);
         for (int v = 0; v < 1 << n; v++) {
             for (int i = 0; i < n; i++) {
                 int w = v | 1 << i;
@@ -52,13 +52,13 @@ public final class CubePicture {
                 svg.circle(x, y, 11, "core", "none", "black");
             }
             if (minusH.contains(label)) {
-                svg.rect(x - 6, y - 6, 12, 12, "minus-h", Svg.PALETTE[1]);
+                svg.rect(x - 6, y - 6, 12, 12, "minus-h", Canvas.PALETTE[1]);
             }
             if (h.contains(label)) {
-                svg.circle(x, y, 6, "h", Svg.PALETTE[0], "white");
+                svg.circle(x, y, 6, "h", Canvas.PALETTE[0], "white");
             }
             if (label.equals(construction.pulled())) {
-                svg.diamond(x, y, 8, "pulled", Svg.PALETTE[4]);
+                svg.diamond(x, y, 8, "pulled", Canvas.PALETTE[4]);
             }
             svg.circle(x, y, 2, "vertex", "black", "none");
             if (n <= 4) {
@@ -68,14 +68,14 @@ public final class CubePicture {
         legend(svg);
         String caption = "The " + n + "-cube (edges grey) with H, -H (the reflection x -> 1 - x of H), the pulled vertex O "
                 + construction.pulled() + " and the core's vertices marked.";
-        return new Document.Picture("cube", caption, svg.toSvg(caption));
+        return new Document.Picture("cube", caption, svg);
     }
 
-    private static void legend(Svg svg) {
+    private static void legend(Canvas svg) {
         double y = SIZE + 10;
-        svg.circle(20, y + 10, 6, "h", Svg.PALETTE[0], "white").text(34, y + 14, "H (vertices of the hyperplane)", "start", 12);
-        svg.rect(14, y + 29, 12, 12, "minus-h", Svg.PALETTE[1]).text(34, y + 39, "-H (reflection of H)", "start", 12);
-        svg.diamond(20, y + 60, 8, "pulled", Svg.PALETTE[4]).text(34, y + 64, "O (pulled vertex)", "start", 12);
+        svg.circle(20, y + 10, 6, "h", Canvas.PALETTE[0], "white").text(34, y + 14, "H (vertices of the hyperplane)", "start", 12);
+        svg.rect(14, y + 29, 12, 12, "minus-h", Canvas.PALETTE[1]).text(34, y + 39, "-H (reflection of H)", "start", 12);
+        svg.diamond(20, y + 60, 8, "pulled", Canvas.PALETTE[4]).text(34, y + 64, "O (pulled vertex)", "start", 12);
         svg.circle(20, y + 85, 11, "core", "none", "black").text(34, y + 89, "vertex of the core", "start", 12);
     }
 

@@ -7,13 +7,20 @@ import java.util.Objects;
  * A report as format-neutral content: a title and a list of blocks, rendered by a
  * {@link ReportFormat}. Text is plain (no markup); each renderer escapes it for its format.
  *
- * @param title the report's title
+ * @param title the report's title in plain text
+ * @param heading the same title as inline pieces (with mathematics where it has any)
  * @param blocks the content, in order
  */
-public record Document(String title, List<Block> blocks) {
+public record Document(String title, List<Inline> heading, List<Block> blocks) {
     public Document {
         Objects.requireNonNull(title, "The title is null.");
+        heading = List.copyOf(heading);
         blocks = List.copyOf(blocks);
+    }
+
+    /** A document whose title is plain text. */
+    public Document(String title, List<Block> blocks) {
+        this(title, List.of(new Text(title)), blocks);
     }
 
     /** A block of content. */
@@ -43,12 +50,17 @@ public record Document(String title, List<Block> blocks) {
         }
     }
 
-    /** A table of plain-text cells; every row has as many cells as the header. */
-    public record Table(List<String> header, List<List<String>> rows) implements Block {
+    /** A table; a cell is an inline piece (text, mono or mathematics); every row has as many cells as the header. */
+    public record Table(List<String> header, List<List<Inline>> rows) implements Block {
+        /** A table of plain-text cells. */
+        public static Table plain(List<String> header, List<List<String>> rows) {
+            return new Table(header, rows.stream().map(r -> r.stream().<Inline>map(Text::new).toList()).toList());
+        }
+
         public Table {
             header = List.copyOf(header);
             rows = rows.stream().map(List::copyOf).toList();
-            for (List<String> row : rows) {
+            for (List<Inline> row : rows) {
                 if (row.size() != header.size()) {
                     throw new IllegalArgumentException("A table row has " + row.size() + " cells, but the header has "
                             + header.size() + ": " + row + ".");
@@ -66,11 +78,34 @@ public record Document(String title, List<Block> blocks) {
     }
 
     /** An inline piece of a paragraph. */
-    public sealed interface Inline permits Text, Mono {
+    public sealed interface Inline permits Text, Mono, Math, Link {
+    }
+
+    /**
+     * Mathematics: LaTeX source for math mode and the same in plain text for the other formats.
+     *
+     * @param latex for example {@code M\\setminus e}
+     * @param text for example {@code M\\e}
+     */
+    public record Math(String latex, String text) implements Inline {
     }
 
     /** Plain text. */
     public record Text(String text) implements Inline {
+    }
+
+    /**
+     * A link to a file beside the report.
+     *
+     * @param href the relative file name (never a URL: reports are self-contained)
+     * @param text what the link says
+     */
+    public record Link(String href, String text) implements Inline {
+        public Link {
+            if (href.contains(":") || href.startsWith("/")) {
+                throw new IllegalArgumentException("A link names a file beside the report, not \"" + href + "\".");
+            }
+        }
     }
 
     /** Text set in a monospaced font: labels, hashes, file names. */
@@ -78,21 +113,27 @@ public record Document(String title, List<Block> blocks) {
     }
 
     /**
-     * An SVG picture.
+     * A picture, drawn as SVG (HTML, Markdown) or TikZ (LaTeX).
      *
      * @param name a short file-name-safe name, e.g. {@code configuration}
      * @param caption what the picture shows
-     * @param svg the {@code <svg>} element, without an XML namespace declaration (added where a
-     *     stand-alone file needs it)
+     * @param canvas its shapes
      */
-    public record Picture(String name, String caption, String svg) {
+    public record Picture(String name, String caption, Canvas canvas) {
         public Picture {
             if (!name.matches("[a-z0-9-]+")) {
                 throw new IllegalArgumentException("A picture name must be lower-case letters, digits and '-', found \"" + name + "\".");
             }
-            if (!svg.startsWith("<svg ")) {
-                throw new IllegalArgumentException("A picture must be an <svg> element.");
-            }
+        }
+
+        /** The {@code <svg>} element, without an XML namespace declaration (added where a stand-alone file needs it). */
+        public String svg() {
+            return canvas.toSvg(caption);
+        }
+
+        /** The {@code tikzpicture} environment. */
+        public String tikz() {
+            return canvas.toTikz();
         }
     }
 }

@@ -49,7 +49,7 @@ public final class LineChart {
         double plotW = WIDTH - LEFT - RIGHT;
         double plotH = HEIGHT - TOP - BOTTOM;
         double spanX = Math.max(1, maxX - minX);
-        Svg svg = new Svg(WIDTH, HEIGHT);
+        Canvas svg = new Canvas(WIDTH, HEIGHT);
         svg.text(WIDTH / 2.0, 22, title, "middle", 14);
         svg.line(LEFT, TOP + plotH, LEFT + plotW, TOP + plotH, "axis", "black", 1);
         svg.line(LEFT, TOP, LEFT, TOP + plotH, "axis", "black", 1);
@@ -64,7 +64,7 @@ public final class LineChart {
         }
         svg.text(LEFT + plotW / 2, HEIGHT - 10, xLabel, "middle", 12).text(14, TOP - 12, yLabel, "start", 12);
         for (int s = 0; s < series.size(); s++) {
-            String colour = Svg.PALETTE[s % Svg.PALETTE.length];
+            String colour = Canvas.PALETTE[s % Canvas.PALETTE.length];
             List<long[]> points = series.get(s).points();
             double[][] xy = new double[points.size()][];
             for (int i = 0; i < xy.length; i++) {
@@ -80,7 +80,7 @@ public final class LineChart {
                         .text(LEFT + plotW - 112, TOP + 11 + 16 * s, series.get(s).name(), "start", 11);
             }
         }
-        return new Document.Picture(name, title, svg.toSvg(title));
+        return new Document.Picture(name, title, svg);
     }
 
     /** The smallest of 1, 2, 5, 10, 20, … that divides [0, max] into at most 8 steps. */

@@ -17,8 +17,8 @@ public enum ReportFormat {
     /** Markdown (CommonMark with pipe tables); pictures as SVG files beside it, linked. */
     MD {
         @Override
-        String begin(String title) {
-            return "# " + text(title) + "\n\n";
+        String begin(String title, String heading) {
+            return "# " + heading + "\n\n";
         }
 
         @Override
@@ -48,7 +48,7 @@ public enum ReportFormat {
         }
 
         private String row(List<String> cells) {
-            return cells.stream().map(this::text).collect(Collectors.joining(" | ", "| ", " |\n"));
+            return String.join(" | ", cells).transform(r -> "| " + r + " |\n");
         }
 
         @Override
@@ -59,6 +59,9 @@ public enum ReportFormat {
         @Override
         String figure(Document.Picture picture, String stem, Map<String, String> files) {
             String file = stem + "-" + picture.name() + ".svg";
+            for (int i = 2; files.containsKey(file); i++) {
+                file = stem + "-" + picture.name() + "-" + i + ".svg";
+            }
             files.put(file, picture.svg().replaceFirst("<svg ", "<svg xmlns=\"http://www.w3.org/2000/svg\" ") + "\n");
             return "![" + text(picture.caption()) + "](" + file + ")\n\n";
         }
@@ -74,20 +77,23 @@ public enum ReportFormat {
         }
     },
     /**
-     * A LaTeX fragment for the body of an ordinary article: no preamble, no packages beyond the
-     * LaTeX kernel; pictures are left out (the kernel cannot include SVG) with a comment saying so.
+     * A LaTeX fragment for the body of an ordinary article: no preamble; mathematics in math mode;
+     * pictures as TikZ (the only package it needs); long hashes may break, tables in small type.
      */
     TEX {
         @Override
-        String begin(String title) {
+        String begin(String title, String heading) {
             return "% Report written by chirocore: a fragment for the body of a LaTeX article.\n"
-                    + "% It needs no package beyond the LaTeX kernel (not even amsmath).\n"
-                    + "\\section*{" + text(title) + "}\n\n";
+                    + "% Its pictures need \\usepackage{tikz} in the preamble (Debian: texlive-pictures); nothing else\n"
+                    + "% beyond the LaTeX kernel (not even amsmath). It is set \\sloppy inside a group, so that long\n"
+                    + "% hashes break at their allowed points instead of running into the margin.\n"
+                    + "\\begingroup\\sloppy\n"
+                    + "\\section*{" + heading + "}\n\n";
         }
 
         @Override
         String end() {
-            return "";
+            return "\\endgroup\n";
         }
 
         @Override
@@ -108,24 +114,38 @@ public enum ReportFormat {
 
         @Override
         String table(List<String> header, List<List<String>> rows) {
-            return "{\\small\\setlength{\\tabcolsep}{3pt}\n\\begin{tabular}{" + "l".repeat(header.size()) + "}\n\\hline\n"
+            return "{\\footnotesize\\setlength{\\tabcolsep}{3pt}\n\\begin{tabular}{" + "l".repeat(header.size()) + "}\n\\hline\n"
                     + row(header) + "\\hline\n" + rows.stream().map(this::row).collect(Collectors.joining())
                     + "\\hline\n\\end{tabular}}\n\n";
         }
 
         private String row(List<String> cells) {
-            return cells.stream().map(this::text).collect(Collectors.joining(" & ", "", " \\\\\n"));
+            return String.join(" & ", cells) + " \\\\\n";
         }
 
         @Override
         String code(String text) {
-            return "\\begin{verbatim}\n" + text + "\n\\end{verbatim}\n\n";
+            return "{\\footnotesize\n\\begin{verbatim}\n" + wrap(text) + "\n\\end{verbatim}\n}\n\n";
+        }
+
+        /** Lines longer than {@value #CODE_WIDTH} characters broken at a space with a shell continuation. */
+        private static String wrap(String text) {
+            StringBuilder out = new StringBuilder();
+            for (String line : text.split("\n", -1)) {
+                while (line.length() > CODE_WIDTH && line.lastIndexOf(' ', CODE_WIDTH - 2) > 0) {
+                    int cut = line.lastIndexOf(' ', CODE_WIDTH - 2);
+                    out.append(line, 0, cut).append(" \\\n");
+                    line = "    " + line.substring(cut + 1);
+                }
+                out.append(line).append('\n');
+            }
+            return out.toString().stripTrailing();
         }
 
         @Override
         String figure(Document.Picture picture, String stem, Map<String, String> files) {
-            return "% Picture \"" + picture.name() + "\" is in the HTML and Markdown reports (SVG): "
-                    + picture.caption().replace('\n', ' ') + "\n\n";
+            return "\\begin{center}\n" + picture.tikz() + "\n\\end{center}\n{\\small " + text(picture.caption())
+                    + "\\par}\n\\medskip\n\n";
         }
 
         @Override
@@ -139,6 +159,12 @@ public enum ReportFormat {
                     case '^' -> s.append("\\textasciicircum{}");
                     case '<' -> s.append("\\textless{}");
                     case '>' -> s.append("\\textgreater{}");
+                    case '\u2013', '\u2212' -> s.append("--");
+                    case '\u2014' -> s.append("---");
+                    case '\u2264' -> s.append("$\\le$");
+                    case '\u2265' -> s.append("$\\ge$");
+                    case '\u00d7' -> s.append("$\\times$");
+                    case '\u2026' -> s.append("\\ldots{}");
                     default -> s.append(c);
                 }
             }
@@ -147,15 +173,27 @@ public enum ReportFormat {
 
         @Override
         String mono(String text) {
-            return "\\texttt{" + text(text) + "}";
+            // a long run without spaces (a hash) may break every 8 characters
+            StringBuilder s = new StringBuilder();
+            int run = 0;
+            for (char c : text.toCharArray()) {
+                run = c == ' ' ? 0 : run + 1;
+                s.append(run > 1 && run % 8 == 1 ? "\\allowbreak{}" : "").append(text(String.valueOf(c)));
+            }
+            return "\\texttt{" + s + "}";
+        }
+
+        @Override
+        String math(Document.Math math) {
+            return "$" + math.latex() + "$";
         }
     },
     /** One self-contained HTML5 file: inline CSS and inline SVG, no external resources. */
     HTML {
         @Override
-        String begin(String title) {
+        String begin(String title, String heading) {
             return "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>" + text(title)
-                    + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n<h1>" + text(title) + "</h1>\n";
+                    + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n<h1>" + heading + "</h1>\n";
         }
 
         @Override
@@ -185,7 +223,7 @@ public enum ReportFormat {
         }
 
         private String row(String cell, List<String> cells) {
-            return cells.stream().map(c -> "<" + cell + ">" + text(c) + "</" + cell + ">")
+            return cells.stream().map(c -> "<" + cell + ">" + c + "</" + cell + ">")
                     .collect(Collectors.joining("", "<tr>", "</tr>\n"));
         }
 
@@ -201,7 +239,7 @@ public enum ReportFormat {
 
         @Override
         String text(String text) {
-            return Svg.escape(text);
+            return Canvas.escape(text);
         }
 
         @Override
@@ -209,6 +247,9 @@ public enum ReportFormat {
             return "<code>" + text(text) + "</code>";
         }
     };
+
+    /** Characters of a code line in LaTeX (footnotesize typewriter fits about 80 in an article's text width). */
+    private static final int CODE_WIDTH = 76;
 
     private static final String CSS = """
             body { font-family: Georgia, serif; max-width: 60em; margin: 2em auto; padding: 0 1em; line-height: 1.45; }
@@ -226,7 +267,7 @@ public enum ReportFormat {
      * @param stem the main file's name without extension, prefix of side files' names
      */
     public Rendered render(Document doc, String stem) {
-        StringBuilder out = new StringBuilder(begin(doc.title()));
+        StringBuilder out = new StringBuilder(begin(doc.title(), inline(doc.heading())));
         Map<String, String> files = new LinkedHashMap<>();
         for (Block b : doc.blocks()) {
             if (b instanceof Document.Heading h) {
@@ -236,7 +277,8 @@ public enum ReportFormat {
             } else if (b instanceof Document.Bullets l) {
                 out.append(bullets(l.items().stream().map(this::inline).toList()));
             } else if (b instanceof Document.Table t) {
-                out.append(table(t.header(), t.rows()));
+                out.append(table(t.header().stream().map(this::text).toList(),
+                        t.rows().stream().map(r -> r.stream().map(c -> inline(List.of(c))).toList()).toList()));
             } else if (b instanceof Document.Code c) {
                 out.append(code(c.text()));
             } else if (b instanceof Document.Figure f) {
@@ -252,11 +294,24 @@ public enum ReportFormat {
     }
 
     private String inline(List<Inline> pieces) {
-        return pieces.stream().map(i -> i instanceof Document.Mono m ? mono(m.text()) : text(((Document.Text) i).text()))
-                .collect(Collectors.joining());
+        return pieces.stream().map(i -> i instanceof Document.Mono m ? mono(m.text())
+                : i instanceof Document.Math m ? math(m) : i instanceof Document.Link l ? link(l)
+                : text(((Document.Text) i).text())).collect(Collectors.joining());
     }
 
-    abstract String begin(String title);
+    /** A link to a file beside the report: in LaTeX its name. */
+    String link(Document.Link link) {
+        return this == TEX ? mono(link.href()) : this == HTML ? "<a href=\"" + text(link.href()) + "\">" + text(link.text()) + "</a>"
+                : "[" + text(link.text()) + "](" + link.href() + ")";
+    }
+
+    /** Mathematics; plain text except in LaTeX. */
+    String math(Document.Math math) {
+        return text(math.text());
+    }
+
+    /** The start of the document: {@code title} in plain text, {@code heading} rendered in the format. */
+    abstract String begin(String title, String heading);
 
     abstract String end();
 
@@ -266,6 +321,7 @@ public enum ReportFormat {
 
     abstract String bullets(List<String> items);
 
+    /** A table of cells already rendered in the format. */
     abstract String table(List<String> header, List<List<String>> rows);
 
     abstract String code(String text);

@@ -23,10 +23,12 @@ import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.AffineCube;
+import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.HyperplaneSpec;
+import org.chirocore.matroid.NamedMatroid;
 import org.chirocore.orient.Budget;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.pipeline.Subject;
@@ -325,7 +327,7 @@ public final class SweepRun {
     }
 
     private static PairResult.Core core(ExplicitMatroid m) {
-        return new PairResult.Core(m.size(), m.rank(), m.labels(), KnownCores.name(m));
+        return new PairResult.Core(m.size(), m.rank(), m.labels(), Catalogue.identify(m).map(NamedMatroid::symbol));
     }
 
     private boolean certified(Verdict v, Path level, CubeConstruction construction) throws IOException {

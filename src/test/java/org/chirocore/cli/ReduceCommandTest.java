@@ -44,6 +44,7 @@ class ReduceCommandTest {
         assertEquals("", run.err());
         assertTrue(run.out().startsWith("non-orientable core: rank 3 on 7 elements, 28 bases"), run.out());
         assertTrue(run.out().contains("witnesses: 14"), run.out());
+        assertTrue(run.out().contains("isomorphism class: the Fano plane F7 ("), run.out());
 
         Json.Obj r = read(dir.resolve("x.json"));
         assertEquals(List.of("format", "version", "tool", "sha256", "content", "run"),

@@ -32,6 +32,22 @@ class ReportCommandTest {
     }
 
     @Test
+    void writesARunDirectoryWithAnIndex() {
+        Path out = dir.resolve("corner");
+        CliRun run = CliRun.of("report", "--run", "families/corner", "--index", "--format", "html", "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(Files.exists(out.resolve("index.html")) && Files.exists(out.resolve("run.html"))
+                && Files.exists(out.resolve("n=10.html")), run.out());
+    }
+
+    @Test
+    void indexNeedsARunDirectory() {
+        CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--index", "--out", dir.toString());
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+        assertTrue(run.err().contains("--index applies to --run DIR"), run.err());
+    }
+
+    @Test
     void unknownFormatIsBadUsage() {
         CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--format", "pdf", "--out", dir.resolve("x").toString());
         assertEquals(ExitCodes.BAD_INPUT, run.exit());

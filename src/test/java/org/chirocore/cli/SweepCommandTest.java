@@ -31,7 +31,7 @@ class SweepCommandTest {
         // The merged directory may not be a shard: that would overwrite the shard's own sweep.json.
         CliRun onto = CliRun.of("sweep-merge", out.toString(), "--out", out.toString());
         assertEquals(2, onto.exit());
-        assertTrue(onto.err().contains("is one of the shards"), onto.err());
+        assertTrue(onto.err().contains("is also an input"), onto.err());
         // A certificate that fails the verifier is refused before anything is copied.
         Path cert = out.resolve("n=3/n3_a1-1-1_b1_o111.pulled.cert.json");
         Files.writeString(cert, Files.readString(cert).replace("\"rank\": 3", "\"rank\": 4"));

@@ -1,6 +1,7 @@
 package org.chirocore.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -37,6 +38,8 @@ class VerifyCommandTest {
         assertTrue(run.out().contains("PASS     basis exchange: "), run.out());
         assertTrue(run.out().contains("PASS     drat proof: the empty clause is derived"), run.out());
         assertTrue(run.out().contains("good.json: verified ("), run.out());
+        // named after the check passed: the corner construction at n = 3 is the Fano plane
+        assertTrue(run.out().contains("good.json: isomorphism class of the core: the Fano plane F7 (J. Oxley"), run.out());
         assertEquals(8, run.out().lines().filter(l -> l.startsWith("PASS")).count(), run.out());
     }
 
@@ -46,6 +49,7 @@ class VerifyCommandTest {
         assertEquals(1, run.exit(), run.out() + run.err());
         assertTrue(run.out().contains("FAIL     minimality witnesses: the deletion witness of 000: relation"), run.out());
         assertTrue(run.out().contains("bad.json: REJECTED ("), run.out());
+        assertFalse(run.out().contains("bad.json: isomorphism class"), "a rejected certificate is not named");
     }
 
     @Test

@@ -1,6 +1,7 @@
 package org.chirocore.family;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -57,30 +58,44 @@ class FamilyMergeTest {
         for (int n = 3; n <= 5; n++) {
             assertTrue(CertificateVerifier.verify(merged.resolve(FamilyRun.certificateName(n))).passed());
         }
-        // the same n twice with the same content counts once
-        assertEquals(3, FamilyMerge.merge(CORNER, List.of(dir.resolve("shard0"), dir.resolve("whole")),
-                dir.resolve("again")).rows().size());
+        // Completeness: each table records its part, so a missing, repeated or foreign shard is refused.
+        FamilyException missing = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
+                List.of(dir.resolve("shard0"), dir.resolve("shard2")), dir.resolve("gap")));
+        assertTrue(missing.getMessage().startsWith("shard 1/3 of n = 3..5 is missing"), missing.getMessage());
+        FamilyException twice = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
+                List.of(dir.resolve("shard0"), dir.resolve("shard1"), dir.resolve("shard0"), dir.resolve("shard2")),
+                dir.resolve("twice")));
+        assertTrue(twice.getMessage().contains("shard 0/3 is given twice"), twice.getMessage());
+        FamilyException mixed = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
+                List.of(dir.resolve("shard0"), dir.resolve("whole")), dir.resolve("mixed")));
+        assertTrue(mixed.getMessage().contains("is shard 0/1 of n = 3..5"), mixed.getMessage());
+        assertFalse(Files.exists(dir.resolve("gap")), "nothing is written before the shards are found complete");
     }
 
     @Test
     void inconsistentShardsAreRefused() throws IOException {
-        run("seed0", 0, 4, 4, Shard.ALL);
-        run("seed1", 1, 4, 4, Shard.ALL);
+        run("seed0", 0, 3, 4, new Shard(0, 2));
+        run("seed1", 1, 3, 4, new Shard(1, 2));
         FamilyException seeds = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
                 List.of(dir.resolve("seed0"), dir.resolve("seed1")), dir.resolve("m1")));
         assertTrue(seeds.getMessage().contains("seed 1 and strategy contract-first differ from seed 0"),
                 seeds.getMessage());
         FamilyDefinition other = FamilyDefinition.read(Path.of("families/corner-uncontracted.json"));
-        assertThrows(FamilyException.class, () -> FamilyMerge.merge(other, List.of(dir.resolve("seed0")),
-                dir.resolve("m2")));
-        // a shard claiming seed 0 whose certificate at n = 4 has other content: relabel seed 1 as seed 0
+        assertThrows(FamilyException.class, () -> FamilyMerge.merge(other, List.of(dir.resolve("seed0"),
+                dir.resolve("seed1")), dir.resolve("m2")));
+        // a shard whose table claims seed 0 while its certificate at n = 3 records seed 1
         Path forged = dir.resolve("seed1");
-        Path cert = forged.resolve(FamilyRun.certificateName(4));
-        Files.writeString(cert, Files.readString(cert).replaceFirst("\"seed\": ?1", "\"seed\":0"));
         Path table = forged.resolve(FamilyRun.TABLE_JSON);
         Files.writeString(table, Files.readString(table).replaceFirst("\"seed\": ?1", "\"seed\":0"));
-        FamilyException duplicate = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
+        FamilyException certificate = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
                 List.of(dir.resolve("seed0"), forged), dir.resolve("m3")));
-        assertTrue(duplicate.getMessage().contains("n = 4 differs from n = 4 in"), duplicate.getMessage());
+        assertTrue(certificate.getMessage().contains("the certificate of n = 3 records another construction, seed "
+                + "or strategy"), certificate.getMessage());
+        // a table listing an n outside its part
+        Files.writeString(table, Files.readString(table).replaceFirst("\"shard\": ?1", "\"shard\":0"));
+        FamilyException part = assertThrows(FamilyException.class, () -> FamilyMerge.merge(CORNER,
+                List.of(forged), dir.resolve("m4")));
+        assertTrue(part.getMessage().contains("lists n = [3], but shard 0/2 of n = 3..4 has n = [4]"),
+                part.getMessage());
     }
 }

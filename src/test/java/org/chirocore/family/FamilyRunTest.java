@@ -64,6 +64,7 @@ class FamilyRunTest {
         // the Fano plane has 7 lines of 3 points, so 7 of its 3-sets are non-bases
         CoreDescription d = table.rows().get(0).description().orElseThrow();
         assertEquals(7, d.nonBasesByWeights().values().stream().mapToInt(Integer::intValue).sum());
+        assertTrue(table.toMarkdown().contains("- isomorphism class: the Fano plane F7\n"), "named in the table");
     }
 
     @Test

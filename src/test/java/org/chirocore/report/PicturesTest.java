@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.regex.Pattern;
 
+import org.chirocore.matroid.ExplicitMatroid;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -18,45 +19,50 @@ import org.junit.jupiter.params.provider.ValueSource;
 /** The core's geometry and the SVG pictures drawn from it. */
 class PicturesTest {
     /** The Fano plane F7 as stored in certificates/fano.cert.json (from certificates/inputs/fano.json). */
-    private static Core fano() {
+    private static ExplicitMatroid fano() {
         return CertificateSummary.read(Path.of("certificates/fano.cert.json")).core();
     }
 
     @Test
     void fanoPlaneHasSevenLinesOfThreePoints() {
-        List<Long> lines = fano().lines();
+        // F7 has 7 lines of 3 points, and they are its only non-bases [Ox, Appendix, F7].
+        List<int[]> lines = Cores.lines(fano());
         assertEquals(7, lines.size());
-        assertTrue(lines.stream().allMatch(l -> Long.bitCount(l) == 3), lines.toString());
-        assertEquals(lines, fano().nonBases().orElseThrow(), "in F7 the non-bases are exactly the lines");
+        assertTrue(lines.stream().allMatch(l -> l.length == 3));
+        assertEquals(text(lines), text(Cores.nonBases(fano(), Cores.MAX_SUBSETS).orElseThrow()));
     }
 
     @Test
-    void fanoDrawingHasSevenPointsAndSevenLines() {
-        String svg = ConfigurationPicture.of(fano()).svg();
+    void fanoDrawingHasSevenPointsSevenLinesAndALegend() {
+        String svg = ConfigurationPicture.of(fano(), Cores.lines(fano())).svg();
         assertEquals(7, count(svg, "class=\"point\""));
         assertEquals(7, count(svg, "class=\"line\""));
+        assertEquals(7, count(svg, "class=\"key\""), "one legend key per line");
         assertTrue(svg.contains(">a</text>") && svg.contains(">g</text>"), "points are labelled");
     }
 
     @Test
-    void linesOfAG23MinusAPointIncludeTwoPointLinesOnlyAsNonLines() {
-        Core core = CertificateSummary.read(Path.of("certificates/ag23-minus-point.cert.json")).core();
-        // AG(2,3) has 12 lines of 3 points; deleting a point leaves the 8 lines that avoid it.
-        assertEquals(8, core.lines().size());
-        assertEquals(8, core.nonBasisCount());
+    void linesOfAG23MinusAPoint() {
+        ExplicitMatroid core = CertificateSummary.read(Path.of("certificates/ag23-minus-point.cert.json")).core();
+        // AG(2,3) has 12 lines of 3 points; deleting a point leaves the 8 lines that avoid it [Ox, Appendix, AG(2,3)].
+        assertEquals(8, Cores.lines(core).size());
+        assertEquals(8, Cores.nonBases(core, Cores.MAX_SUBSETS).orElseThrow().size());
     }
 
     @Test
     void nonBasesAreNotListedBeyondTheLimit() {
-        Core core = fano();
-        assertEquals(Optional.empty(), core.nonBases(34));
-        assertEquals(7, core.nonBases(35).orElseThrow().size());
+        assertEquals(Optional.empty(), Cores.nonBases(fano(), 34));
+        assertEquals(7, Cores.nonBases(fano(), 35).orElseThrow().size());
     }
 
     @Test
     void linesNeedRankThree() {
-        Core dual = CertificateSummary.read(Path.of("certificates/fano-dual.cert.json")).core();
-        assertThrows(IllegalStateException.class, dual::lines);
+        ExplicitMatroid dual = CertificateSummary.read(Path.of("certificates/fano-dual.cert.json")).core();
+        assertThrows(IllegalStateException.class, () -> Cores.lines(dual));
+    }
+
+    private static List<String> text(List<int[]> sets) {
+        return sets.stream().map(java.util.Arrays::toString).sorted().toList();
     }
 
     @ParameterizedTest(name = "n = {0}")

@@ -28,6 +28,6 @@ class ReportFormatTest {
 
     @Test
     void tableRowsMustMatchTheHeader() {
-        assertThrows(IllegalArgumentException.class, () -> new Document.Table(List.of("a", "b"), List.of(List.of("1"))));
+        assertThrows(IllegalArgumentException.class, () -> Document.Table.plain(List.of("a", "b"), List.of(List.of("1"))));
     }
 }

@@ -54,7 +54,7 @@ final class Structure {
     /**
      * Whether a LaTeX fragment is balanced: outside comments and verbatim blocks, braces balance
      * (escaped braces aside), every {@code \begin} has its {@code \end} in order, and none of
-     * {@code _ # $ ^} appears unescaped.
+     * {@code _ # ^} appears unescaped outside math mode ({@code $...$}) or a {@code $} is unpaired.
      */
     static String latexProblem(String tex) {
         StringBuilder code = new StringBuilder();
@@ -73,10 +73,15 @@ final class Structure {
         }
         String text = code.toString();
         int depth = 0;
+        boolean math = false;
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);
             if (c == '\\') {
                 i++;
+            } else if (c == '$') {
+                math = !math;
+            } else if (math && (c == '_' || c == '^')) {
+                continue;
             } else if (c == '{') {
                 depth++;
             } else if (c == '}' && --depth < 0) {
@@ -87,6 +92,9 @@ final class Structure {
         }
         if (depth != 0) {
             return depth + " unclosed {";
+        }
+        if (math) {
+            return "a $ opens math mode that is never closed";
         }
         Deque<String> open = new ArrayDeque<>();
         Matcher m = ENVIRONMENT.matcher(text);

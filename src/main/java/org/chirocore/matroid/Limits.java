@@ -1,0 +1,83 @@
+package org.chirocore.matroid;
+
+/**
+ * The producer's table of limits, declared once: every command checks the limit that bounds
+ * the work it is about to do <em>before</em> doing it, and refuses with a {@link TooLargeException}
+ * (exit code 2) instead of running out of memory or time. The independent verifier keeps its
+ * own table (it shares no code with the producer); a test cross-checks that it rebuilds every
+ * cube the producer builds. DEVELOPERS.md lists the table with what each entry bounds.
+ */
+public final class Limits {
+    /**
+     * Largest cube dimension n built: the n-cube has 2^n vertices and its pulled matroid rank n
+     * or n + 1. Bounds the construction's rank oracle (2^n columns of n + 1 small integers) and
+     * the scans over its vertices; the reduction cuts such a matroid down before anything is
+     * enumerated (n = 16 reduces in about 40 s within 0.5 GB).
+     */
+    public static final int CUBE_DIMENSION = 16;
+
+    /** Largest ground set whose bases are enumerated or stored (a basis is a 64-bit mask). */
+    public static final int ELEMENTS = 64;
+
+    /**
+     * Largest C(n, r) of a matroid held as its list of bases: the r-subsets enumerated to read
+     * non-bases or to save a construction, and the bases a file may list. Bounds the memory of
+     * the list (about 100 bytes per basis, so 200 MB) and the time of the enumeration (about 30 s
+     * of exact rank tests for a saved cube construction).
+     */
+    public static final long EXPLICIT_SUBSETS = 1L << 21;
+
+    /**
+     * Largest C(n, r) a SAT encoding indexes: its table holds one int per r-subset (512 MiB), and
+     * building it costs one basis test per r-subset.
+     */
+    public static final long INDEXED_SUBSETS = 1L << 27;
+
+    /**
+     * Largest input file read whole into memory: a matroid file, a family definition, a
+     * prediction, a family table, a certificate read by a producer command. A parsed JSON tree
+     * takes several times the file's size.
+     */
+    public static final long INPUT_BYTES = 64L << 20;
+
+    private Limits() {
+    }
+
+    /**
+     * Refuses a matroid of rank {@code rank} on {@code size} elements held as its list of bases.
+     *
+     * @param what the matroid, as named in the message (e.g. "the pulled matroid")
+     * @throws TooLargeException when size exceeds {@link #ELEMENTS} or C(size, rank) exceeds
+     *     {@link #EXPLICIT_SUBSETS}
+     */
+    public static void requireExplicit(int size, int rank, String what) {
+        if (size > ELEMENTS) {
+            throw new TooLargeException(what + " has " + size + " elements; a matroid given by its bases has at most "
+                    + ELEMENTS + ".");
+        }
+        long subsets = ElementSets.binomial(size, rank);
+        if (subsets > EXPLICIT_SUBSETS) {
+            throw new TooLargeException(what + " (rank " + rank + " on " + size + " elements) has "
+                    + count(subsets) + " " + rank + "-element subsets; a matroid given by its bases has at most "
+                    + EXPLICIT_SUBSETS + ".");
+        }
+    }
+
+    /**
+     * Refuses a cube dimension beyond {@link #CUBE_DIMENSION} (or below 1).
+     *
+     * @param what the option or item that gave n, as named in the message (e.g. "--max-n")
+     * @throws TooLargeException when n is greater than {@link #CUBE_DIMENSION}
+     */
+    public static void requireCube(int n, String what) {
+        if (n > CUBE_DIMENSION) {
+            throw new TooLargeException(what + " is " + n + "; cubes are built up to n = " + CUBE_DIMENSION
+                    + " (2^" + CUBE_DIMENSION + " vertices).");
+        }
+    }
+
+    /** A count that may have saturated at {@link Long#MAX_VALUE}. */
+    static String count(long n) {
+        return n == Long.MAX_VALUE ? "more than 2^63" : Long.toString(n);
+    }
+}

@@ -1,0 +1,101 @@
+package org.chirocore.report;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Function;
+
+import org.chirocore.io.Json;
+
+/**
+ * A sweep over the general-position pulls of the real cube (docs/sweep.md): per n, every pair
+ * (H, O) up to symmetry with the verdicts on the pulled cube and on it with O contracted. The
+ * core is the same for both certificates of a pair, so the report describes the contracted one.
+ */
+final class SweepRunKind implements RunKind {
+    static final String RECORD = "sweep.json";
+
+    @Override
+    public String name() {
+        return "sweep";
+    }
+
+    @Override
+    public boolean recognises(Path dir) {
+        return Files.isRegularFile(dir.resolve(RECORD));
+    }
+
+    @Override
+    public String title(Path dir) {
+        Json.Obj r = record(dir);
+        return "Sweep of the general-position pulls of the real n-cube, n = " + r.requireLong("from") + ".."
+                + r.requireLong("to");
+    }
+
+    @Override
+    public List<Member> certificates(Path dir) {
+        List<Member> out = new ArrayList<>();
+        for (Json.Obj p : pairs(record(dir))) {
+            if (p.requireObject("contracted").has("certificate")) {
+                out.add(new Member("n = " + p.requireLong("n") + ", pair " + p.requireLong("index"), file(dir, p)));
+            }
+        }
+        return out;
+    }
+
+    @Override
+    public List<Document.Block> summary(Path dir, Function<Path, Document.Inline> classOf) {
+        Json.Obj r = record(dir);
+        try {
+            List<List<Document.Inline>> rows = new ArrayList<>();
+            for (Json.Obj p : pairs(r)) {
+                Json.Obj core = p.requireObject("core");
+                rows.add(List.of(text(Long.toString(p.requireLong("n"))), text(Long.toString(p.requireLong("index"))),
+                        new Document.Mono(p.requireString("pulled")), text(Long.toString(p.requireLong("orbitSize"))),
+                        text(p.requireObject("pulledMatroid").requireString("verdict")),
+                        text(p.requireObject("contracted").requireString("verdict")),
+                        text(core.requireLong("elements") + ", " + core.requireLong("rank")),
+                        p.requireObject("contracted").has("certificate") ? classOf.apply(file(dir, p)) : text("-")));
+            }
+            return List.of(Document.Paragraph.of("Every general-position pair (H, O) of the real n-cube up to its "
+                            + "symmetries (seed " + r.requireLong("seed") + ", strategy " + r.requireString("strategy")
+                            + "); orientable pulls found: " + r.requireArray("orientablePulls").size() + "."),
+                    new Document.Heading("Pairs"),
+                    new Document.Table(List.of("n", "#", "O", "orbit", "pulled cube", "O contracted", "core k, r",
+                            "class"), rows),
+                    Document.Paragraph.of("Orbit: the pairs in the orbit of (H, O) under the cube's symmetries; core k, r: "
+                            + "the core's elements and rank; class: its isomorphism class when the catalogue names it."),
+                    Document.Paragraph.of("A referee re-checks the certificates with:"),
+                    RunFiles.verifyCommand(dir, "n=*/*.cert.json"));
+        } catch (IllegalArgumentException e) {
+            throw new ReportException(dir.resolve(RECORD) + ": cannot be read as a sweep: " + e.getMessage(), e);
+        }
+    }
+
+    private static Document.Inline text(String s) {
+        return new Document.Text(s);
+    }
+
+    private static Path file(Path dir, Json.Obj pair) {
+        return dir.resolve("n=" + pair.requireLong("n")).resolve(pair.requireObject("contracted").requireString("certificate"));
+    }
+
+    private static Json.Obj record(Path dir) {
+        return RunFiles.object(dir.resolve(RECORD), "a sweep");
+    }
+
+    private static List<Json.Obj> pairs(Json.Obj record) {
+        try {
+            List<Json.Obj> out = new ArrayList<>();
+            for (Json level : record.requireArray("levels").elements()) {
+                for (Json p : level.asObject("a level").requireArray("pairs").elements()) {
+                    out.add(p.asObject("a pair"));
+                }
+            }
+            return out;
+        } catch (IllegalArgumentException e) {
+            throw new ReportException("a sweep: " + e.getMessage(), e);
+        }
+    }
+}

@@ -1,0 +1,133 @@
+package org.chirocore.report;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.OptionalInt;
+import java.util.regex.Pattern;
+
+import org.chirocore.family.FamilyDefinition;
+import org.chirocore.family.FamilyExploration;
+import org.chirocore.family.FamilyPrediction;
+import org.chirocore.family.FamilyRun;
+import org.chirocore.orient.Budget;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Reports on run directories: the stored corner family run (families/corner, n = 3..10), and an
+ * exploration and a checked prediction of the corner family made here.
+ */
+class RunReportTest {
+    private static final Path CORNER = Path.of("families/corner");
+    private static final FamilyDefinition CORNER_DEFINITION = FamilyDefinition.read(Path.of("families/corner.json"));
+
+    @Test
+    void familyRunHasItsTablesChartsAndNamedCores() {
+        Document doc = RunReport.of(CORNER);
+        Document.Table table = (Document.Table) doc.blocks().stream()
+                .filter(b -> b instanceof Document.Table t && t.header().contains("core elements"))
+                .findFirst().orElseThrow();
+        assertEquals(List.of("3", "4", "5", "6", "7", "8", "9", "10"), column(table, 0));
+        assertEquals(List.of("7", "8", "7", "10", "8", "12", "15", "8"), column(table, 3), "core elements as in docs/families.md");
+        // the family's description names F7 at n = 3; the corner-n4 certificate's core is AG(2,3)\e (CatalogueTest)
+        Document.Math fano = (Document.Math) table.rows().get(0).get(7);
+        Document.Math ag = (Document.Math) table.rows().get(1).get(7);
+        assertAll(() -> assertEquals("F7", fano.text()), () -> assertEquals("F_7", fano.latex()),
+                () -> assertEquals("AG(2,3)\\e", ag.text()), () -> assertEquals("AG(2,3)\\setminus e", ag.latex()));
+        String html = ReportFormat.HTML.render(doc, "corner").text();
+        assertAll(
+                // three charts and one configuration per member (all cores have rank 3)
+                () -> assertEquals(3 + 8, count(html, "<svg ")),
+                () -> assertEquals("", Structure.htmlProblem(html)),
+                () -> assertFalse(html.contains("http")),
+                () -> assertTrue(html.contains("java -jar chirocore.jar verify families/corner/n=*.cert.json"), "relative command"),
+                // the corner family's description says n = 3 gives the Fano plane (docs/families.md)
+                () -> assertTrue(html.contains("isomorphic to the Fano plane"), "F7 named"),
+                () -> assertTrue(html.contains("Core vertices (sorted): <code>000 001 010 011 100 101 110</code>"), html),
+                () -> assertTrue(html.contains("D (deleted): all other elements"), "compact deleted set"));
+    }
+
+    @Test
+    void markdownLinksChartsAndPicturesWithDistinctNames(@TempDir Path dir) throws IOException {
+        List<Path> written = ReportWriter.write(RunReport.of(CORNER), ReportFormat.MD, dir.resolve("corner.md"));
+        List<String> names = written.stream().map(p -> p.getFileName().toString()).toList();
+        assertEquals("corner.md", names.get(0));
+        assertTrue(names.containsAll(List.of("corner-core-size.svg", "corner-proof-size.svg", "corner-time.svg",
+                "corner-configuration.svg", "corner-configuration-8.svg")), names.toString());
+        assertEquals(1 + 3 + 8, names.stream().distinct().count());
+    }
+
+    @Test
+    void latexIsBalancedWithMathInMathMode() {
+        String tex = ReportFormat.TEX.render(RunReport.of(CORNER), "corner").text();
+        assertEquals("", Structure.latexProblem(tex));
+        assertFalse(tex.contains("\\textbackslash") || tex.contains("\\textasciicircum"), "math mode, not escaped text");
+        assertTrue(tex.contains("$AG(2,3)\\setminus e$") && tex.contains("$F_7$"), "the classes in math mode");
+    }
+
+    @Test
+    void indexLinksTheRunAndEveryCertificate(@TempDir Path dir) throws IOException {
+        List<Path> written = RunReport.writeAll(CORNER, ReportFormat.HTML, dir);
+        String index = Files.readString(dir.resolve("index.html"));
+        assertAll(
+                () -> assertEquals(dir.resolve("index.html"), written.get(0)),
+                () -> assertTrue(index.contains("<a href=\"run.html\">"), index),
+                () -> assertTrue(index.contains("<a href=\"n=3.html\">"), index),
+                () -> assertTrue(index.contains("the Fano plane F7"), index),
+                () -> assertEquals(1 + 1 + 8, written.size()),
+                () -> assertEquals("", Structure.htmlProblem(index)));
+    }
+
+    @Test
+    void explorationIsReported(@TempDir Path dir) throws IOException {
+        new FamilyExploration(CORNER_DEFINITION, dir, new FamilyExploration.Settings(0, 2, Budget.UNLIMITED, List.of(),
+                OptionalInt.empty()), FamilyRun.Listener.SILENT).run(3, 3);
+        assertTrue(RunReport.kindOf(dir) instanceof ExploreRunKind);
+        String md = ReportFormat.MD.render(RunReport.of(dir), "explore").text();
+        assertTrue(md.contains("Exploration of the family corner"), md);
+        assertTrue(md.contains("isomorphic to the Fano plane"), md);
+    }
+
+    @Test
+    void predictionIsReported(@TempDir Path dir) throws IOException {
+        new FamilyPrediction(CORNER_DEFINITION, FamilyPrediction.Prediction.read(Path.of("families/corner.predict.json")), dir,
+                Budget.UNLIMITED).run(3, 3);
+        assertTrue(RunReport.kindOf(dir) instanceof PredictRunKind);
+        String md = ReportFormat.MD.render(RunReport.of(dir), "predict").text();
+        assertTrue(md.contains("## n = 3: n=3.predicted.cert.json"), md);
+        assertTrue(md.contains("isomorphic to the Fano plane"), md);
+    }
+
+    @Test
+    void sweepIsReportedWithItsClasses() {
+        Path sweep = Path.of("certificates/sweep");
+        assertTrue(RunReport.kindOf(sweep) instanceof SweepRunKind);
+        String tex = ReportFormat.TEX.render(RunReport.of(sweep), "sweep").text();
+        // docs/sweep.md: the n = 3 pair's core is F7; AG(2,3)\e occurs among the others
+        assertAll(() -> assertEquals("", Structure.latexProblem(tex)),
+                () -> assertTrue(tex.contains("$F_7$") && tex.contains("$AG(2,3)\\setminus e$"), "classes named"),
+                () -> assertEquals(23, count(tex, "\\subsection*{n = "), "one section per pair (23 pairs, docs/sweep.md)"));
+    }
+
+    @Test
+    void aDirectoryOfNoKnownKindIsRefused(@TempDir Path dir) {
+        ReportException e = assertThrows(ReportException.class, () -> RunReport.of(dir));
+        assertTrue(e.getMessage().contains("not a run directory"), e.getMessage());
+    }
+
+    private static List<String> column(Document.Table table, int c) {
+        return table.rows().stream().map(r -> ((Document.Text) r.get(c)).text()).toList();
+    }
+
+    private static int count(String text, String part) {
+        return text.split(Pattern.quote(part), -1).length - 1;
+    }
+}
