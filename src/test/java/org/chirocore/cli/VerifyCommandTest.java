@@ -24,7 +24,7 @@ class VerifyCommandTest {
 
     @BeforeAll
     static void write() throws IOException {
-        // the n = 3 corner construction gives F7 (math-notes §3)
+        // the n = 3 corner construction gives F7 (from memory)
         good = dir.resolve("good.json");
         Files.writeString(good, TestCertificatesAccess.corner());
         bad = dir.resolve("bad.json");
