@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 
+import org.chirocore.family.Shard;
 import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
 import org.chirocore.matroid.CubeHyperplane;
@@ -66,6 +67,11 @@ final class CubeCommand implements Callable<Integer> {
                     + "N = 8 hours).")
     private boolean orbits;
 
+    @Option(names = "--part", paramLabel = "i/k",
+            description = "With --orbits: only part i of k of the enumeration (its search prefixes dealt out "
+                    + "round-robin), for splitting N >= 8 over machines; the parts together give every orbit once.")
+    private String part;
+
     @Override
     public Integer call() {
         // Every option is checked before the first line is printed, so bad input leaves no partial output.
@@ -106,6 +112,9 @@ final class CubeCommand implements Callable<Integer> {
         });
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
+        if (part != null && !orbits) {
+            throw new ParameterException(spec.commandLine(), "--part splits the enumeration of --orbits; give --orbits too.");
+        }
         if (orbits) {
             printOrbits(out);
         }
@@ -117,9 +126,17 @@ final class CubeCommand implements Callable<Integer> {
     }
 
     private void printOrbits(PrintWriter out) {
-        List<HyperplaneOrbit> found = HyperplaneOrbits.of(n);
-        out.println("hyperplane orbits: " + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize)
-                .sum() + " hyperplanes)");
+        Shard split;
+        try {
+            split = part == null ? Shard.ALL : Shard.parse(part);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--part: " + e.getMessage());
+        }
+        long[] candidates = {0};
+        List<HyperplaneOrbit> found = HyperplaneOrbits.part(n, split.index(), split.count(), v -> candidates[0] += v);
+        out.println("hyperplane orbits" + (part == null ? "" : " in part " + split.index() + "/" + split.count()) + ": "
+                + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize).sum() + " hyperplanes; "
+                + candidates[0] + " candidate normals searched)");
         List<PullCandidate> general = new ArrayList<>();
         for (HyperplaneOrbit h : found) {
             CubeHyperplane rep = h.representative();

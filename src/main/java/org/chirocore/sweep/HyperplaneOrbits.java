@@ -62,19 +62,36 @@ public final class HyperplaneOrbits {
      * @throws IllegalArgumentException when n is not between 1 and {@link #MAX_DIMENSION}
      */
     public static List<HyperplaneOrbit> of(int n, LongConsumer candidates) {
-        checkDimension(n);
-        List<HyperplaneOrbit> out = new ArrayList<>();
-        for (int m = 1; m <= n; m++) {
-            Search s = new Search(n, m, out);
-            s.extend(0, 0);
-            candidates.accept(s.visited);
-        }
-        return List.copyOf(out);
+        return part(n, 0, 1, candidates);
     }
 
     /** The orbits of hyperplanes of the real n-cube (see {@link #of(int, LongConsumer)}). */
     public static List<HyperplaneOrbit> of(int n) {
         return of(n, visited -> { });
+    }
+
+    /**
+     * Part {@code index} of {@code count} of the enumeration, for splitting it over machines: in
+     * each m-cube the search's prefixes (a_1, …, a_{m−2}) are dealt out round-robin, prefix j to
+     * part j mod count (every prefix has about as many completions, so the parts cost about the
+     * same); for m ≤ 2 everything falls to part 0. The parts are disjoint and together give
+     * {@link #of(int)}, each in the same order.
+     *
+     * @throws IllegalArgumentException when n is out of range or not 0 ≤ index &lt; count
+     */
+    public static List<HyperplaneOrbit> part(int n, int index, int count, LongConsumer candidates) {
+        checkDimension(n);
+        if (count < 1 || index < 0 || index >= count) {
+            throw new IllegalArgumentException("A part i of k needs k >= 1 and 0 <= i < k, not " + index + " of "
+                    + count + ".");
+        }
+        List<HyperplaneOrbit> out = new ArrayList<>();
+        for (int m = 1; m <= n; m++) {
+            Search s = new Search(n, m, out, index, count);
+            s.extend(0, 0);
+            candidates.accept(s.visited);
+        }
+        return List.copyOf(out);
     }
 
     /**
@@ -163,12 +180,18 @@ public final class HyperplaneOrbits {
         private final int[] start;
         private final int[] sorted;
         private final long[][] echelon;
+        private final int part;
+        private final int parts;
+        /** The number of prefixes of length m − 2 met so far, which decides their part. */
+        private long prefixes;
         private long visited;
 
-        Search(int n, int m, List<HyperplaneOrbit> out) {
+        Search(int n, int m, List<HyperplaneOrbit> out, int part, int parts) {
             this.n = n;
             this.m = m;
             this.out = out;
+            this.part = part;
+            this.parts = parts;
             this.a = new int[m];
             this.values = new int[m + 1][];
             for (int p = 0; p <= m; p++) {
@@ -183,6 +206,9 @@ public final class HyperplaneOrbits {
 
         /** Chooses a_{p+1} ≥ a_p given the first p entries with sum {@code sum}. */
         void extend(int p, int sum) {
+            if (p == Math.max(m - 2, 0) && prefixes++ % parts != part) {
+                return;
+            }
             if (p == m) {
                 visited++;
                 if ((m == 1 || a[m - 1] <= sum - a[m - 1]) && primitive()) {

@@ -57,7 +57,7 @@ class SweepCommandTest {
     void cubeListsOrbitsAndPairs() {
         CliRun run = CliRun.of("cube", "4", "--orbits");
         assertEquals(0, run.exit(), run.err());
-        assertTrue(run.out().contains("hyperplane orbits: 6 (140 hyperplanes)"), run.out());
+        assertTrue(run.out().contains("hyperplane orbits: 6 (140 hyperplanes; "), run.out());
         assertTrue(run.out().contains("general-position pairs up to symmetry: 2 (80 pairs)"), run.out());
         assertTrue(run.out().contains("x1 + x2 + x3 + 2·x4 = 2, O = 1111: orbit size 64"), run.out());
     }
@@ -73,5 +73,17 @@ class SweepCommandTest {
         }
         assertTrue(CliRun.of("cube", "3", "--orbits", "--field", "5").err().contains("real cube"));
         assertTrue(Files.notExists(dir.resolve("m.json")));
+    }
+
+    /** The two parts of the 5-cube's enumeration hold its 15 orbits (OEIS A363505) between them. */
+    @Test
+    void cubeSplitsTheEnumeration() {
+        CliRun first = CliRun.of("cube", "5", "--orbits", "--part", "0/2");
+        CliRun second = CliRun.of("cube", "5", "--orbits", "--part", "1/2");
+        assertEquals(0, first.exit(), first.err());
+        int a = Integer.parseInt(first.out().replaceAll("(?s).*hyperplane orbits in part 0/2: (\\d+) .*", "$1"));
+        int b = Integer.parseInt(second.out().replaceAll("(?s).*hyperplane orbits in part 1/2: (\\d+) .*", "$1"));
+        assertEquals(15, a + b);
+        assertEquals(2, CliRun.of("cube", "5", "--part", "0/2").exit());
     }
 }

@@ -63,6 +63,21 @@ class HyperplaneOrbitsTest {
         assertEquals(listed, stated);
     }
 
+    /** The parts of a split enumeration are disjoint and together give the whole, in order. */
+    @ParameterizedTest(name = "n = {0}")
+    @ValueSource(ints = {2, 5, 6})
+    void partsMakeTheWhole(int n) {
+        List<HyperplaneOrbit> joined = new java.util.ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            joined.addAll(HyperplaneOrbits.part(n, i, 3, visited -> { }));
+        }
+        java.util.Comparator<HyperplaneOrbit> order = java.util.Comparator.comparing(o -> o.canonicalForm().toString());
+        List<HyperplaneOrbit> whole = new java.util.ArrayList<>(HyperplaneOrbits.of(n));
+        joined.sort(order);
+        whole.sort(order);
+        assertEquals(whole, joined);
+    }
+
     /** The canonical form is invariant under a reflection and a permutation (common practice: check on an example). */
     @Test
     void canonicalFormIsInvariant() {
