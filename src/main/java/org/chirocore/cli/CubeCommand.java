@@ -83,6 +83,15 @@ final class CubeCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--orbits lists the hyperplanes of the real cube; "
                     + "it cannot be combined with --field " + construction.field() + ".");
         }
+        if (part != null && !orbits) {
+            throw new ParameterException(spec.commandLine(), "--part splits the enumeration of --orbits; give --orbits too.");
+        }
+        Shard split;
+        try {
+            split = part == null ? Shard.ALL : Shard.parse(part);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--part: " + e.getMessage());
+        }
         output.checkFiles(List.of(), save);
         Matroid saved = null;
         if (save != null) {
@@ -112,11 +121,8 @@ final class CubeCommand implements Callable<Integer> {
         });
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
-        if (part != null && !orbits) {
-            throw new ParameterException(spec.commandLine(), "--part splits the enumeration of --orbits; give --orbits too.");
-        }
         if (orbits) {
-            printOrbits(out);
+            printOrbits(out, split);
         }
         if (saved != null) {
             Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(saved)));
@@ -125,13 +131,7 @@ final class CubeCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private void printOrbits(PrintWriter out) {
-        Shard split;
-        try {
-            split = part == null ? Shard.ALL : Shard.parse(part);
-        } catch (IllegalArgumentException e) {
-            throw new ParameterException(spec.commandLine(), "--part: " + e.getMessage());
-        }
+    private void printOrbits(PrintWriter out, Shard split) {
         long[] candidates = {0};
         List<HyperplaneOrbit> found = HyperplaneOrbits.part(n, split.index(), split.count(), v -> candidates[0] += v);
         out.println("hyperplane orbits" + (part == null ? "" : " in part " + split.index() + "/" + split.count()) + ": "

@@ -66,7 +66,8 @@ class SweepCommandTest {
     @Test
     void badOrbitsUsageIsRefusedBeforeOutput() {
         for (String[] args : new String[][] {{"cube", "1", "--orbits"}, {"cube", "10", "--orbits"},
-                {"cube", "3", "--orbits", "--field", "5"}, {"cube", "3", "--orbits", "--save", dir.resolve("m.json").toString()}}) {
+                {"cube", "3", "--orbits", "--field", "5"}, {"cube", "3", "--orbits", "--save", dir.resolve("m.json").toString()},
+                {"cube", "3", "--orbits", "--part", "x"}, {"cube", "3", "--part", "0/2"}}) {
             CliRun run = CliRun.of(args);
             assertEquals(2, run.exit(), String.join(" ", args));
             assertEquals("", run.out(), String.join(" ", args));
