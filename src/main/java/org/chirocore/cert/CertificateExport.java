@@ -9,8 +9,6 @@ import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPInputStream;
 
-import org.chirocore.check.Cnf;
-import org.chirocore.check.DratChecker;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonValueException;
@@ -76,7 +74,7 @@ public final class CertificateExport {
         AtomicFiles.write(dratFile, dratBytes);
         Optional<Path> lratFile = Optional.empty();
         if (lrat) {
-            String hinted = DratChecker.toLrat(new Cnf(index.basisCount(), cnf), new String(dratBytes, StandardCharsets.UTF_8));
+            String hinted = LratConversion.convert(index.basisCount(), cnf, new String(dratBytes, StandardCharsets.UTF_8));
             lratFile = Optional.of(outDir.resolve(name + ".lrat"));
             AtomicFiles.writeString(lratFile.get(), hinted);
         }

@@ -18,13 +18,14 @@ import picocli.CommandLine.Spec;
         subcommands = {OrientCommand.class, ReduceCommand.class, VerifyCommand.class, ExportCommand.class,
                 CubeCommand.class, BenchCommand.class, FamilyCommand.class, FamilyMergeCommand.class, SweepCommand.class,
                 SweepMergeCommand.class,
-                ExplainCommand.class, ReportCommand.class,
+                ExplainCommand.class, ReportCommand.class, EnumerateCommand.class,
                 CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {"0:a proved answer, or facts printed",
                 "1:internal error (a bug; set " + Chirocore.STACKTRACE_VARIABLE + "=1 for its stack trace); for verify: a check failed",
                 "2:bad usage, bad input, an input beyond the limits, or out of memory (message on stderr)",
-                "3:unknown: the budget ran out before an answer"})
+                "3:unknown: the budget ran out before an answer",
+                "4:none exists: a constrained search (reduce --rank/--keep/--avoid) exhausted its space"})
 public final class Chirocore implements Runnable {
     @Spec
     private CommandSpec spec;
@@ -83,6 +84,6 @@ public final class Chirocore implements Runnable {
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(),
                 "Missing command: use one of orient, reduce, verify, export, cube, bench, family, family-merge, explain, "
-                        + "report.");
+                        + "report, enumerate.");
     }
 }

@@ -18,6 +18,13 @@ final class ExitCodes {
     static final int BAD_INPUT = 2;
     /** No answer: a budget ran out. */
     static final int UNKNOWN = 3;
+    /** {@code verify}: no check failed, but some part was not checked, so the statement is not fully proved. */
+    static final int INCOMPLETE = org.chirocore.check.VerifierMain.INCOMPLETE;
+    /**
+     * A constrained search ({@code reduce --rank/--keep/--avoid}) enumerated its whole space and
+     * proved that no core meets the constraints: an answer, but not the one asked for.
+     */
+    static final int NONE_EXISTS = 5;
 
     private ExitCodes() {
     }

@@ -10,7 +10,8 @@ import java.util.concurrent.Callable;
 import org.chirocore.cert.ReadableCertificate;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.Escaping;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.IoMessages;
 
 import picocli.CommandLine.Command;
@@ -65,12 +66,12 @@ final class ExplainCommand implements Callable<Integer> {
         }
         output.checkFiles(Arrays.asList(certificate, input), out, certificateOut);
         PrintWriter stdout = spec.commandLine().getOut();
-        Report report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
+        VerificationReport report = CertificateVerifier.verify(certificate, Optional.ofNullable(input));
         if (!report.passed()) {
-            for (Report.Check c : report.checks()) {
-                stdout.printf("%-8s %s: %s%n", c.status(), c.name(), c.detail());
-            }
-            stdout.println(certificate + ": REJECTED by the verifier; nothing to explain.");
+            // the verifier's own lines, with the certificate's text escaped for the terminal
+            String lines = report.toText();
+            stdout.print(lines.substring(0, lines.lastIndexOf(Escaping.printable(report.source()) + ": ")));
+            stdout.println(Escaping.printable(certificate.toString()) + ": REJECTED by the verifier; nothing to explain.");
             return ExitCodes.CHECK_FAILED;
         }
         ReadableCertificate.Explanation explanation;

@@ -23,6 +23,11 @@ final class OutputOptions {
             + "replaced).")
     private boolean force;
 
+    /** Whether --force was given: files written after the first checks (pictures, a run's reports) may replace existing ones. */
+    boolean force() {
+        return force;
+    }
+
     /**
      * Checks the output files {@code outputs} (null entries are options not given) against the
      * input files {@code inputs} (null entries likewise).

@@ -4,10 +4,13 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.List;
+import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
 import org.chirocore.io.IoMessages;
 import org.chirocore.io.ResultJson;
@@ -16,6 +19,8 @@ import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.Refutation;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.pipeline.Subject;
+import org.chirocore.search.CoreConstraints;
+import org.chirocore.search.SteeredSearch;
 import org.chirocore.search.Strategy;
 
 import picocli.CommandLine.Command;
@@ -85,16 +90,50 @@ final class ReduceCommand implements Callable<Integer> {
             description = "When the input is orientable, write its chirotope there.")
     private Path witnessOut;
 
+    @Option(names = "--rank", paramLabel = "R",
+            description = "The core must have rank R: exactly rank(M) - R elements are contracted (R = rank(M): "
+                    + "deletions only). The search enumerates contraction sets and backtracks past dead ends.")
+    private Integer rank;
+
+    @Option(names = "--keep", paramLabel = "V", split = ",",
+            description = "Elements (labels) the core must contain; neither contracted nor deleted.")
+    private List<String> keep = List.of();
+
+    @Option(names = "--avoid", paramLabel = "V", split = ",", description = "Elements (labels) that must be deleted.")
+    private List<String> avoid = List.of();
+
+    @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
+            description = "With --rank, --keep or --avoid: wall-clock limit of the whole search, after which it "
+                    + "answers unknown; 0 (default) for none.")
+    private double totalTime;
+
     @Override
     public Integer call() {
         // A large proof goes beside the certificate, so its name is an output too.
         output.checkFiles(Arrays.asList(file), out, CertificateWriter.dratFile(out), witnessOut);
         Subject input = input();
+        CoreConstraints constraints = constraints(input);
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CertifiedReduction.Outcome outcome;
         try {
-            outcome = new CertifiedReduction(new CertifiedReduction.Settings(seed.seed(), strategy, budget.budget()), progress)
-                    .run(focus ? input : input.withoutFocus(), out);
+            CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
+                    budget.budget());
+            Subject subject = focus ? input : input.withoutFocus();
+            if (constraints.any()) {
+                SteeredSearch.Result steered = new SteeredSearch(settings.search(subject), constraints,
+                        Math.round(totalTime * 1000), progress).search(subject.matroid());
+                if (steered instanceof SteeredSearch.NoneExists none) {
+                    spec.commandLine().getOut().println("none exists: no minor-minimal non-orientable minor meets the "
+                            + "constraints; enumerated " + none.enumerated() + "; no certificate written");
+                    return ExitCodes.NONE_EXISTS;
+                }
+                outcome = steered instanceof SteeredSearch.Found f
+                        ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
+                                out)
+                        : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
+            } else {
+                outcome = new CertifiedReduction(settings, progress).run(subject, out);
+            }
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot write the certificate: " + IoMessages.plain(e), e);
         } finally {
@@ -118,20 +157,24 @@ final class ReduceCommand implements Callable<Integer> {
         return ExitCodes.UNKNOWN;
     }
 
+    /** The constraints of --rank, --keep and --avoid, checked against the input. */
+    private CoreConstraints constraints(Subject input) {
+        if (totalTime < 0 || Double.isNaN(totalTime)) {
+            throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
+        }
+        try {
+            CoreConstraints c = new CoreConstraints(rank == null ? OptionalInt.empty() : OptionalInt.of(rank), keep,
+                    avoid);
+            c.validate(input.matroid());
+            return c;
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage());
+        }
+    }
+
     /** The input chosen by exactly one of FILE and --cube. */
     private Subject input() {
-        if ((file == null) == (cube == null)) {
-            throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
-                    + (file == null ? "neither was given." : "both were given."));
-        }
-        if (file == null) {
-            return Inputs.build(construction.construction(cube, contractPulled));
-        }
-        if (construction.anyGiven() || spec.commandLine().getParseResult().hasMatchedOption("--contract-pulled")) {
-            throw new ParameterException(spec.commandLine(),
-                    "--field, --hyperplane, --pull and --[no-]contract-pulled only go with --cube, not with FILE.");
-        }
-        return Inputs.read(file);
+        return Inputs.choose(spec, file, cube, construction, contractPulled);
     }
 
     private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {

@@ -12,6 +12,7 @@ import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
 import org.chirocore.io.IoMessages;
+import org.chirocore.io.OutputRefusedException;
 import org.chirocore.report.CertificateReport;
 import org.chirocore.report.Document;
 import org.chirocore.report.ReportException;
@@ -110,14 +111,14 @@ final class ReportCommand implements Callable<Integer> {
             List<Path> written;
             if (index) {
                 Files.createDirectories(out);
-                written = RunReport.writeAll(subject.family, format, out);
+                written = RunReport.writeAll(subject.family, format, out, output.force());
             } else {
                 Document doc = subject.family != null ? RunReport.of(subject.family)
                         : CertificateReport.of(subject.certificate, Optional.ofNullable(input));
-                written = ReportWriter.write(doc, format, out);
+                written = ReportWriter.write(doc, format, out, output.force());
             }
             spec.commandLine().getOut().println("wrote " + written.stream().map(Path::toString).collect(Collectors.joining(", ")));
-        } catch (ReportException e) {
+        } catch (ReportException | OutputRefusedException e) {
             throw new BadInputException(e.getMessage(), e);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot be written: " + IoMessages.plain(e), e);

@@ -11,7 +11,7 @@ import java.util.TreeMap;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.InputFiles;
 import org.chirocore.io.IoMessages;
@@ -178,7 +178,7 @@ public final class FamilyMerge {
                 AtomicFiles.copy(CertificateWriter.dratFile(source), CertificateWriter.dratFile(target));
             }
         }
-        Report report = CertificateVerifier.verify(target);
+        VerificationReport report = CertificateVerifier.verify(target);
         if (!report.passed()) {
             throw new FamilyException(source + ": the certificate of n = " + n + " fails the verifier.");
         }

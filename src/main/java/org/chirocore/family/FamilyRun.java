@@ -13,7 +13,7 @@ import java.util.concurrent.Future;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.InputFiles;
 import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
@@ -220,7 +220,7 @@ public final class FamilyRun {
 
     /** The existing certificate as this run's result, when it verifies and matches the member. */
     private Optional<MemberResult> reuse(FamilyDefinition.Member m, Path file) throws IOException {
-        Report report = CertificateVerifier.verify(file);
+        VerificationReport report = CertificateVerifier.verify(file);
         if (!report.passed()) {
             return Optional.empty();
         }

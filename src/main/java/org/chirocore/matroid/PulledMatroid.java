@@ -11,7 +11,7 @@ import java.util.Optional;
  * (O ∉ H): the bases of M' are the bases of M not contained in H ∪ {O}, so H ∪ {O} becomes a
  * hyperplane of M'. Its rank function equals M's except that a set S ⊆ H ∪ {O} with
  * rank_M(S) = r gets rank r − 1. This family is a matroid when (H, O) are in general position:
- * for every hyperline L ⊆ H (flat of M of rank r − 2), cl(L ∪ {O}) = L ∪ {O} (math-notes §3).
+ * for every hyperline L ⊆ H (flat of M of rank r − 2), cl(L ∪ {O}) = L ∪ {O} (docs/mathematics.md §7).
  * {@link #pull} checks that and refuses otherwise.
  *
  * <p>A rank query costs one rank query of M plus O(|S|). Checking general position costs up to

@@ -11,7 +11,7 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Certification;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.orient.Budget;
@@ -170,7 +170,7 @@ public final class CertifiedReduction {
 
     /** Verifies {@code out}; on rejection removes it and its proof file and throws. */
     private static Checked verifyWritten(Path out, Optional<Path> dratFile) throws IOException {
-        Report report = CertificateVerifier.verify(out);
+        VerificationReport report = CertificateVerifier.verify(out);
         if (!report.passed()) {
             Files.deleteIfExists(out);
             if (dratFile.isPresent()) {
@@ -179,12 +179,12 @@ public final class CertifiedReduction {
             throw new IllegalStateException("The verifier rejected the certificate just written to " + out + " ("
                     + firstFailure(report) + "); it was removed.");
         }
-        return new Checked(report.millis(), report.checks().stream().filter(c -> c.status() == Report.Status.NOT_RUN)
-                .map(Report.Check::name).toList());
+        return new Checked(report.millis(), report.checks().stream().filter(c -> c.status() == VerificationReport.Status.NOT_RUN)
+                .map(VerificationReport.Check::name).toList());
     }
 
-    private static String firstFailure(Report report) {
-        return report.checks().stream().filter(c -> c.status() == Report.Status.FAIL)
+    private static String firstFailure(VerificationReport report) {
+        return report.checks().stream().filter(c -> c.status() == VerificationReport.Status.FAIL)
                 .map(c -> c.name() + ": " + c.detail()).findFirst().orElse("no check failed");
     }
 }

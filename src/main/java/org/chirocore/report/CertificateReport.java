@@ -6,7 +6,8 @@ import java.util.List;
 import java.util.Optional;
 
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.Escaping;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.NamedMatroid;
@@ -36,7 +37,7 @@ public final class CertificateReport {
      * @throws ReportException when the certificate does not verify or cannot be read
      */
     public static Document of(Path certificate, Optional<Path> input) {
-        Report verdict = verified(certificate, input);
+        VerificationReport verdict = verified(certificate, input);
         CertificateSummary s = CertificateSummary.read(certificate);
         ExplicitMatroid core = s.core();
         Optional<NamedMatroid> name = Catalogue.identify(core);
@@ -82,12 +83,12 @@ public final class CertificateReport {
      *
      * @throws ReportException naming the first failed check when the certificate does not verify
      */
-    static Report verified(Path certificate, Optional<Path> input) {
-        Report verdict = CertificateVerifier.verify(certificate, input);
+    static VerificationReport verified(Path certificate, Optional<Path> input) {
+        VerificationReport verdict = CertificateVerifier.verify(certificate, input);
         if (!verdict.passed()) {
-            Report.Check failed = verdict.checks().stream().filter(c -> c.status() == Report.Status.FAIL).findFirst().orElseThrow();
+            VerificationReport.Check failed = verdict.checks().stream().filter(c -> c.status() == VerificationReport.Status.FAIL).findFirst().orElseThrow();
             throw new ReportException(certificate + ": the certificate does not verify (" + failed.name() + ": "
-                    + failed.detail() + "); a report is only written for a verified certificate.", null);
+                    + Escaping.printable(failed.detail()) + "); a report is only written for a verified certificate.", null);
         }
         return verdict;
     }
@@ -136,10 +137,10 @@ public final class CertificateReport {
         return origin instanceof Origin.Given ? cmd + " --input " + input.map(RelativePaths::shown).orElse("INPUT") : cmd;
     }
 
-    private static String passed(Report verdict) {
+    private static String passed(VerificationReport verdict) {
         List<String> names = new ArrayList<>();
-        for (Report.Check c : verdict.checks()) {
-            names.add(c.name() + (c.status() == Report.Status.PASS ? "" : " (not run: no input file given)"));
+        for (VerificationReport.Check c : verdict.checks()) {
+            names.add(c.name() + (c.status() == VerificationReport.Status.PASS ? "" : " (not run: no input file given)"));
         }
         return String.join(", ", names);
     }

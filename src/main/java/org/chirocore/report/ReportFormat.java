@@ -151,8 +151,11 @@ public enum ReportFormat {
         @Override
         String text(String text) {
             StringBuilder s = new StringBuilder();
-            for (char c : text.toCharArray()) {
+            for (int i = 0; i < text.length(); i++) {
+                char c = text.charAt(i);
                 switch (c) {
+                    // "--" and "---" are dash ligatures in text: an option such as --input keeps its hyphens
+                    case '-' -> s.append(i + 1 < text.length() && text.charAt(i + 1) == '-' ? "-{}" : "-");
                     case '\\' -> s.append("\\textbackslash{}");
                     case '{', '}', '$', '&', '#', '_', '%' -> s.append('\\').append(c);
                     case '~' -> s.append("\\textasciitilde{}");

@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.NamedMatroid;
@@ -68,10 +68,10 @@ public final class RunReport {
      * @param name the core's isomorphism class in the catalogue
      * @param failure why it is not described, empty when it passed
      */
-    private record Checked(Report verdict, CertificateSummary summary, Optional<NamedMatroid> name, String failure) {
+    private record Checked(VerificationReport verdict, CertificateSummary summary, Optional<NamedMatroid> name, String failure) {
         static Checked of(Path file) {
             try {
-                Report verdict = CertificateReport.verified(file, Optional.empty());
+                VerificationReport verdict = CertificateReport.verified(file, Optional.empty());
                 CertificateSummary s = CertificateSummary.read(file);
                 return new Checked(verdict, s, Catalogue.identify(s.core()), "");
             } catch (ReportException e) {
@@ -83,25 +83,26 @@ public final class RunReport {
     /**
      * Writes into {@code out} the run's report ({@code run.EXT}), each verified certificate's
      * report ({@code STEM.EXT}, STEM its file name without {@code .cert.json}) and
-     * {@code index.EXT} linking them.
+     * {@code index.EXT} linking them; all are rendered and checked before the first is written.
      *
+     * @param overwrite whether existing files in {@code out} may be replaced
      * @return the files written, the index first
+     * @throws org.chirocore.io.OutputRefusedException before anything is written, naming a file
+     *     that exists (without {@code overwrite}) or cannot be written
      * @throws IOException when a file cannot be written
      */
-    public static List<Path> writeAll(Path dir, ReportFormat format, Path out) throws IOException {
+    public static List<Path> writeAll(Path dir, ReportFormat format, Path out, boolean overwrite) throws IOException {
         RunKind kind = kindOf(dir);
-        List<Path> written = new ArrayList<>();
         List<List<Document.Inline>> items = new ArrayList<>();
         String ext = "." + format.extension();
-        List<Path> run = ReportWriter.write(of(dir), format, out.resolve("run" + ext));
+        Map<Path, String> rest = new LinkedHashMap<>(ReportWriter.render(of(dir), format, out.resolve("run" + ext)));
         items.add(List.of(new Document.Link("run" + ext, "run" + ext), new Document.Text(": the " + kind.name() + ": "
                 + kind.title(dir))));
-        List<Path> rest = new ArrayList<>(run);
         for (RunKind.Member m : kind.certificates(dir)) {
             String stem = m.file().getFileName().toString().replaceFirst("\\.cert\\.json$", "");
             try {
                 Document doc = CertificateReport.of(m.file(), Optional.empty());
-                rest.addAll(ReportWriter.write(doc, format, out.resolve(stem + ext)));
+                rest.putAll(ReportWriter.render(doc, format, out.resolve(stem + ext)));
                 List<Document.Inline> item = new ArrayList<>(List.of(new Document.Link(stem + ext, stem + ext),
                         new Document.Text(": " + m.caption() + ": ")));
                 item.addAll(doc.heading());
@@ -113,9 +114,9 @@ public final class RunReport {
         Document index = new Document("Reports on " + RelativePaths.shown(dir), List.of(
                 Document.Paragraph.of("The " + kind.name() + " in " + RelativePaths.shown(dir) + " and the report on each of "
                         + "its certificates that verifies."), new Document.Bullets(items)));
-        written.addAll(ReportWriter.write(index, format, out.resolve("index" + ext)));
-        written.addAll(rest);
-        return written;
+        Map<Path, String> files = new LinkedHashMap<>(ReportWriter.render(index, format, out.resolve("index" + ext)));
+        files.putAll(rest);
+        return ReportWriter.write(files, overwrite);
     }
 
     /** One certificate of the run: verified, named, described and drawn; or why not. */

@@ -13,7 +13,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.Json;
 import org.chirocore.proof.ReadableProof;
 import org.chirocore.proof.ReadableProof.Branch;
@@ -28,7 +28,7 @@ class ReadableCertificateTest {
     private static final Path FANO = Path.of("certificates/fano.cert.json");
     private static final Path CORNER_N4 = Path.of("certificates/corner-n4.cert.json");
 
-    private static Report verify(Json.Obj document) {
+    private static VerificationReport verify(Json.Obj document) {
         return CertificateVerifier.verify(document.toText().getBytes(StandardCharsets.UTF_8), Path.of("."), Optional.empty());
     }
 
@@ -44,7 +44,7 @@ class ReadableCertificateTest {
     void fanoProofIsShortAndVerifies() throws IOException {
         ReadableCertificate.Readable r = readable(FANO, 200);
         assertTrue(r.proof().steps() <= 48, "the Fano proof has " + r.proof().steps() + " steps");
-        Report report = verify(r.certificate());
+        VerificationReport report = verify(r.certificate());
         assertTrue(report.passed(), report.toString());
         assertEquals(r.proof().relations().size(),
                 r.certificate().requireObject("content").requireObject("nonOrientability").requireArray("relations").size());
@@ -55,7 +55,7 @@ class ReadableCertificateTest {
     void cornerN4ProofVerifies() throws IOException {
         ReadableCertificate.Readable r = readable(CORNER_N4, 200);
         assertTrue(r.proof().steps() > 48 && r.proof().steps() <= 200, "steps: " + r.proof().steps());
-        Report report = verify(r.certificate());
+        VerificationReport report = verify(r.certificate());
         assertTrue(report.passed(), report.toString());
     }
 
@@ -82,9 +82,9 @@ class ReadableCertificateTest {
         forced.set(0, new Forced(step.relation(), step.variable(), -step.sign()));
         ReadableProof tampered = new ReadableProof(proof.normalised(), new Branch(forced, proof.root().ending()));
         Json.Obj document = CertificateReader.readChecked(FANO);
-        Report report = verify(ReadableCertificate.variant(document, tampered));
+        VerificationReport report = verify(ReadableCertificate.variant(document, tampered));
         assertFalse(report.passed());
-        assertEquals(Report.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
+        assertEquals(VerificationReport.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
         assertTrue(verify(ReadableCertificate.variant(document, proof)).passed());
     }
 }

@@ -31,7 +31,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The provenance of a cube with more than 64 vertices: the n = 7 corner construction (128
- * vertices, H = the unit vectors, 1111111 pulled and contracted, math-notes §3), certified by the
+ * vertices, H = the unit vectors, 1111111 pulled and contracted, docs/mathematics.md §7), certified by the
  * library and written by {@link CertificateWriter}, is rebuilt by the verifier.
  */
 class BigCubeProvenanceTest {
@@ -54,15 +54,15 @@ class BigCubeProvenanceTest {
         corner7 = Json.parse(Files.readString(file)).asObject("certificate");
     }
 
-    static Report verify(Json.Obj cert) {
+    static VerificationReport verify(Json.Obj cert) {
         return CertificateVerifier.verify(bytes(cert), dir, Optional.empty());
     }
 
     @Test
     void theSevenCubeCornerCertificateVerifies() {
-        Report r = CertificateVerifier.verify(file);
+        VerificationReport r = CertificateVerifier.verify(file);
         assertTrue(r.passed(), r::toString);
-        assertTrue(r.checks().stream().allMatch(c -> c.status() == Report.Status.PASS), r::toString);
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == VerificationReport.Status.PASS), r::toString);
         assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().startsWith("the pulled 7-cube over Q"), r::toString);
     }
 
@@ -76,28 +76,39 @@ class BigCubeProvenanceTest {
     @Test
     void theEightCubeCornerCertificateVerifies() {
         // written by `chirocore reduce --cube 8` (H = the unit vectors, 11111111 pulled and contracted)
-        Report r = CertificateVerifier.verify(Path.of("src/test/resources/org/chirocore/check/corner-n8.cert.json"));
-        assertTrue(r.checks().stream().allMatch(c -> c.status() == Report.Status.PASS), r::toString);
+        VerificationReport r = CertificateVerifier.verify(Path.of("src/test/resources/org/chirocore/check/corner-n8.cert.json"));
+        assertTrue(r.checks().stream().allMatch(c -> c.status() == VerificationReport.Status.PASS), r::toString);
         assertTrue(r.check(CertificateVerifier.PROVENANCE).detail().startsWith("the pulled 8-cube over Q"), r::toString);
     }
 
-    @Test
-    void aTenCubeIsRebuiltUpToThePath() {
-        // the 10-cube with H = the unit vectors passes the flat and general-position tests quickly;
-        // the 7-cube's path then names no vertex of it
-        Json.Obj cert = tamper(corner7, Json.Num.of(10), "provenance", "construction", "cube");
+    /** The 7-cube certificate with its construction replaced by the 16-cube, H = the unit vectors and {@code pulled}. */
+    static Json.Obj sixteenCube(String pulled) {
+        int n = 16;
+        Json.Obj cert = tamper(corner7, Json.Num.of(n), "provenance", "construction", "cube");
         List<String> units = new ArrayList<>();
-        for (int k = 0; k < 10; k++) {
-            units.add("0".repeat(k) + "1" + "0".repeat(9 - k));
+        for (int k = 0; k < n; k++) {
+            units.add("0".repeat(k) + "1" + "0".repeat(n - 1 - k));
         }
         cert = tamper(cert, Json.Arr.ofStrings(units), "provenance", "construction", "hyperplane");
-        cert = tamper(cert, new Json.Str("1".repeat(10)), "provenance", "construction", "pulled");
-        assertRejected(verify(cert), CertificateVerifier.PROVENANCE, "path.contracted lists \"");
+        return tamper(cert, new Json.Str(pulled), "provenance", "construction", "pulled");
+    }
+
+    /** The largest cube the producer builds (AffineCube.MAX_DIMENSION = 16) is rebuilt as far as the path. */
+    @Test
+    void aSixteenCubeIsRebuiltUpToThePath() {
+        // the 16-cube (65 536 vertices) passes the flat and general-position tests; the 7-cube's path then names no vertex of it
+        assertRejected(verify(sixteenCube("1".repeat(16))), CertificateVerifier.PROVENANCE, "path.contracted lists \"");
+    }
+
+    /** With O = 11...10 the hyperline H − {00...01} and O span the facet x_16 = 0, so (H, O) is refused at n = 16 too. */
+    @Test
+    void aSixteenCubeNotInGeneralPositionIsRefused() {
+        assertRejected(verify(sixteenCube("1".repeat(15) + "0")), CertificateVerifier.PROVENANCE, "(H, O) are not in general position");
     }
 
     @Test
     void cubesAboveTheLimitAreRefused() {
-        assertRejected(verify(tamper(corner7, Json.Num.of(11), "provenance", "construction", "cube")),
-                CertificateVerifier.PROVENANCE, "construction.cube must be between 1 and 10 (at most 1024 vertices), found 11");
+        assertRejected(verify(tamper(corner7, Json.Num.of(17), "provenance", "construction", "cube")),
+                CertificateVerifier.PROVENANCE, "construction.cube must be between 1 and 16 (at most 65536 vertices), found 17");
     }
 }

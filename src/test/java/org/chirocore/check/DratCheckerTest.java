@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.function.Supplier;
 import java.util.stream.Stream;
 
+import org.chirocore.cert.LratConversion;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -59,7 +60,7 @@ class DratCheckerTest {
         long millis = (System.nanoTime() - start) / 1_000_000;
         assertTrue(outcome.valid(), outcome::failure);
         assertTrue(millis < 10_000, "checking took " + millis + " ms for " + outcome.summary());
-        String lrat = DratChecker.toLrat(cnf, drat);
+        String lrat = LratConversion.convert(cnf.variables(), cnf.clauses(), drat);
         assertEquals(Optional.empty(), LratChecker.check(cnf, lrat));
     }
 
@@ -76,13 +77,13 @@ class DratCheckerTest {
         assertFalse(outcome.summary().contains(" 0 deletions applied"), outcome.summary());
         // generous factor: the point is no per-lemma rescans, not a benchmark
         assertTrue(checked < 3 * found + 1_000_000_000L, "checking " + checked / 1_000_000 + " ms, finding " + found / 1_000_000 + " ms");
-        assertEquals(Optional.empty(), LratChecker.check(cnf, DratChecker.toLrat(cnf, drat)));
+        assertEquals(Optional.empty(), LratChecker.check(cnf, LratConversion.convert(cnf.variables(), cnf.clauses(), drat)));
     }
 
     @Test
     void aCorruptedLratHintIsRejected() {
         Cnf cnf = pigeonhole(4);
-        String lrat = DratChecker.toLrat(cnf, TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault));
+        String lrat = LratConversion.convert(cnf.variables(), cnf.clauses(), TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault));
         // replace the last hint of the first lemma by a clause that is not unit there
         String first = lrat.lines().filter(l -> !l.contains(" d ")).findFirst().orElseThrow();
         String[] t = first.split(" ");
@@ -100,7 +101,7 @@ class DratCheckerTest {
     void aRatLemmaIsAcceptedAndWrittenAsLrat() {
         String drat = "1 0\n4 0\n0\n";
         assertTrue(DratChecker.check(RAT_EXAMPLE, drat).valid());
-        String lrat = DratChecker.toLrat(RAT_EXAMPLE, drat);
+        String lrat = LratConversion.convert(RAT_EXAMPLE.variables(), RAT_EXAMPLE.clauses(), drat);
         assertTrue(lrat.startsWith("8 1 0 -1 2 3 0\n"), lrat);
         assertEquals(Optional.empty(), LratChecker.check(RAT_EXAMPLE, lrat));
     }

@@ -60,7 +60,7 @@ class LratCertificateTest {
 
     @Test
     void anLratProofIsCheckedByItsHints() throws IOException {
-        Report report = CertificateVerifier.verify(withLrat(UnaryOperator.identity()), Optional.empty());
+        VerificationReport report = CertificateVerifier.verify(withLrat(UnaryOperator.identity()), Optional.empty());
         assertTrue(report.passed(), report.toString());
         assertTrue(report.check(CertificateVerifier.DRAT).detail().contains("LRAT"));
     }
@@ -68,7 +68,7 @@ class LratCertificateTest {
     @Test
     void aWrongHintIsRejected() throws IOException {
         // Drop the last hint of the first lemma: it no longer propagates to a conflict.
-        Report report = CertificateVerifier.verify(withLrat(lrat -> {
+        VerificationReport report = CertificateVerifier.verify(withLrat(lrat -> {
             String first = lrat.lines().filter(l -> !l.contains(" d ")).findFirst().orElseThrow();
             String[] parts = first.trim().split("\\s+");
             StringBuilder shorter = new StringBuilder();
@@ -84,6 +84,6 @@ class LratCertificateTest {
             }
             return lrat.replaceFirst(java.util.regex.Pattern.quote(first), shorter.toString().trim());
         }), Optional.empty());
-        assertEquals(Report.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
+        assertEquals(VerificationReport.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
     }
 }

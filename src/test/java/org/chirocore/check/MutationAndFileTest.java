@@ -24,7 +24,7 @@ import org.sat4j.minisat.SolverFactory;
 /**
  * Proofs in a (gzip) file beside the certificate, proofs from a second solver configuration, and a
  * fixed-seed random mutation loop: no mutated certificate is accepted unless its content is the
- * original's (F7 via the n = 3 corner construction, math-notes §3).
+ * original's (F7 via the n = 3 corner construction, docs/mathematics.md §7).
  */
 class MutationAndFileTest {
     @TempDir
@@ -32,9 +32,13 @@ class MutationAndFileTest {
 
     static Json.Obj withFile;
 
-    /** The corner certificate with its proof moved to dir/corner.drat.gz. */
     @BeforeAll
     static void build() throws IOException {
+        withFile = withProofFile(dir);
+    }
+
+    /** The corner certificate with its proof moved to {@code dir}/corner.drat.gz. */
+    static Json.Obj withProofFile(Path dir) throws IOException {
         Json.Obj corner = TestCertificates.corner(TestCertificates.DEFAULT_SOLVER);
         String drat = CertificateVerifierTest.drat(corner);
         try (OutputStream out = new GZIPOutputStream(Files.newOutputStream(dir.resolve("corner.drat.gz")))) {
@@ -44,10 +48,10 @@ class MutationAndFileTest {
         Json.Obj moved = Json.Obj.builder().put("normalised", non.require("normalised")).put("relations", non.require("relations"))
                 .put("dratFile", "corner.drat.gz")
                 .put("dratSha256", CertificateVerifier.sha256(drat.getBytes(StandardCharsets.UTF_8))).build();
-        withFile = TestCertificates.tamper(corner, moved, "nonOrientability");
+        return TestCertificates.tamper(corner, moved, "nonOrientability");
     }
 
-    static Report verify(Json cert) {
+    static VerificationReport verify(Json cert) {
         return CertificateVerifier.verify(TestCertificates.bytes(cert), dir, Optional.empty());
     }
 
@@ -71,14 +75,14 @@ class MutationAndFileTest {
     @Test
     void aMissingProofFileIsAFailureNotAnException() {
         assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("absent.drat"), "nonOrientability", "dratFile")),
-                CertificateVerifier.DRAT, "cannot read");
+                CertificateVerifier.DRAT, "the proof file absent.drat does not exist");
     }
 
     @Test
     void proofsFromOtherSolverConfigurationsAreAccepted() {
         // LogicNG's lesson: re-check a claim with a second configuration
-        Report glucose = verify(TestCertificates.corner(SolverFactory::newGlucose21));
-        Report heap = verify(TestCertificates.corner(SolverFactory::newMiniLearningHeap));
+        VerificationReport glucose = verify(TestCertificates.corner(SolverFactory::newGlucose21));
+        VerificationReport heap = verify(TestCertificates.corner(SolverFactory::newMiniLearningHeap));
         assertTrue(glucose.passed(), glucose::toString);
         assertTrue(heap.passed(), heap::toString);
     }
@@ -99,12 +103,12 @@ class MutationAndFileTest {
             } catch (JsonFormatException e) {
                 // not JSON: the hash cannot even be recomputed, and the file is rejected at check 1
                 String file = "{\"format\": \"chirocore-certificate\", \"version\": 1, \"sha256\": \"\", \"content\": " + mutated + "}";
-                Report r = CertificateVerifier.verify(file.getBytes(StandardCharsets.UTF_8), dir, Optional.empty());
+                VerificationReport r = CertificateVerifier.verify(file.getBytes(StandardCharsets.UTF_8), dir, Optional.empty());
                 assertRejected(r, CertificateVerifier.FORMAT, "not valid JSON");
                 continue;
             }
             parsed++;
-            Report r = verify(TestCertificates.rehash((Json.Obj) TestCertificates.with(withFile, List.of("content"), content)));
+            VerificationReport r = verify(TestCertificates.rehash((Json.Obj) TestCertificates.with(withFile, List.of("content"), content)));
             assertTrue(!r.passed() || content.equals(original), () -> "accepted a changed certificate: " + r);
         }
         assertTrue(parsed > 50, "too few mutations parse to exercise the checks: " + parsed);
@@ -115,7 +119,7 @@ class MutationAndFileTest {
         Path file = dir.resolve("corner.json");
         Files.write(file, TestCertificates.bytes(withFile));
         assertTrue(CertificateVerifier.verify(file).passed());
-        Report missing = CertificateVerifier.verify(dir.resolve("nothing.json"));
+        VerificationReport missing = CertificateVerifier.verify(dir.resolve("nothing.json"));
         assertRejected(missing, CertificateVerifier.FORMAT, "cannot read the file");
         assertEquals(8, missing.checks().size());
     }

@@ -68,7 +68,7 @@ final class TestCertificates {
     }
 
     /**
-     * The n = 3 corner construction (math-notes §3): the real 3-cube pulled at 111 onto
+     * The n = 3 corner construction (docs/mathematics.md §7): the real 3-cube pulled at 111 onto
      * H = {100, 010, 001}, 111 contracted; its core is the Fano plane on 000, …, 110.
      */
     static Json.Obj corner(Supplier<ISolver> solver) {

@@ -33,7 +33,7 @@ class ReduceCommandTest {
 
     /**
      * The corner construction of the 3-cube, pulled and contracted, is the Fano plane
-     * (math-notes §3): already minimal, so the core is all 7 elements, rank 3, 28 bases, with a
+     * (docs/mathematics.md §7): already minimal, so the core is all 7 elements, rank 3, 28 bases, with a
      * deletion and a contraction witness per element.
      */
     @Test

@@ -1,6 +1,7 @@
 package org.chirocore.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -38,6 +39,32 @@ class ReportCommandTest {
         assertEquals(0, run.exit(), run.err());
         assertTrue(Files.exists(out.resolve("index.html")) && Files.exists(out.resolve("run.html"))
                 && Files.exists(out.resolve("n=10.html")), run.out());
+    }
+
+    @Test
+    void aPictureFileThatExistsIsNotReplacedWithoutForce() throws IOException {
+        Path picture = Files.writeString(dir.resolve("fano-configuration.svg"), "someone else's picture");
+        Path out = dir.resolve("fano.md");
+        CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--out", out.toString());
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+        assertTrue(run.err().contains(picture + ": the file already exists; give --force"), run.err());
+        assertEquals("someone else's picture", Files.readString(picture));
+        assertFalse(Files.exists(out), "nothing written");
+        assertEquals(0, CliRun.of("report", "certificates/fano.cert.json", "--out", out.toString(), "--force").exit());
+        assertTrue(Files.readString(picture).startsWith("<svg"));
+    }
+
+    @Test
+    void anIndexDoesNotReplaceACertificateReportWithoutForce() throws IOException {
+        Path out = Files.createDirectory(dir.resolve("corner"));
+        Path report = Files.writeString(out.resolve("n=4.html"), "kept");
+        CliRun run = CliRun.of("report", "--run", "families/corner", "--index", "--format", "html", "--out", out.toString());
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+        assertTrue(run.err().contains(report + ": the file already exists"), run.err());
+        assertEquals("kept", Files.readString(report));
+        try (var files = Files.list(out)) {
+            assertEquals(1, files.count(), "nothing written beside the existing file");
+        }
     }
 
     @Test

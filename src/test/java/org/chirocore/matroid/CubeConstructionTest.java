@@ -12,7 +12,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 class CubeConstructionTest {
-    /** Pulling 111 to x1 + x2 + x3 = 1 and contracting it gives the Fano plane, 28 bases (math-notes §3). */
+    /** Pulling 111 to x1 + x2 + x3 = 1 and contracting it gives the Fano plane, 28 bases (docs/mathematics.md §7). */
     @Test
     void cornerOfTheThreeCube() {
         CubeConstruction c = CubeConstruction.corner(3);

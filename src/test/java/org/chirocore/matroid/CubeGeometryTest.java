@@ -46,8 +46,8 @@ class CubeGeometryTest {
     }
 
     /**
-     * 2n facets and n(n−1) skew facets (two for each unordered pair i &lt; j; math-notes §3 says
-     * 2n(n−1), which counts ordered pairs twice: x_i = x_j and x_j = x_i are one set; for n = 3
+     * 2n facets and n(n−1) skew facets (two for each unordered pair i &lt; j: x_i = x_j and x_i = 1 − x_j; counting ordered pairs
+     * would double them, as x_i = x_j and x_j = x_i are one set; for n = 3
      * the 20 hyperplanes are 6 facets, 6 skew facets and 8 corner triangles). Each is a
      * hyperplane of the real cube and of the cube over GF(2) and GF(3), and occurs in the
      * enumeration.
@@ -87,7 +87,7 @@ class CubeGeometryTest {
 
     @Test
     void realThreeCubeHasTwelveRectangles() {
-        // 6 square faces + 6 diagonal rectangles (math-notes §3 brief).
+        // 6 square faces + 6 diagonal rectangles (common practice: count them on a drawn cube).
         assertEquals(12, CubeGeometry.rectangles(3).size());
     }
 

@@ -15,7 +15,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 /**
  * Sign conventions against real determinants: for a real matrix, χ(B) = sign det(columns B) is a
- * chirotope ([BLSWZ, §3.5]; math-notes §2 "sign sanity check"), so it must satisfy every relation
+ * chirotope ([BLSWZ, §3.5]; docs/mathematics.md §2, "sanity check"), so it must satisfy every relation
  * the scanner checks and every clause the encoder writes, and flipping any one sign that takes part
  * in a non-trivial relation must be caught.
  */

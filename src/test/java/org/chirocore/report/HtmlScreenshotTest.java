@@ -41,7 +41,7 @@ class HtmlScreenshotTest {
         assertTrue(Files.isExecutable(CHROMIUM), "the browser test needs " + CHROMIUM + " (apt-get install chromium)");
         Path html = dir.resolve(name + ".html");
         Document doc = Files.isDirectory(subject) ? RunReport.of(subject) : CertificateReport.of(subject, Optional.empty());
-        ReportWriter.write(doc, ReportFormat.HTML, html);
+        ReportWriter.write(doc, ReportFormat.HTML, html, true);
         Path shots = Path.of("target/screenshots");
         Files.createDirectories(shots);
         Path png = shots.resolve(name + ".png");

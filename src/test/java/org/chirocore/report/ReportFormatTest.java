@@ -14,6 +14,7 @@ class ReportFormatTest {
     @ParameterizedTest(name = "{0}: {1}")
     @CsvSource(delimiter = '@', value = {
         "TEX@ a_b {c} 50% $x$ #1 ^ ~ \\@ a\\_b \\{c\\} 50\\% \\$x\\$ \\#1 \\textasciicircum{} \\textasciitilde{} \\textbackslash{}",
+        "TEX@ without --input, a - b@ without -{}-input, a - b",
         "MD@ a_b *c* [d] |e| <f>@ a\\_b \\*c\\* \\[d\\] \\|e\\| \\<f\\>",
         "HTML@ a<b & \"c\"@ a&lt;b &amp; &quot;c&quot;"})
     void plainTextIsEscaped(ReportFormat format, String text, String escaped) {

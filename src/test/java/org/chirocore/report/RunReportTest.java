@@ -57,7 +57,7 @@ class RunReportTest {
 
     @Test
     void markdownLinksChartsAndPicturesWithDistinctNames(@TempDir Path dir) throws IOException {
-        List<Path> written = ReportWriter.write(RunReport.of(CORNER), ReportFormat.MD, dir.resolve("corner.md"));
+        List<Path> written = ReportWriter.write(RunReport.of(CORNER), ReportFormat.MD, dir.resolve("corner.md"), true);
         List<String> names = written.stream().map(p -> p.getFileName().toString()).toList();
         assertEquals("corner.md", names.get(0));
         assertTrue(names.containsAll(List.of("corner-core-size.svg", "corner-proof-size.svg", "corner-time.svg",
@@ -75,7 +75,7 @@ class RunReportTest {
 
     @Test
     void indexLinksTheRunAndEveryCertificate(@TempDir Path dir) throws IOException {
-        List<Path> written = RunReport.writeAll(CORNER, ReportFormat.HTML, dir);
+        List<Path> written = RunReport.writeAll(CORNER, ReportFormat.HTML, dir, true);
         String index = Files.readString(dir.resolve("index.html"));
         assertAll(
                 () -> assertEquals(dir.resolve("index.html"), written.get(0)),

@@ -53,7 +53,7 @@ class StoredCertificateReportsTest {
     void reportStatesTheClaimTheHashesAndTheCommand(Path certificate, ReportFormat format) throws IOException {
         CertificateSummary s = CertificateSummary.read(certificate);
         Path out = dir.resolve("report." + format.extension());
-        List<Path> written = ReportWriter.write(CertificateReport.of(certificate, Optional.empty()), format, out);
+        List<Path> written = ReportWriter.write(CertificateReport.of(certificate, Optional.empty()), format, out, true);
         // LaTeX may break a hash, and a long command line with a shell continuation
         String text = Files.readString(out).replace("\\allowbreak{}", "").replace(" \\\n    ", " ");
         boolean given = s.origin() instanceof Origin.Given;

@@ -86,7 +86,7 @@ abstract class CoreSearchContract {
 
     @Test
     void cornerConstructionInDimensionThreeGivesTheFanoPlane() {
-        // math-notes §3: H = {e1, e2, e3}, O = (1,1,1), pulled and contracted, gives F7.
+        // docs/mathematics.md §7: H = {e1, e2, e3}, O = (1,1,1), pulled and contracted, gives F7.
         AffineCube cube = AffineCube.real(3);
         int[] h = HyperplaneSpec.parse("100,010,001").resolve(cube);
         int o = cube.indexOf("111");

@@ -48,7 +48,7 @@ class GeneralPositionPairsTest {
 
     /**
      * n = 3: the only general-position pull up to symmetry is the corner triangle x1 + x2 + x3 = 1
-     * with the opposite vertex 111 (math-notes' construction giving the Fano plane; the 8 corner
+     * with the opposite vertex 111 (the corner construction of docs/mathematics.md §7, giving the Fano plane; the 8 corner
      * triangles each have one such vertex, from memory and re-derived by the brute-force test above).
      */
     @Test

@@ -12,7 +12,7 @@ import java.util.stream.Stream;
 
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
-import org.chirocore.check.Report;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.io.Json;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -65,9 +65,9 @@ class StoredSweepTest {
         for (boolean contract : new boolean[] {false, true}) {
             Verdict v = contract ? pair.contractedVerdict() : pair.pulledVerdict();
             Path file = SweepRun.levelDirectory(DIR, pair.n()).resolve(v.file());
-            Report report = CertificateVerifier.verify(file);
-            for (Report.Check c : report.checks()) {
-                assertTrue(c.status() == Report.Status.PASS, file + ": " + c);
+            VerificationReport report = CertificateVerifier.verify(file);
+            for (VerificationReport.Check c : report.checks()) {
+                assertTrue(c.status() == VerificationReport.Status.PASS, file + ": " + c);
             }
             assertEquals(CertificateWriter.construction(SweepRun.construction(pair.n(), pair.normal(), pair.offset(),
                     pair.pulled(), contract)), RecordedCertificate.read(file).construction(), file.toString());

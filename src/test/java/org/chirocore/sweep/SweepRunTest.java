@@ -46,7 +46,7 @@ class SweepRunTest {
     }
 
     /**
-     * n = 3: the corner pull gives the Fano plane F7 (math-notes §3 construction; F7 non-orientable:
+     * n = 3: the corner pull gives the Fano plane F7 (docs/mathematics.md §7 construction; F7 non-orientable:
      * Bland and Las Vergnas 1978, binary and not regular), and both certificates verify.
      */
     @Test

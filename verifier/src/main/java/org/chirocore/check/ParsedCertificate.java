@@ -5,8 +5,6 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
 
-import org.chirocore.io.Json;
-import org.chirocore.io.JsonValueException;
 
 /**
  * A certificate file read into plain values, with its structure and sizes checked (check 1 of the
@@ -17,14 +15,9 @@ import org.chirocore.io.JsonValueException;
  * @param lrat the inline LRAT proof (hints included), when given instead of a DRAT proof
  * @param provenance the provenance object, whose inside is checked by the provenance check
  */
-record Certificate(String sha256, Json.Obj content, int rank, List<String> labels, List<int[]> bases,
+record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<String> labels, List<int[]> bases,
         List<int[]> normalised, List<Relation> relations, Optional<String> drat, String dratFile, String dratSha256,
-        Optional<String> lrat, List<Witness> witnesses, Json.Obj provenance) {
-
-    static final int MAX_ELEMENTS = 64;
-    static final int MAX_BASES = 10_000_000;
-    static final int MAX_RELATIONS = 10_000_000;
-    static final int MAX_LABEL = 256;
+        Optional<String> lrat, List<Witness> witnesses, JsonTree.Obj provenance) {
 
     /** A listed relation [[x...], a, b, c, d]. */
     record Relation(int[] x, int a, int b, int c, int d) {
@@ -41,71 +34,71 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
     /**
      * Reads a parsed certificate.
      *
-     * @throws JsonValueException naming the first member of the wrong type, missing, unknown or too large
+     * @throws JsonTree.Mistyped naming the first member of the wrong type, missing, unknown or too large
      */
-    static Certificate read(Json json) {
-        Json.Obj top = json.asObject("the certificate");
+    static ParsedCertificate read(JsonTree.Value json) {
+        JsonTree.Obj top = json.asObject("the certificate");
         top.requireOnly(List.of("format", "version", "tool", "sha256", "content", "run"));
         if (!top.requireString("format").equals("chirocore-certificate")) {
-            throw new JsonValueException("field \"format\" must be \"chirocore-certificate\", found \"" + top.requireString("format") + "\"");
+            throw new JsonTree.Mistyped("field \"format\" must be \"chirocore-certificate\", found \"" + top.requireString("format") + "\"");
         }
         int version = top.requireInt("version");
         if (version != 1) {
-            throw new JsonValueException("unknown version " + version + "; this verifier reads version 1");
+            throw new JsonTree.Mistyped("unknown version " + version + "; this verifier reads version 1");
         }
         String sha256 = top.requireString("sha256");
-        Json.Obj content = top.requireObject("content");
+        JsonTree.Obj content = top.requireObject("content");
         content.requireOnly(List.of("statement", "core", "provenance", "nonOrientability", "minimality"));
         if (!content.requireString("statement").equals("minor-minimal non-orientable")) {
-            throw new JsonValueException("content.statement must be \"minor-minimal non-orientable\"");
+            throw new JsonTree.Mistyped("content.statement must be \"minor-minimal non-orientable\"");
         }
-        Json.Obj core = content.requireObject("core");
+        JsonTree.Obj core = content.requireObject("core");
         core.requireOnly(List.of("rank", "labels", "bases"));
         List<String> labels = labels(core.requireArray("labels"));
         int rank = core.requireInt("rank");
         if (rank < 0 || rank > labels.size()) {
-            throw new JsonValueException("core.rank must be between 0 and the number of labels " + labels.size() + ", found " + rank);
+            throw new JsonTree.Mistyped("core.rank must be between 0 and the number of labels " + labels.size() + ", found " + rank);
         }
-        List<int[]> bases = sets(core.requireArray("bases"), "core.bases", MAX_BASES);
-        Json.Obj non = content.requireObject("nonOrientability");
+        List<int[]> bases = sets(core.requireArray("bases"), "core.bases", Limits.MAX_BASES);
+        JsonTree.Obj non = content.requireObject("nonOrientability");
         non.requireOnly(List.of("normalised", "relations", "drat", "dratFile", "dratSha256", "lrat"));
-        List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", MAX_ELEMENTS + 1);
+        List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", Limits.MAX_ELEMENTS + 1);
         List<Relation> relations = relations(non.requireArray("relations"));
         Optional<String> drat = non.find("drat").map(d -> d.asString("nonOrientability.drat"));
         Optional<String> lrat = non.find("lrat").map(d -> d.asString("nonOrientability.lrat"));
         int proofs = (drat.isPresent() ? 1 : 0) + (non.has("dratFile") ? 1 : 0) + (lrat.isPresent() ? 1 : 0);
         if (proofs != 1 || non.has("dratFile") != non.has("dratSha256")) {
-            throw new JsonValueException("nonOrientability must have exactly one of \"drat\", \"lrat\", or both "
+            throw new JsonTree.Mistyped("nonOrientability must have exactly one of \"drat\", \"lrat\", or both "
                     + "\"dratFile\" and \"dratSha256\"");
         }
         String dratFile = non.has("dratFile") ? non.requireString("dratFile") : "";
         String dratSha256 = non.has("dratFile") ? non.requireString("dratSha256") : "";
-        return new Certificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256, lrat,
+        return new ParsedCertificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256, lrat,
                 witnesses(content.requireArray("minimality"), labels.size()), content.requireObject("provenance"));
     }
 
-    private static List<String> labels(Json.Arr array) {
-        if (array.size() > MAX_ELEMENTS) {
-            throw new JsonValueException("core.labels has " + array.size() + " elements; at most " + MAX_ELEMENTS + " are allowed");
+    private static List<String> labels(JsonTree.Arr array) {
+        if (array.size() > Limits.MAX_ELEMENTS) {
+            throw new JsonTree.Mistyped("core.labels has " + array.size() + " elements; at most " + Limits.MAX_ELEMENTS + " are allowed");
         }
         List<String> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {
             String label = array.get(i).asString("core.labels[" + i + "]");
-            if (label.isEmpty() || label.length() > MAX_LABEL) {
-                throw new JsonValueException("core.labels[" + i + "] must have 1 to " + MAX_LABEL + " characters");
+            if (label.isEmpty() || label.length() > Limits.MAX_LABEL) {
+                throw new JsonTree.Mistyped("core.labels[" + i + "] must have 1 to " + Limits.MAX_LABEL + " characters");
             }
             out.add(label);
         }
         if (new HashSet<>(out).size() != out.size()) {
-            throw new JsonValueException("core.labels are not distinct");
+            throw new JsonTree.Mistyped("core.labels are not distinct");
         }
         return List.copyOf(out);
     }
 
     /** An array of at most {@code max} arrays of at most 64 ints each. */
-    static List<int[]> sets(Json.Arr array, String what, int max) {
+    static List<int[]> sets(JsonTree.Arr array, String what, int max) {
         if (array.size() > max) {
-            throw new JsonValueException(what + " has " + array.size() + " entries; at most " + max + " are allowed");
+            throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + max + " are allowed");
         }
         List<int[]> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {
@@ -114,9 +107,9 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         return out;
     }
 
-    private static int[] ints(Json.Arr array, String what) {
-        if (array.size() > MAX_ELEMENTS) {
-            throw new JsonValueException(what + " has " + array.size() + " entries; at most " + MAX_ELEMENTS + " are allowed");
+    private static int[] ints(JsonTree.Arr array, String what) {
+        if (array.size() > Limits.MAX_ELEMENTS) {
+            throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + Limits.MAX_ELEMENTS + " are allowed");
         }
         int[] out = new int[array.size()];
         for (int i = 0; i < out.length; i++) {
@@ -125,16 +118,16 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         return out;
     }
 
-    private static List<Relation> relations(Json.Arr array) {
-        if (array.size() > MAX_RELATIONS) {
-            throw new JsonValueException("nonOrientability.relations has " + array.size() + " entries; at most " + MAX_RELATIONS + " are allowed");
+    private static List<Relation> relations(JsonTree.Arr array) {
+        if (array.size() > Limits.MAX_RELATIONS) {
+            throw new JsonTree.Mistyped("nonOrientability.relations has " + array.size() + " entries; at most " + Limits.MAX_RELATIONS + " are allowed");
         }
         List<Relation> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {
             String what = "nonOrientability.relations[" + i + "]";
-            Json.Arr r = array.get(i).asArray(what);
+            JsonTree.Arr r = array.get(i).asArray(what);
             if (r.size() != 5) {
-                throw new JsonValueException(what + " must be [[x...], a, b, c, d], found " + r.size() + " entries");
+                throw new JsonTree.Mistyped(what + " must be [[x...], a, b, c, d], found " + r.size() + " entries");
             }
             out.add(new Relation(ints(r.get(0).asArray(what + "[0]"), what + "[0]"), r.get(1).asInt(what + "[1]"),
                     r.get(2).asInt(what + "[2]"), r.get(3).asInt(what + "[3]"), r.get(4).asInt(what + "[4]")));
@@ -142,14 +135,14 @@ record Certificate(String sha256, Json.Obj content, int rank, List<String> label
         return out;
     }
 
-    private static List<Witness> witnesses(Json.Arr array, int elements) {
+    private static List<Witness> witnesses(JsonTree.Arr array, int elements) {
         if (array.size() != elements) {
-            throw new JsonValueException("content.minimality has " + array.size() + " entries; it needs one per core element, " + elements);
+            throw new JsonTree.Mistyped("content.minimality has " + array.size() + " entries; it needs one per core element, " + elements);
         }
         List<Witness> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {
             String what = "content.minimality[" + i + "]";
-            Json.Obj w = array.get(i).asObject(what);
+            JsonTree.Obj w = array.get(i).asObject(what);
             w.requireOnly(List.of("element", "deletion", "contraction"));
             out.add(new Witness(w.require("element").asString(what + ".element"), w.require("deletion").asString(what + ".deletion"),
                     w.require("contraction").asString(what + ".contraction")));

@@ -1,7 +1,13 @@
 package org.chirocore.check;
 
+import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.OutputStream;
+import java.nio.charset.CodingErrorAction;
+import java.nio.file.LinkOption;
+import java.security.DigestInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -13,14 +19,11 @@ import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPInputStream;
 
-import org.chirocore.check.Certificate.Relation;
-import org.chirocore.check.Certificate.Witness;
+import org.chirocore.check.ParsedCertificate.Relation;
+import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.Relations.Term;
-import org.chirocore.check.Report.Check;
-import org.chirocore.check.Report.Status;
-import org.chirocore.io.Json;
-import org.chirocore.io.JsonFormatException;
-import org.chirocore.io.JsonValueException;
+import org.chirocore.check.VerificationReport.Check;
+import org.chirocore.check.VerificationReport.Status;
 
 /**
  * Verifies a certificate of a minor-minimal non-orientable matroid (docs/certificate-format.md),
@@ -44,25 +47,43 @@ public final class CertificateVerifier {
     public static final String PROVENANCE = "provenance";
     /** The check names, in the spec's order. */
     public static final List<String> CHECKS = List.of(FORMAT, HASH, CORE, NORMALISATION, RELATIONS, DRAT, MINIMALITY, PROVENANCE);
-    /** Largest certificate or (uncompressed) DRAT file read, in bytes. */
-    static final int MAX_BYTES = 1 << 30;
 
     private CertificateVerifier() {
     }
 
     /** Verifies the certificate in {@code file}; a given-matroid provenance is reported as not run. */
-    public static Report verify(Path file) {
+    public static VerificationReport verify(Path file) {
         return verify(file, Optional.empty());
     }
 
     /** Verifies the certificate in {@code file}, reading a given matroid's file from {@code input} if present. */
-    public static Report verify(Path file, Optional<Path> input) {
+    public static VerificationReport verify(Path file, Optional<Path> input) {
         Path dir = file.toAbsolutePath().getParent();
         try {
-            return verify(readCapped(Files.newInputStream(file), file.getFileName().toString()), dir, input, file.toString());
+            return verify(readRegularFile(file, Limits.MAX_CERTIFICATE_BYTES), dir, input, file.toString());
         } catch (IOException e) {
-            return new Report(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
+            return new VerificationReport(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
                     "the file could not be read"), 0);
+        }
+    }
+
+    /**
+     * The bytes of {@code file}, which must be a regular file (not a directory, FIFO or device) of
+     * at most {@code max} bytes; both are checked before reading.
+     */
+    static byte[] readRegularFile(Path file, long max) throws IOException {
+        if (!Files.isRegularFile(file)) {
+            throw new IOException(Files.exists(file) ? "not a regular file" : "no such file");
+        }
+        if (Files.size(file) > max) {
+            throw new IOException("the file has " + Files.size(file) + " bytes, more than the verifier's limit of " + max);
+        }
+        try (InputStream in = Files.newInputStream(file)) {
+            byte[] bytes = in.readNBytes((int) max + 1);
+            if (bytes.length > max) {
+                throw new IOException("the file grew beyond the verifier's limit of " + max + " bytes while being read");
+            }
+            return bytes;
         }
     }
 
@@ -72,26 +93,26 @@ public final class CertificateVerifier {
      * @param baseDir the directory in which a {@code dratFile} is looked up
      * @param input the matroid file of a given-matroid provenance, if any
      */
-    public static Report verify(byte[] bytes, Path baseDir, Optional<Path> input) {
+    public static VerificationReport verify(byte[] bytes, Path baseDir, Optional<Path> input) {
         return verify(bytes, baseDir, input, "(" + bytes.length + " bytes)");
     }
 
-    private static Report verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
+    private static VerificationReport verify(byte[] bytes, Path baseDir, Optional<Path> input, String source) {
         long start = System.nanoTime();
         List<Check> checks = new ArrayList<>();
-        Certificate certificate;
+        ParsedCertificate certificate;
         try {
-            certificate = Certificate.read(Json.parseUtf8(bytes));
-        } catch (JsonFormatException e) {
+            certificate = ParsedCertificate.read(JsonTree.parse(bytes));
+        } catch (JsonTree.Malformed e) {
             checks.add(new Check(FORMAT, Status.FAIL, "not valid JSON: " + e.getMessage()));
-            return new Report(source, notRun(checks, "the file is not JSON"), elapsed(start));
-        } catch (JsonValueException e) {
+            return new VerificationReport(source, notRun(checks, "the file is not JSON"), elapsed(start));
+        } catch (JsonTree.Mistyped e) {
             checks.add(new Check(FORMAT, Status.FAIL, e.getMessage()));
-            return new Report(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
-        } catch (RuntimeException e) {
-            // a bug of the verifier must still give a FAIL line, never an accepted certificate
-            checks.add(new Check(FORMAT, Status.FAIL, "internal error of the verifier: " + e));
-            return new Report(source, notRun(checks, "the file could not be read"), elapsed(start));
+            return new VerificationReport(source, notRun(checks, "the file is not a certificate of this format"), elapsed(start));
+        } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
+            // a bug or exhausted resources must still give a FAIL line, never an accepted certificate
+            checks.add(new Check(FORMAT, Status.FAIL, failure(e)));
+            return new VerificationReport(source, notRun(checks, "the file could not be read"), elapsed(start));
         }
         checks.add(new Check(FORMAT, Status.PASS, "chirocore-certificate version 1, rank " + certificate.rank() + " on "
                 + certificate.labels().size() + " elements, " + certificate.bases().size() + " bases"));
@@ -100,7 +121,7 @@ public final class CertificateVerifier {
         Check core = run(CORE, v::core);
         checks.add(core);
         if (core.status() != Status.PASS) {
-            return new Report(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
+            return new VerificationReport(source, notRun(checks, "the core's bases are not valid"), elapsed(start));
         }
         checks.add(run(NORMALISATION, v::normalisation));
         Check relations = run(RELATIONS, v::relations);
@@ -109,7 +130,7 @@ public final class CertificateVerifier {
                 : new Check(DRAT, Status.NOT_RUN, "not checked because a relation is invalid"));
         checks.add(run(MINIMALITY, v::minimality));
         checks.add(run(PROVENANCE, v::provenance));
-        return new Report(source, checks, elapsed(start));
+        return new VerificationReport(source, checks, elapsed(start));
     }
 
     private static long elapsed(long start) {
@@ -145,57 +166,96 @@ public final class CertificateVerifier {
 
     private interface Step {
         /** Runs the check; returns what was checked. */
-        String run() throws Failure, Skipped, IOException, Provenance.Mismatch;
+        String run() throws Failure, Skipped, IOException, ProvenanceCheck.Mismatch;
     }
 
     private static Check run(String name, Step step) {
         try {
             return new Check(name, Status.PASS, step.run());
-        } catch (Failure | Provenance.Mismatch | JsonValueException e) {
+        } catch (Failure | ProvenanceCheck.Mismatch | JsonTree.Mistyped e) {
             return new Check(name, Status.FAIL, e.getMessage());
         } catch (Skipped e) {
             return new Check(name, Status.NOT_RUN, e.getMessage());
-        } catch (JsonFormatException e) {
+        } catch (JsonTree.Malformed e) {
             return new Check(name, Status.FAIL, "not valid JSON: " + e.getMessage());
         } catch (IOException e) {
-            return new Check(name, Status.FAIL, "cannot read: " + e);
+            return new Check(name, Status.FAIL, "cannot read: " + e.getMessage());
         } catch (ArithmeticException e) {
             return new Check(name, Status.FAIL, "exact 64-bit arithmetic overflowed (" + e.getMessage() + "); not checked");
-        } catch (RuntimeException e) {
-            // a bug of the verifier must still give a FAIL line, never an accepted certificate
-            return new Check(name, Status.FAIL, "internal error of the verifier: " + e);
+        } catch (RuntimeException | OutOfMemoryError | StackOverflowError e) {
+            // a bug or exhausted resources must still give a FAIL line, never an accepted certificate
+            return new Check(name, Status.FAIL, failure(e));
         }
+    }
+
+    /** The FAIL detail for an unexpected exception or an exhausted resource. */
+    private static String failure(Throwable e) {
+        if (e instanceof OutOfMemoryError) {
+            return "the verifier ran out of memory (" + e.getMessage() + "); not checked";
+        }
+        if (e instanceof StackOverflowError) {
+            return "the verifier ran out of stack; not checked";
+        }
+        return "internal error of the verifier: " + e;
     }
 
     /** The SHA-256 of {@code bytes} as 64 lower-case hex digits. */
     static String sha256(byte[] bytes) {
+        return HexFormat.of().formatHex(sha256().digest(bytes));
+    }
+
+    private static MessageDigest sha256() {
         try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("Every Java platform has SHA-256.", e);
         }
     }
 
-    private static byte[] readCapped(InputStream in, String name) throws IOException {
-        try (InputStream stream = in) {
-            byte[] bytes = stream.readNBytes(MAX_BYTES + 1);
-            if (bytes.length > MAX_BYTES) {
-                throw new IOException(name + " is larger than " + MAX_BYTES + " bytes");
+    /** A stream that fails with a message naming {@code what} once more than {@code max} bytes are read from it. */
+    private static final class CappedInputStream extends FilterInputStream {
+        private final long max;
+        private final String what;
+        private long count;
+
+        CappedInputStream(InputStream in, long max, String what) {
+            super(in);
+            this.max = max;
+            this.what = what;
+        }
+
+        @Override
+        public int read() throws IOException {
+            int b = super.read();
+            count(b < 0 ? 0 : 1);
+            return b;
+        }
+
+        @Override
+        public int read(byte[] buffer, int offset, int length) throws IOException {
+            int n = super.read(buffer, offset, length);
+            count(Math.max(n, 0));
+            return n;
+        }
+
+        private void count(int n) throws IOException {
+            count += n;
+            if (count > max) {
+                throw new IOException(what + " has more than " + max + " bytes, the verifier's limit");
             }
-            return bytes;
         }
     }
 
     /** The checks of one parsed certificate; each fills in what the later ones need. */
     private static final class Verification {
-        private final Certificate c;
+        private final ParsedCertificate c;
         private final Path baseDir;
         private final Optional<Path> input;
         private final int n;
         private BasisTable core;
         private Cnf cnf;
 
-        Verification(Certificate c, Path baseDir, Optional<Path> input) {
+        Verification(ParsedCertificate c, Path baseDir, Optional<Path> input) {
             this.c = c;
             this.baseDir = baseDir;
             this.input = input;
@@ -203,7 +263,7 @@ public final class CertificateVerifier {
         }
 
         String hash() throws Failure {
-            String actual = sha256(c.content().toText().getBytes(StandardCharsets.UTF_8));
+            String actual = sha256(JsonTree.canonical(c.content()).getBytes(StandardCharsets.UTF_8));
             if (!actual.equals(c.sha256())) {
                 throw new Failure("the canonical content hashes to " + actual + ", not the recorded " + c.sha256());
             }
@@ -245,7 +305,7 @@ public final class CertificateVerifier {
 
         /**
          * The normalised bases are bases and the vectors (1, 1_B) are GF(2)-independent
-         * (math-notes §2, normalisation): equivalently the differences 1_B ⊕ 1_B0 are independent.
+         * (docs/mathematics.md §4): equivalently the differences 1_B ⊕ 1_B0 are independent.
          */
         String normalisation() throws Failure {
             long[] pivotByTopBit = new long[64];
@@ -312,30 +372,64 @@ public final class CertificateVerifier {
                 }
                 return "the empty clause is derived (LRAT hints checked)";
             }
-            String proof = c.drat().isPresent() ? c.drat().get() : dratFile();
-            DratChecker.Outcome outcome = DratChecker.check(cnf, proof);
+            DratChecker.Outcome outcome = c.drat().isPresent() ? DratChecker.check(cnf, c.drat().get()) : dratFile();
             if (!outcome.valid()) {
                 throw new Failure(outcome.failure());
             }
             return "the empty clause is derived (" + outcome.summary() + ")";
         }
 
-        private String dratFile() throws Failure, IOException {
+        /**
+         * Checks the proof in the file named by {@code dratFile}: a regular file (not a symbolic
+         * link, FIFO or device) beside the certificate, gzip-compressed when its name ends in .gz,
+         * at most {@link Limits#MAX_PROOF_BYTES} bytes before and after decompression, streamed
+         * through the checker; a valid proof is then hashed to its end and the hash compared.
+         */
+        private DratChecker.Outcome dratFile() throws Failure, IOException {
             String name = c.dratFile();
             if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals("..") || name.equals(".")) {
-                throw new Failure("dratFile \"" + name + "\" must be a plain file name beside the certificate");
+                throw new Failure("dratFile \"" + Escaping.printable(name) + "\" must be a plain file name beside the certificate");
             }
             Path file = baseDir.resolve(name);
-            InputStream in = Files.newInputStream(file);
-            byte[] bytes = readCapped(name.endsWith(".gz") ? new GZIPInputStream(in) : in, name);
-            if (!sha256(bytes).equals(c.dratSha256())) {
-                throw new Failure("the uncompressed " + name + " hashes to " + sha256(bytes) + ", not the recorded " + c.dratSha256());
+            if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
+                throw new Failure("the proof file " + Escaping.printable(name) + (Files.isSymbolicLink(file)
+                        ? " is a symbolic link; it must be a regular file beside the certificate"
+                        : Files.exists(file) ? " is not a regular file" : " does not exist"));
             }
-            return new String(bytes, StandardCharsets.UTF_8);
+            if (Files.size(file) > Limits.MAX_PROOF_BYTES) {
+                throw new Failure("the proof file " + Escaping.printable(name) + " has " + Files.size(file)
+                        + " bytes, more than the verifier's limit of " + Limits.MAX_PROOF_BYTES);
+            }
+            MessageDigest sha = sha256();
+            DratChecker.Outcome outcome;
+            try (InputStream raw = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS);
+                    InputStream in = new DigestInputStream(new CappedInputStream(name.endsWith(".gz") ? new GZIPInputStream(raw) : raw,
+                            Limits.MAX_PROOF_BYTES, "the uncompressed " + Escaping.printable(name)), sha)) {
+                outcome = DratChecker.check(cnf, new InputStreamReader(in,
+                        StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)));
+                if (!outcome.valid()) {
+                    return outcome;
+                }
+                in.transferTo(OutputStream.nullOutputStream());
+            }
+            String actual = HexFormat.of().formatHex(sha.digest());
+            if (!actual.equals(c.dratSha256())) {
+                throw new Failure("the uncompressed " + Escaping.printable(name) + " hashes to " + actual + ", not the recorded "
+                        + Escaping.printable(c.dratSha256()));
+            }
+            return outcome;
         }
 
         /** Each witness has one sign per basis of its minor and satisfies all its 3-term relations ([BLSWZ, Thm. 3.6.2]). */
         String minimality() throws Failure {
+            long work = 0;
+            for (int e = 0; e < n; e++) {
+                work = Math.addExact(work, Relations.evaluations(core, e));
+            }
+            if (work > Limits.MAX_WITNESS_RELATIONS) {
+                throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
+                        + Limits.MAX_WITNESS_RELATIONS + "; not checked");
+            }
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
                 if (!w.element().equals(c.labels().get(e))) {
@@ -365,10 +459,11 @@ public final class CertificateVerifier {
             }
         }
 
-        String provenance() throws Provenance.Mismatch, Skipped, IOException {
-            Optional<String> rebuilt = Provenance.rebuild(c.provenance(), c.labels(), core, input);
+        String provenance() throws ProvenanceCheck.Mismatch, Skipped, IOException {
+            Optional<String> rebuilt = ProvenanceCheck.rebuild(c.provenance(), c.labels(), core, input);
             if (rebuilt.isEmpty()) {
-                throw new Skipped("a given matroid can only be rebuilt from its file; run verify with --input FILE");
+                throw new Skipped("the provenance is well formed, but a given matroid can only be rebuilt from its file; "
+                        + "run verify with --input FILE");
             }
             return rebuilt.get();
         }

@@ -1,5 +1,6 @@
 package org.chirocore.check;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -41,11 +42,29 @@ class StoredCertificatesTest {
     void storedCertificateVerifies(Path certificate) {
         String name = certificate.getFileName().toString().replace(".cert.json", ".json");
         Path input = DIR.resolve("inputs").resolve(name);
-        Report report = CertificateVerifier.verify(certificate, Files.exists(input) ? Optional.of(input) : Optional.empty());
-        for (Report.Check c : report.checks()) {
-            assertTrue(c.status() == Report.Status.PASS, certificate + ": " + c);
+        VerificationReport report = CertificateVerifier.verify(certificate, Files.exists(input) ? Optional.of(input) : Optional.empty());
+        for (VerificationReport.Check c : report.checks()) {
+            assertTrue(c.status() == VerificationReport.Status.PASS, certificate + ": " + c);
         }
         System.out.println(certificate + ": verified in " + report.millis() + " ms");
+    }
+
+    /** The stand-alone command line: one verdict line per file, exit 4 while a given matroid's input is missing, 0 with it. */
+    @org.junit.jupiter.api.Test
+    void theStandAloneCommandLineGivesTheVerdictsAndExitCodes() {
+        java.io.StringWriter text = new java.io.StringWriter();
+        int exit = VerifierMain.verify(List.of(DIR.resolve("corner-n3.cert.json"), DIR.resolve("fano.cert.json")), Optional.empty(), false,
+                new java.io.PrintWriter(text));
+        assertEquals(VerifierMain.INCOMPLETE, exit, text.toString());
+        assertTrue(text.toString().contains("corner-n3.cert.json: verified (checked in "), text.toString());
+        assertTrue(text.toString().contains("fano.cert.json: verified except provenance (checked in "), text.toString());
+        java.io.StringWriter json = new java.io.StringWriter();
+        assertEquals(VerifierMain.VERIFIED, VerifierMain.verify(List.of(DIR.resolve("fano.cert.json")), Optional.of(DIR.resolve("inputs/fano.json")), true,
+                new java.io.PrintWriter(json)));
+        JsonTree.Obj verdict = JsonTree.parse(json.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8)).asArray("output")
+                .get(0).asObject("verdict");
+        assertTrue(verdict.requireBoolean("complete"));
+        assertEquals("verified", verdict.requireString("verdict"));
     }
 
     @org.junit.jupiter.api.Test

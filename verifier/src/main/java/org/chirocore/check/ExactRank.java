@@ -88,6 +88,96 @@ final class ExactRank {
         return false;
     }
 
+    /**
+     * The cofactor vector c of d − 1 vectors v_1, …, v_{d−1} of length d (the columns {@code picked}):
+     * c · x = det(v_1, …, v_{d−1}, x) for every x, by expanding the determinant along x. So c is zero
+     * exactly when the vectors are dependent, and otherwise x lies in their span iff c · x = 0.
+     * Cost: d determinants of order d − 1.
+     *
+     * @throws ArithmeticException when an intermediate value over Q overflows a long
+     */
+    static long[] cofactors(long[][] columns, int[] picked, long p) {
+        int d = picked.length + 1;
+        long[] c = new long[d];
+        for (int skip = 0; skip < d; skip++) {
+            long[][] a = new long[d - 1][d - 1];
+            for (int i = 0, row = 0; i < d; i++) {
+                if (i == skip) {
+                    continue;
+                }
+                for (int j = 0; j < d - 1; j++) {
+                    a[row][j] = p == 0 ? columns[picked[j]][i] : Math.floorMod(columns[picked[j]][i], p);
+                }
+                row++;
+            }
+            // the coordinate x_skip sits in row skip of the d × d matrix (v_1, …, v_{d−1}, x)
+            long minor = determinant(a, p);
+            long sign = (skip + d - 1) % 2 == 0 ? 1 : -1;
+            c[skip] = p == 0 ? sign * minor : Math.floorMod(sign * minor, p);
+        }
+        return c;
+    }
+
+    /** c · x, exactly over Q (overflow throws) or mod p. */
+    static long dot(long[] c, long[] x, long p) {
+        long sum = 0;
+        for (int i = 0; i < c.length; i++) {
+            sum = p == 0 ? Math.addExact(sum, Math.multiplyExact(c[i], x[i])) : (sum + c[i] * Math.floorMod(x[i], p)) % p;
+        }
+        return sum;
+    }
+
+    /** Whether every entry of {@code c} is 0. */
+    static boolean isZero(long[] c) {
+        for (long v : c) {
+            if (v != 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * The determinant of the square matrix {@code a} (overwritten): over Q by Bareiss's elimination,
+     * whose last pivot is the determinant; mod p by Gaussian elimination, the product of the pivots.
+     */
+    private static long determinant(long[][] a, long p) {
+        int k = a.length;
+        long sign = 1;
+        long previous = 1;
+        long product = 1;
+        for (int c = 0; c < k; c++) {
+            int r = c;
+            while (r < k && a[r][c] == 0) {
+                r++;
+            }
+            if (r == k) {
+                return 0;
+            }
+            if (r != c) {
+                long[] t = a[r];
+                a[r] = a[c];
+                a[c] = t;
+                sign = -sign;
+            }
+            long inverse = p == 0 ? 0 : java.math.BigInteger.valueOf(a[c][c]).modInverse(java.math.BigInteger.valueOf(p)).longValue();
+            for (int i = c + 1; i < k; i++) {
+                long factor = p == 0 ? 0 : a[i][c] * inverse % p;
+                for (int j = c + 1; j < k; j++) {
+                    a[i][j] = p == 0 ? Math.subtractExact(Math.multiplyExact(a[c][c], a[i][j]), Math.multiplyExact(a[i][c], a[c][j])) / previous
+                            : Math.floorMod(a[i][j] - factor * a[c][j], p);
+                }
+                a[i][c] = 0;
+            }
+            previous = a[c][c];
+            product = p == 0 ? 1 : product * a[c][c] % p;
+        }
+        if (k == 0) {
+            return 1;
+        }
+        return p == 0 ? sign * a[k - 1][k - 1] : Math.floorMod(sign * product, p);
+    }
+
     /** Whether p is a prime, by trial division (p is at most 46 340 here). */
     static boolean isPrime(long p) {
         if (p < 2) {

@@ -5,30 +5,25 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.BitSet;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.ToIntFunction;
 
-import org.chirocore.io.Json;
 
 /**
  * Check 8: rebuilding the core from its provenance with exact arithmetic of our own. A construction
- * is the affine n-cube (vertex v as the column (1, v), math-notes §3) over Q or GF(p), pulled at O
+ * is the affine n-cube (vertex v as the column (1, v), docs/mathematics.md §7) over Q or GF(p), pulled at O
  * onto H, optionally contracted at O; a given matroid is read from {@code --input}. Then the core
  * must be exactly M/C\D (rank_{M/C\D}(S) = rank_M(S ∪ C) − rank_M(C), [Ox, Prop. 3.1.6]). Cost: one
  * rank evaluation per r-subset of the core's ground set, plus the general-position test. Subsets
  * of a cube's ground set (up to 2^10 vertices) are BitSets; a given matroid and the core have at
  * most 64 elements.
  */
-final class Provenance {
-    /** Largest number of candidate subsets enumerated when rebuilding a minor or testing general position. */
-    static final long MAX_CANDIDATES = 50_000_000;
-
-    /** Largest cube dimension rebuilt: 2^10 = 1024 vertices. */
-    static final int MAX_CUBE = 10;
-
+final class ProvenanceCheck {
     /** A rejected provenance; the message says what does not match. */
     static final class Mismatch extends Exception {
         private static final long serialVersionUID = 1L;
@@ -39,36 +34,49 @@ final class Provenance {
     }
 
     /** A matroid to take a minor of: its labels and its rank function on sets of element numbers. */
-    private record Source(List<String> labels, ToIntFunction<BitSet> rank, BitSet contractedFirst) {
+    private record Source(List<String> labels, ToIntFunction<BitSet> rank, int fullRank, BitSet contractedFirst) {
     }
 
-    private Provenance() {
+    private ProvenanceCheck() {
     }
 
     /**
      * Rebuilds the core; returns a description of what was rebuilt, or empty when the provenance is
      * a given matroid and no input file was supplied.
      */
-    static Optional<String> rebuild(Json.Obj provenance, List<String> coreLabels, BasisTable core, Optional<Path> input)
+    static Optional<String> rebuild(JsonTree.Obj provenance, List<String> coreLabels, BasisTable core, Optional<Path> input)
             throws Mismatch, IOException {
         provenance.requireOnly(List.of("construction", "given", "path"));
         if (provenance.has("construction") == provenance.has("given")) {
             throw new Mismatch("provenance must have exactly one of \"construction\" and \"given\"");
         }
+        JsonTree.Obj path = provenance.requireObject("path");
+        path.requireOnly(List.of("contracted", "deleted"));
+        int removed = distinctLabels(path.requireArray("contracted"), path.requireArray("deleted"), coreLabels);
         Source source;
         String what;
         if (provenance.has("construction")) {
-            Json.Obj c = provenance.requireObject("construction");
+            JsonTree.Obj c = provenance.requireObject("construction");
             source = cube(c);
             what = "the pulled " + c.requireInt("cube") + "-cube over " + c.requireString("field");
-        } else if (input.isPresent()) {
-            source = given(provenance.requireObject("given"), input.get());
-            what = "the given matroid " + input.get().getFileName();
         } else {
-            return Optional.empty();
+            JsonTree.Obj given = provenance.requireObject("given");
+            given.requireOnly(List.of("sha256", "elements", "rank"));
+            if (!given.requireString("sha256").matches("[0-9a-f]{64}")) {
+                throw new Mismatch("given.sha256 must be 64 lower-case hex digits");
+            }
+            int elements = given.requireInt("elements");
+            int rank = given.requireInt("rank");
+            if (elements != coreLabels.size() + removed || rank < core.rank || rank > elements) {
+                throw new Mismatch("given.elements " + elements + " and given.rank " + rank + " do not fit a core of "
+                        + coreLabels.size() + " elements and rank " + core.rank + " after removing " + removed + " elements");
+            }
+            if (input.isEmpty()) {
+                return Optional.empty();
+            }
+            source = given(given, input.get());
+            what = "the given matroid " + Escaping.printable(input.get().getFileName().toString());
         }
-        Json.Obj path = provenance.requireObject("path");
-        path.requireOnly(List.of("contracted", "deleted"));
         BitSet contracted = labelSet(path.requireArray("contracted"), source.labels(), "path.contracted");
         BitSet deleted = labelSet(path.requireArray("deleted"), source.labels(), "path.deleted");
         if (contracted.intersects(deleted) || contracted.intersects(source.contractedFirst())
@@ -81,12 +89,35 @@ final class Provenance {
                 + ", gives the core exactly");
     }
 
-    /** The pulled cube of a construction, after checking that H is a flat of rank n and (H, O) are in general position. */
-    private static Source cube(Json.Obj c) throws Mismatch {
+    /**
+     * Checks, without the source matroid, that the path's labels are strings, none repeated within
+     * or across the two lists or equal to a core label; returns how many there are.
+     */
+    private static int distinctLabels(JsonTree.Arr contracted, JsonTree.Arr deleted, List<String> coreLabels) throws Mismatch {
+        Set<String> seen = new HashSet<>(coreLabels);
+        for (JsonTree.Arr array : List.of(contracted, deleted)) {
+            String what = array == contracted ? "path.contracted" : "path.deleted";
+            for (int i = 0; i < array.size(); i++) {
+                String label = array.get(i).asString(what + "[" + i + "]");
+                if (!seen.add(label)) {
+                    throw new Mismatch(what + "[" + i + "] \"" + Escaping.printable(label)
+                            + "\" repeats a label of the path or of the core");
+                }
+            }
+        }
+        return contracted.size() + deleted.size();
+    }
+
+    /**
+     * The pulled cube of a construction, after checking that H is a flat of rank n and (H, O) are
+     * in general position. Only the ranks needed are computed: a basis of H, then one cofactor
+     * vector per hyperplane tested, so that membership in a span is one dot product per vertex.
+     */
+    private static Source cube(JsonTree.Obj c) throws Mismatch {
         c.requireOnly(List.of("cube", "field", "hyperplane", "pulled", "contractPulled"));
         int n = c.requireInt("cube");
-        if (n < 1 || n > MAX_CUBE) {
-            throw new Mismatch("construction.cube must be between 1 and " + MAX_CUBE + " (at most " + (1 << MAX_CUBE)
+        if (n < 1 || n > Limits.MAX_CUBE) {
+            throw new Mismatch("construction.cube must be between 1 and " + Limits.MAX_CUBE + " (at most " + (1 << Limits.MAX_CUBE)
                     + " vertices), found " + n);
         }
         long p = field(c.requireString("field"));
@@ -104,64 +135,85 @@ final class Provenance {
         }
         ToIntFunction<BitSet> rank = set -> ExactRank.rank(columns, set, p);
         BitSet h = labelSet(c.requireArray("hyperplane"), labels, "construction.hyperplane");
-        BitSet o = labelSet(new Json.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
-        if (rank.applyAsInt(h) != n) {
-            throw new Mismatch("the hyperplane has rank " + rank.applyAsInt(h) + ", not " + n);
-        }
-        for (int e = h.nextClearBit(0); e < labels.size(); e = h.nextClearBit(e + 1)) {
-            if (rank.applyAsInt(with(h, e)) == n) {
-                throw new Mismatch("the hyperplane is not a flat: its closure contains " + labels.get(e));
-            }
-        }
+        BitSet o = labelSet(new JsonTree.Arr(List.of(c.require("pulled"))), labels, "construction.pulled");
         if (h.intersects(o)) {
             throw new Mismatch("the pulled vertex lies on the hyperplane");
         }
-        generalPosition(rank, labels, n, h, o);
+        int[] basisOfH = elements(independentSubset(rank, h, n + 1));
+        if (basisOfH.length != n) {
+            throw new Mismatch("the hyperplane has rank " + basisOfH.length + ", not " + n);
+        }
+        long[] normal = ExactRank.cofactors(columns, basisOfH, p);
+        for (int e = h.nextClearBit(0); e < labels.size(); e = h.nextClearBit(e + 1)) {
+            if (ExactRank.dot(normal, columns[e], p) == 0) {
+                throw new Mismatch("the hyperplane is not a flat: its closure contains " + Escaping.printable(labels.get(e)));
+            }
+        }
+        generalPosition(columns, p, labels, n, h, o);
         BitSet ho = union(h, o);
-        // math-notes §3: subsets of H ∪ {O} of full rank n + 1 drop to rank n, other ranks are kept
+        // pulling O to H (docs/mathematics.md): subsets of H ∪ {O} of full rank n + 1 drop to rank n, other ranks are kept
         ToIntFunction<BitSet> pulled = set -> {
             int r = rank.applyAsInt(set);
             return r == n + 1 && union(set, ho).equals(ho) ? n : r;
         };
-        return new Source(labels, pulled, c.requireBoolean("contractPulled") ? o : new BitSet());
+        return new Source(labels, pulled, n + 1, c.requireBoolean("contractPulled") ? o : new BitSet());
     }
 
     /**
-     * (H, O) in general position (math-notes §3): for every hyperline L ⊆ H, the closure of L ∪ {O}
-     * is L ∪ {O}. Each L is the closure of n − 1 independent elements S of H, and lies in H as H is
-     * a flat. An e ∈ H − L has rank(S ∪ {O, e}) = n + 1, so only the e outside H ∪ {O} are tested:
-     * none may have rank(S ∪ {O, e}) = n. Cost: C(|H|, n − 1) subsets S, each with |H| + 2^n ranks.
+     * A maximal independent subset of {@code set}, chosen greedily in increasing order; the search
+     * stops once it has {@code maxRank} elements, as no larger independent set exists.
      */
-    private static void generalPosition(ToIntFunction<BitSet> rank, List<String> labels, int n, BitSet h, BitSet o)
+    private static BitSet independentSubset(ToIntFunction<BitSet> rank, BitSet set, int maxRank) {
+        BitSet basis = new BitSet();
+        for (int e = set.nextSetBit(0); e >= 0 && basis.cardinality() < maxRank; e = set.nextSetBit(e + 1)) {
+            if (rank.applyAsInt(with(basis, e)) > basis.cardinality()) {
+                basis.set(e);
+            }
+        }
+        return basis;
+    }
+
+    /**
+     * (H, O) in general position (docs/mathematics.md): for every hyperline L ⊆ H, the closure of
+     * L ∪ {O} is L ∪ {O}. Each L is the closure of n − 1 independent elements S of H, and lies in H
+     * as H is a flat. S ∪ {O} is independent exactly when S is (O lies outside the span of H), and
+     * then its cofactor vector c has c · v = 0 exactly for the vectors v in span(S ∪ {O}); on H
+     * these are the vectors of L (span(S ∪ {O}) ∩ span(H) = span(S)). So no vertex outside H ∪ {O}
+     * may have c · v = 0. Cost: C(|H|, n − 1) subsets S, each with n + 1 determinants and 2^n dot
+     * products, bounded by {@link Limits#MAX_VECTOR_TESTS}.
+     */
+    private static void generalPosition(long[][] columns, long p, List<String> labels, int n, BitSet h, BitSet o)
             throws Mismatch {
         int[] hs = elements(h);
-        if (binomial(hs.length, n - 1) > MAX_CANDIDATES) {
-            throw new Mismatch("the hyperplane has too many hyperline candidates to test general position");
+        long candidates = binomial(hs.length, n - 1);
+        if (candidates > Limits.MAX_VECTOR_TESTS / labels.size()) {
+            throw new Mismatch("the hyperplane has " + (candidates == Long.MAX_VALUE ? "too many" : candidates)
+                    + " hyperline candidates; testing general position would exceed the verifier's limit of "
+                    + Limits.MAX_VECTOR_TESTS + " vector tests");
         }
-        BitSet outside = union(h, o);
-        outside.flip(0, labels.size());
         Set<BitSet> seen = new HashSet<>();
         int[] pick = firstCombination(n - 1);
+        int[] withO = new int[n];
+        withO[n - 1] = o.nextSetBit(0);
         do {
-            BitSet s = new BitSet();
-            for (int i : pick) {
-                s.set(hs[i]);
+            for (int i = 0; i < n - 1; i++) {
+                withO[i] = hs[pick[i]];
             }
-            if (rank.applyAsInt(s) != n - 1) {
+            long[] normal = ExactRank.cofactors(columns, withO, p);
+            if (ExactRank.isZero(normal)) {
                 continue;
             }
             BitSet line = new BitSet();
             for (int e : hs) {
-                line.set(e, rank.applyAsInt(with(s, e)) == n - 1);
+                line.set(e, ExactRank.dot(normal, columns[e], p) == 0);
             }
             if (!seen.add(line)) {
                 continue;
             }
-            BitSet so = union(s, o);
-            for (int e = outside.nextSetBit(0); e >= 0; e = outside.nextSetBit(e + 1)) {
-                if (rank.applyAsInt(with(so, e)) == n) {
+            for (int e = 0; e < labels.size(); e++) {
+                if (!h.get(e) && !o.get(e) && ExactRank.dot(normal, columns[e], p) == 0) {
                     throw new Mismatch("(H, O) are not in general position: the closure of the hyperline "
-                            + labelsOf(line, labels) + " with O contains " + labels.get(e));
+                            + Escaping.printable(labelsOf(line, labels)) + " with O contains " + labels.get(e));
                 }
             }
         } while (nextCombination(pick, hs.length));
@@ -182,14 +234,14 @@ final class Provenance {
     }
 
     /** A given matroid read from a matroid file (docs/matroid-format.md), after checking its hash, size and rank. */
-    private static Source given(Json.Obj given, Path input) throws Mismatch, IOException {
+    private static Source given(JsonTree.Obj given, Path input) throws Mismatch, IOException {
         given.requireOnly(List.of("sha256", "elements", "rank"));
-        byte[] bytes = Files.readAllBytes(input);
+        byte[] bytes = CertificateVerifier.readRegularFile(input, Limits.MAX_CERTIFICATE_BYTES);
         if (!CertificateVerifier.sha256(bytes).equals(given.requireString("sha256"))) {
             throw new Mismatch("the SHA-256 of " + input.getFileName() + " is " + CertificateVerifier.sha256(bytes)
                     + ", not the recorded " + given.requireString("sha256"));
         }
-        Source m = GivenMatroid.read(Json.parseUtf8(bytes));
+        Source m = GivenMatroid.read(JsonTree.parse(bytes));
         BitSet all = new BitSet();
         all.set(0, m.labels().size());
         if (m.labels().size() != given.requireInt("elements") || m.rank().applyAsInt(all) != given.requireInt("rank")) {
@@ -201,50 +253,74 @@ final class Provenance {
 
     /** Reading a matroid file into a rank function, with our own code. */
     private static final class GivenMatroid {
-        static Source read(Json json) throws Mismatch {
-            Json.Obj m = json.asObject("the input matroid");
+        /**
+         * Reads a matroid file with the rules of docs/matroid-format.md: labels distinct and
+         * non-empty, {@code labels} and {@code elements} agreeing (with a matrix both may be
+         * omitted), exactly one of bases, nonbases and matrix, sets of r distinct elements in
+         * range, no set listed twice, and the bases satisfying the basis axioms.
+         */
+        static Source read(JsonTree.Value json) throws Mismatch {
+            JsonTree.Obj m = json.asObject("the input matroid");
             m.requireOnly(List.of("rank", "labels", "elements", "comment", "bases", "nonbases", "matrix"));
-            int n = m.has("labels") ? m.requireArray("labels").size() : m.requireInt("elements");
-            if (n < 0 || n > 64 || (m.has("labels") && m.has("elements") && m.requireInt("elements") != n)) {
-                throw new Mismatch("the input must have at most 64 elements, and labels and elements must agree");
+            int given = (m.has("bases") ? 1 : 0) + (m.has("nonbases") ? 1 : 0) + (m.has("matrix") ? 1 : 0);
+            if (given != 1) {
+                throw new Mismatch("the input must have exactly one of \"bases\", \"nonbases\", \"matrix\"");
+            }
+            int n = m.has("labels") ? m.requireArray("labels").size() : m.has("elements") ? m.requireInt("elements")
+                    : m.has("matrix") ? m.requireObject("matrix").requireArray("columns").size() : -1;
+            if (n < 0) {
+                throw new Mismatch("the input needs \"labels\" or \"elements\" to give its number of elements");
+            }
+            if (n > Limits.MAX_ELEMENTS || (m.has("labels") && m.has("elements") && m.requireInt("elements") != n)) {
+                throw new Mismatch("the input must have at most " + Limits.MAX_ELEMENTS + " elements, and labels and elements must agree");
             }
             List<String> labels = new ArrayList<>();
             for (int i = 0; i < n; i++) {
-                labels.add(m.has("labels") ? m.requireArray("labels").get(i).asString("labels[" + i + "]") : Integer.toString(i));
+                String label = m.has("labels") ? m.requireArray("labels").get(i).asString("labels[" + i + "]") : Integer.toString(i);
+                if (label.isEmpty() || labels.contains(label)) {
+                    throw new Mismatch("labels[" + i + "] is empty or repeats an earlier label");
+                }
+                labels.add(label);
             }
             int r = m.requireInt("rank");
             if (r < 0 || r > n) {
                 throw new Mismatch("the input's rank " + r + " is not between 0 and its " + n + " elements");
             }
             if (m.has("matrix")) {
-                return new Source(labels, matrixRank(m.requireObject("matrix"), n, r), new BitSet());
+                return new Source(labels, matrixRank(m.requireObject("matrix"), n, r), r, new BitSet());
+            }
+            String listed = m.has("bases") ? "bases" : "nonbases";
+            Set<Long> sets = new HashSet<>();
+            for (int[] b : ParsedCertificate.sets(m.requireArray(listed), listed, Limits.MAX_BASES)) {
+                if (!sets.add(mask(b, n, r))) {
+                    throw new Mismatch(listed + " lists " + java.util.Arrays.toString(b) + " twice");
+                }
+            }
+            if (listed.equals("nonbases") && binomial(n, r) > Limits.MAX_BASES) {
+                throw new Mismatch("the input has too many " + r + "-subsets to list its bases");
             }
             List<Long> bases = new ArrayList<>();
-            if (m.has("bases")) {
-                for (int[] b : Certificate.sets(m.requireArray("bases"), "bases", Certificate.MAX_BASES)) {
-                    bases.add(mask(b, n, r));
-                }
+            if (listed.equals("bases")) {
+                bases.addAll(sets);
             } else {
-                Set<Long> non = new HashSet<>();
-                for (int[] b : Certificate.sets(m.requireArray("nonbases"), "nonbases", Certificate.MAX_BASES)) {
-                    non.add(mask(b, n, r));
-                }
-                if (binomial(n, r) > Certificate.MAX_BASES) {
-                    throw new Mismatch("the input has too many " + r + "-subsets to list its bases");
-                }
                 int[] pick = firstCombination(r);
                 do {
                     long b = 0;
                     for (int e : pick) {
                         b |= 1L << e;
                     }
-                    if (!non.contains(b)) {
+                    if (!sets.contains(b)) {
                         bases.add(b);
                     }
                 } while (nextCombination(pick, n));
             }
-            // the rank of S in a matroid is the largest |S ∩ B| over its bases B ([Ox, §1.3])
+            bases.sort((a, b) -> a.equals(b) ? 0 : BasisTable.lexLess(a, b) ? -1 : 1);
             long[] masks = bases.stream().mapToLong(Long::longValue).toArray();
+            Optional<String> defect = new BasisTable(n, r, masks).exchangeDefect();
+            if (defect.isPresent()) {
+                throw new Mismatch("the input's bases do not form a matroid: " + defect.get());
+            }
+            // the rank of S in a matroid is the largest |S ∩ B| over its bases B ([Ox, §1.3])
             return new Source(labels, set -> {
                 long s = set.isEmpty() ? 0 : set.toLongArray()[0]; // at most 64 elements
                 int best = 0;
@@ -252,19 +328,19 @@ final class Provenance {
                     best = Math.max(best, Long.bitCount(s & b));
                 }
                 return best;
-            }, new BitSet());
+            }, r, new BitSet());
         }
 
-        private static ToIntFunction<BitSet> matrixRank(Json.Obj matrix, int n, int r) throws Mismatch {
+        private static ToIntFunction<BitSet> matrixRank(JsonTree.Obj matrix, int n, int r) throws Mismatch {
             matrix.requireOnly(List.of("field", "columns"));
             long p = field(matrix.requireString("field"));
-            Json.Arr cols = matrix.requireArray("columns");
+            JsonTree.Arr cols = matrix.requireArray("columns");
             if (cols.size() != n && n != 0) {
                 throw new Mismatch("the input matrix has " + cols.size() + " columns for " + n + " elements");
             }
             long[][] columns = new long[cols.size()][];
             for (int j = 0; j < columns.length; j++) {
-                Json.Arr col = cols.get(j).asArray("columns[" + j + "]");
+                JsonTree.Arr col = cols.get(j).asArray("columns[" + j + "]");
                 columns[j] = new long[col.size()];
                 for (int i = 0; i < col.size(); i++) {
                     columns[j][i] = col.get(i).asLong("columns[" + j + "][" + i + "]");
@@ -314,19 +390,14 @@ final class Provenance {
         if (!keptLabels.equals(coreLabels)) {
             throw new Mismatch("the rebuilt minor has the elements " + keptLabels + ", the core " + coreLabels);
         }
-        BitSet basisOfC = new BitSet();
-        for (int e = contracted.nextSetBit(0); e >= 0; e = contracted.nextSetBit(e + 1)) {
-            if (m.rank().applyAsInt(with(basisOfC, e)) > basisOfC.cardinality()) {
-                basisOfC.set(e);
-            }
-        }
+        BitSet basisOfC = independentSubset(m.rank(), contracted, m.fullRank());
         int rc = basisOfC.cardinality();
         int r = m.rank().applyAsInt(union(ground, basisOfC)) - rc;
         if (r != core.rank) {
             throw new Mismatch("the rebuilt minor has rank " + r + ", the core " + core.rank);
         }
-        if (binomial(kept.length, r) > MAX_CANDIDATES) {
-            throw new Mismatch("the minor has more than " + MAX_CANDIDATES + " candidate bases to rebuild");
+        if (binomial(kept.length, r) > Limits.MAX_CANDIDATES) {
+            throw new Mismatch("the minor has more than " + Limits.MAX_CANDIDATES + " candidate bases to rebuild");
         }
         int next = 0;
         int[] pick = firstCombination(r);
@@ -351,12 +422,17 @@ final class Provenance {
     }
 
     /** The set of the listed labels, which must be distinct labels of the matroid. */
-    private static BitSet labelSet(Json.Arr array, List<String> labels, String what) throws Mismatch {
+    private static BitSet labelSet(JsonTree.Arr array, List<String> labels, String what) throws Mismatch {
+        Map<String, Integer> index = new HashMap<>();
+        for (int e = 0; e < labels.size(); e++) {
+            index.put(labels.get(e), e);
+        }
         BitSet set = new BitSet();
         for (int i = 0; i < array.size(); i++) {
-            int e = labels.indexOf(array.get(i).asString(what + "[" + i + "]"));
-            if (e < 0 || set.get(e)) {
-                throw new Mismatch(what + " lists \"" + array.get(i).asString(what) + "\", which is no label of the matroid or repeated");
+            Integer e = index.get(array.get(i).asString(what + "[" + i + "]"));
+            if (e == null || set.get(e)) {
+                throw new Mismatch(what + " lists \"" + Escaping.printable(array.get(i).asString(what))
+                        + "\", which is no label of the matroid or repeated");
             }
             set.set(e);
         }

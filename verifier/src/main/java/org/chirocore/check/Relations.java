@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * 3-term Grassmann–Plücker relations ([BLSWZ, §3.5–3.6]; math-notes §2) on a basis table: their
+ * 3-term Grassmann–Plücker relations ([BLSWZ, §3.5–3.6]; docs/mathematics.md §2–3) on a basis table: their
  * terms, their clauses under the certificate encoding, and their evaluation on a sign vector.
  */
 final class Relations {
@@ -119,6 +119,29 @@ final class Relations {
             }
         }
         return Optional.empty();
+    }
+
+    /**
+     * An upper bound on the relations {@link #violated} evaluates for the two minors core\e and
+     * core/e: per minor, bases · C(rank, 2) · C(size − rank, 2).
+     */
+    static long evaluations(BasisTable core, int e) {
+        long containing = 0;
+        for (int k = 0; k < core.count(); k++) {
+            containing += (core.basis(k) >>> e) & 1;
+        }
+        boolean loop = containing == 0;
+        boolean coloop = containing == core.count();
+        long deletionBases = coloop ? core.count() : core.count() - containing;
+        int deletionRank = coloop ? core.rank - 1 : core.rank;
+        long contractionBases = loop ? core.count() : containing;
+        int contractionRank = loop ? core.rank : core.rank - 1;
+        return deletionBases * pairs(deletionRank) * pairs(core.size - 1 - deletionRank)
+                + contractionBases * pairs(contractionRank) * pairs(core.size - 1 - contractionRank);
+    }
+
+    private static long pairs(int k) {
+        return k < 2 ? 1 : (long) k * (k - 1) / 2;
     }
 
     private static Optional<String> violatedWith(BasisTable t, int[] signs, long x, long pq, long basis) {

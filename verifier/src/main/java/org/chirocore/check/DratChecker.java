@@ -1,12 +1,12 @@
 package org.chirocore.check;
 
-import java.util.ArrayDeque;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
+import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 
 import org.chirocore.check.ProofLines.Line;
 import org.chirocore.check.ProofLines.ProofError;
@@ -17,15 +17,15 @@ import org.chirocore.check.ProofLines.ProofError;
  * first literal p (every resolvent with a clause containing −p is RUP); the proof must add the
  * empty clause. Unit propagation uses two watched literals per clause and a trail that is undone
  * after each check, so a lemma costs the propagation it triggers, not a rescan of the formula; a
- * RAT check also scans the clause list once.
+ * RAT check visits the clauses containing −p through per-literal occurrence lists. The proof is
+ * read as a stream of lines; memory and work are bounded by {@link Limits#MAX_PROOF_LITERALS} and
+ * {@link Limits#MAX_PROPAGATION_STEPS}, and a proof beyond them is rejected.
  *
  * <p>Deletions ("d …") are applied, except the deletion of a clause that is currently the reason of
  * a top-level assignment, which is ignored (as drat-trim does), and of a clause not present, which
  * is ignored too; ignoring a deletion only keeps more clauses and is therefore sound. Lines after the
  * empty clause are not read. Lemmas may only use the CNF's variables; tautologies are rejected.
- *
- * <p>The same run can record, per lemma, the clause ids unit propagation used, which is an LRAT
- * proof ({@link #toLrat}).
+
  */
 public final class DratChecker {
     /** The outcome: {@code failure} is empty when the proof is valid; {@code summary} counts what was done. */
@@ -35,8 +35,12 @@ public final class DratChecker {
     private final int variables;
     /** Clause by id (1-based; index 0 unused); null once deleted. Watched literals sit at positions 0 and 1. */
     private final List<int[]> clauses = new ArrayList<>();
-    private final Map<List<Integer>, ArrayDeque<Integer>> idsByContent = new HashMap<>();
     private final IntList[] watches;
+    /** Per literal code: the ids of the clauses containing it, deleted ones dropped lazily. */
+    private final IntList[] occurrences;
+    private final byte[] scratch;
+    private long literals;
+    private long steps;
     /** Per variable: +1 true, −1 false, 0 unassigned. */
     private final byte[] value;
     /** Per variable: the id of the clause that implied it, 0 for an assumption. */
@@ -46,22 +50,19 @@ public final class DratChecker {
     private int propagated;
     /** A clause falsified at top level, once the formula is refuted by unit propagation alone; else 0. */
     private int topConflict;
-    private final int[] markStamp;
-    private int stamp;
-    private final StringBuilder lrat;
     private int lemmas;
     private int deleted;
     private int ignored;
 
-    private DratChecker(Cnf cnf, boolean writeLrat) {
+    private DratChecker(Cnf cnf) {
         variables = cnf.variables();
         // allocated on first use: most literals of a large formula are never watched
         watches = new IntList[2 * variables + 2];
+        occurrences = new IntList[2 * variables + 2];
+        scratch = new byte[variables + 1];
         value = new byte[variables + 1];
         reason = new int[variables + 1];
         trail = new int[variables + 1];
-        markStamp = new int[variables + 1];
-        lrat = writeLrat ? new StringBuilder() : null;
         clauses.add(null);
         for (int[] clause : cnf.clauses()) {
             add(clause);
@@ -69,11 +70,21 @@ public final class DratChecker {
     }
 
     /**
-     * Checks {@code drat} against {@code cnf}. Cost: the unit propagation of all lemmas, plus one
-     * scan of the clauses per RAT lemma. Never throws on bad proof text; the failure names the line.
+     * Checks {@code drat} against {@code cnf}. Cost: the unit propagation of all lemmas, plus for a
+     * RAT lemma the propagation of its resolvents. Never throws on bad proof text; the failure names
+     * the line.
      */
     public static Outcome check(Cnf cnf, String drat) {
-        DratChecker checker = new DratChecker(cnf, false);
+        try {
+            return check(cnf, new StringReader(drat));
+        } catch (IOException e) {
+            throw new UncheckedIOException("A string reader does not fail.", e);
+        }
+    }
+
+    /** As {@link #check(Cnf, String)}, reading the proof as a stream up to its empty clause. */
+    static Outcome check(Cnf cnf, Reader drat) throws IOException {
+        DratChecker checker = new DratChecker(cnf);
         try {
             checker.run(drat);
             return new Outcome(true, "", checker.summary());
@@ -82,103 +93,106 @@ public final class DratChecker {
         }
     }
 
-    /**
-     * The LRAT proof (Cruz-Filipe et al., CADE 2017) of a valid DRAT proof: lines {@code id lits 0 hints 0}
-     * (a RAT lemma lists, per clause D containing −p, {@code −id(D)} and the hints for its resolvent)
-     * and {@code id d ids 0}; CNF clause i has id i.
-     *
-     * @throws IllegalArgumentException with the DRAT failure when the proof is not valid
-     */
-    public static String toLrat(Cnf cnf, String drat) {
-        DratChecker checker = new DratChecker(cnf, true);
-        try {
-            checker.run(drat);
-        } catch (ProofError e) {
-            throw new IllegalArgumentException("The DRAT proof is not valid: " + e.getMessage(), e);
-        }
-        return checker.lrat.toString();
-    }
-
     private String summary() {
         return lemmas + " lemmas, " + deleted + " deletions applied, " + ignored + " ignored";
     }
 
-    private void run(String drat) throws ProofError {
-        List<Line> lines = ProofLines.parse(drat, 0);
-        for (Line line : lines) {
+    private void run(Reader drat) throws ProofError, IOException {
+        ProofLines lines = new ProofLines(drat, 0);
+        for (Line line = lines.next(); line != null; line = lines.next()) {
             int[] lits = ProofLines.literals(line, 0, variables);
             if (lits.length != line.numbers().length - 1) {
                 throw new ProofError(line.number(), "text after the closing 0");
             }
+            if (steps > Limits.MAX_PROPAGATION_STEPS) {
+                throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
+                        + " propagation steps, the verifier's limit; not checked further");
+            }
             if (line.deletion()) {
-                delete(lits);
+                delete(ProofLines.distinct(line, lits, scratch));
             } else {
-                lemma(line, ProofLines.distinct(line, lits));
+                literals += lits.length;
+                if (literals > Limits.MAX_PROOF_LITERALS) {
+                    throw new ProofError(line.number(), "the lemmas hold more than " + Limits.MAX_PROOF_LITERALS
+                            + " literals, the verifier's limit; not checked further");
+                }
+                lemma(line, ProofLines.distinct(line, lits, scratch));
                 if (lits.length == 0) {
                     return;
                 }
             }
         }
-        throw new ProofError(lines.isEmpty() ? 1 : lines.get(lines.size() - 1).number(), "the proof ends without deriving the empty clause");
+        throw new ProofError(lines.lastLine(), "the proof ends without deriving the empty clause");
     }
 
     private void lemma(Line line, int[] lits) throws ProofError {
-        StringBuilder hints = new StringBuilder();
         int mark = trailSize;
-        int conflict = assumeNegation(lits);
-        if (conflict != 0) {
-            appendHints(hints, conflict);
-            undo(mark);
-        } else {
-            undo(mark);
-            if (lits.length == 0) {
-                throw new ProofError(line.number(), "the empty clause is not RUP: unit propagation finds no conflict");
-            }
-            checkRat(line, lits, hints);
+        boolean rup = assumeNegation(lits) != 0;
+        undo(mark);
+        if (!rup && lits.length == 0) {
+            throw new ProofError(line.number(), "the empty clause is not RUP: unit propagation finds no conflict");
+        }
+        if (!rup) {
+            checkRat(line, lits);
         }
         lemmas++;
-        int id = add(lits);
-        if (lrat != null) {
-            lrat.append(id).append(' ');
-            for (int lit : lits) {
-                lrat.append(lit).append(' ');
-            }
-            lrat.append("0").append(hints).append(" 0\n");
-        }
+        add(lits);
     }
 
-    private void checkRat(Line line, int[] lits, StringBuilder hints) throws ProofError {
+    private void checkRat(Line line, int[] lits) throws ProofError {
         int pivot = lits[0];
-        for (int id = 1; id < clauses.size(); id++) {
+        IntList candidates = occurrences[code(-pivot)];
+        int kept = 0;
+        for (int i = 0; candidates != null && i < candidates.size; i++) {
+            int id = candidates.data[i];
             int[] d = clauses.get(id);
-            if (d == null || !ProofLines.contains(d, -pivot)) {
-                continue;
+            if (d == null) {
+                continue; // deleted: dropped from the occurrence list
             }
-            List<Integer> resolvent = new ArrayList<>();
-            for (int lit : lits) {
-                resolvent.add(lit);
-            }
-            boolean tautology = false;
-            for (int lit : d) {
-                tautology |= resolvent.contains(-lit) && lit != -pivot;
-                if (lit != -pivot && !resolvent.contains(lit)) {
-                    resolvent.add(lit);
-                }
-            }
-            if (tautology) {
+            candidates.data[kept++] = id;
+            steps += d.length;
+            int[] resolvent = resolvent(lits, d, -pivot);
+            if (resolvent == null) {
                 continue;
             }
             int mark = trailSize;
-            int conflict = assumeNegation(resolvent.stream().mapToInt(Integer::intValue).toArray());
+            int conflict = assumeNegation(resolvent);
             if (conflict == 0) {
                 undo(mark);
                 throw new ProofError(line.number(), "lemma " + clauseText(lits) + " is neither RUP nor RAT on " + pivot
                         + " (the resolvent with clause " + id + ", " + clauseText(d) + ", is not RUP)");
             }
-            hints.append(" -").append(id);
-            appendHints(hints, conflict);
             undo(mark);
         }
+        if (candidates != null) {
+            candidates.size = kept;
+        }
+    }
+
+    /** The resolvent of {@code lits} and {@code d} on {@code -pivot ∈ d}, or null when it is a tautology. */
+    private int[] resolvent(int[] lits, int[] d, int negatedPivot) {
+        int[] out = Arrays.copyOf(lits, lits.length + d.length);
+        int size = lits.length;
+        for (int lit : lits) {
+            scratch[Math.abs(lit)] = (byte) (lit > 0 ? 1 : -1);
+        }
+        boolean tautology = false;
+        for (int lit : d) {
+            byte sign = (byte) (lit > 0 ? 1 : -1);
+            if (lit == negatedPivot) {
+                continue;
+            }
+            if (scratch[Math.abs(lit)] == -sign) {
+                tautology = true;
+            } else if (scratch[Math.abs(lit)] == 0) {
+                scratch[Math.abs(lit)] = sign;
+                out[size++] = lit;
+            }
+        }
+        for (int i = 0; i < size; i++) {
+            scratch[Math.abs(out[i])] = 0;
+        }
+        return tautology ? null : Arrays.copyOf(out, size);
     }
 
     private static String clauseText(int[] lits) {
@@ -190,33 +204,62 @@ public final class DratChecker {
     }
 
     private void delete(int[] lits) {
-        ArrayDeque<Integer> ids = idsByContent.get(key(lits));
-        if (ids == null || ids.isEmpty()) {
+        int id = lits.length == 0 ? 0 : latestCopy(lits);
+        if (id == 0) {
             ignored++;
             return;
         }
-        int id = ids.peekLast();
         int[] c = clauses.get(id);
         boolean isReason = c.length > 0 && value(c[0]) > 0 && reason[Math.abs(c[0])] == id;
-        if (isReason) {
+        if (isReason || id == topConflict) {
             ignored++;
             return;
         }
-        ids.removeLast();
         clauses.set(id, null);
         deleted++;
-        if (lrat != null) {
-            lrat.append(clauses.size() - 1).append(" d ").append(id).append(" 0\n");
-        }
     }
 
-    private static List<Integer> key(int[] lits) {
-        List<Integer> k = new ArrayList<>();
+    /**
+     * The id of the most recently added live clause with the same literals as {@code lits}, or 0;
+     * searched in the shortest occurrence list among its literals.
+     */
+    private int latestCopy(int[] lits) {
+        IntList shortest = null;
         for (int lit : lits) {
-            k.add(lit);
+            IntList list = occurrences[code(lit)];
+            if (list == null) {
+                return 0;
+            }
+            shortest = shortest == null || list.size < shortest.size ? list : shortest;
         }
-        Collections.sort(k);
-        return k;
+        for (int lit : lits) {
+            scratch[Math.abs(lit)] = (byte) (lit > 0 ? 1 : -1);
+        }
+        int found = 0;
+        for (int i = shortest.size - 1; i >= 0 && found == 0; i--) {
+            int[] c = clauses.get(shortest.data[i]);
+            steps += lits.length;
+            if (c != null && sameLiterals(c, lits.length)) {
+                found = shortest.data[i];
+            }
+        }
+        for (int lit : lits) {
+            scratch[Math.abs(lit)] = 0;
+        }
+        return found;
+    }
+
+    /** Whether clause {@code c} has {@code size} distinct literals, all marked in {@code scratch}. */
+    private boolean sameLiterals(int[] c, int size) {
+        if (c.length != size) {
+            return false;
+        }
+        for (int lit : c) {
+            if (scratch[Math.abs(lit)] != (lit > 0 ? 1 : -1)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Adds a clause at top level, watches it and propagates; returns its id. */
@@ -224,7 +267,12 @@ public final class DratChecker {
         int[] c = lits.clone();
         int id = clauses.size();
         clauses.add(c);
-        idsByContent.computeIfAbsent(key(c), k -> new ArrayDeque<>()).addLast(id);
+        for (int lit : c) {
+            if (occurrences[code(lit)] == null) {
+                occurrences[code(lit)] = new IntList();
+            }
+            occurrences[code(lit)].add(id);
+        }
         if (topConflict != 0 || c.length == 0) {
             return id;
         }
@@ -276,6 +324,7 @@ public final class DratChecker {
                 continue;
             }
             int kept = 0;
+            steps += ws.size;
             for (int i = 0; i < ws.size; i++) {
                 int id = ws.data[i];
                 int[] c = clauses.get(id);
@@ -315,37 +364,6 @@ public final class DratChecker {
             }
         }
         return -1;
-    }
-
-    /**
-     * Appends the ids of the clauses that unit propagation used to reach {@code conflict}, in trail
-     * order (each becomes unit after the previous ones), then {@code conflict} itself. Cost O(trail).
-     */
-    private void appendHints(StringBuilder out, int conflict) {
-        if (lrat == null) {
-            return;
-        }
-        stamp++;
-        markVariables(clauses.get(conflict));
-        List<Integer> used = new ArrayList<>();
-        for (int i = trailSize - 1; i >= 0; i--) {
-            int v = Math.abs(trail[i]);
-            if (markStamp[v] == stamp && reason[v] != 0 && reason[v] != conflict) {
-                used.add(reason[v]);
-                markVariables(clauses.get(reason[v]));
-            }
-        }
-        Collections.reverse(used);
-        used.add(conflict);
-        for (int id : used) {
-            out.append(' ').append(id);
-        }
-    }
-
-    private void markVariables(int[] clause) {
-        for (int lit : clause) {
-            markStamp[Math.abs(lit)] = stamp;
-        }
     }
 
     private int value(int lit) {

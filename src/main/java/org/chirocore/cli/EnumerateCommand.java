@@ -1,0 +1,247 @@
+package org.chirocore.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.concurrent.Callable;
+
+import org.chirocore.cert.CertificateWriter;
+import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.Source;
+import org.chirocore.io.Json;
+import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.pipeline.Subject;
+import org.chirocore.search.CoreConstraints;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.SteeredSearch;
+import org.chirocore.search.Strategy;
+import org.chirocore.search.marco.CoreEnumeration;
+import org.chirocore.search.marco.Symmetry;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code chirocore enumerate}: every minor-minimal non-orientable minor of a matroid file or a
+ * cube construction (of one rank, or of every rank from rank(M) down to 3), grouped into
+ * isomorphism classes with counts, contraction sets taken up to a symmetry group; one verified
+ * certificate per class, {@code summary.json} and {@code summary.md} in the output directory.
+ */
+@Command(name = "enumerate", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = {"List every minor-minimal non-orientable minor, up to isomorphism, with how many minors of the "
+                + "input fall in each class and a verified certificate per class.",
+                "The matroid is FILE, or the n-cube of --cube with the vertex of --pull pulled to --hyperplane."},
+        exitCodeListHeading = "%nExit codes:%n",
+        exitCodeList = {"0:the enumeration is complete", "2:bad usage or bad input",
+                "3:incomplete: a budget ran out (the classes found are still listed and certified)"})
+final class EnumerateCommand implements Callable<Integer> {
+    /** The summary's file names in the output directory. */
+    static final String SUMMARY_JSON = "summary.json";
+    static final String SUMMARY_MD = "summary.md";
+
+    @Spec
+    private CommandSpec spec;
+
+    @Parameters(paramLabel = "FILE", arity = "0..1", description = "A matroid file (instead of --cube).")
+    private Path file;
+
+    @Option(names = "--cube", paramLabel = "N", description = "Start from the affine N-cube (instead of FILE).")
+    private Integer cube;
+
+    @Mixin
+    private ConstructionOptions construction;
+
+    @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
+            description = "Contract the pulled vertex first (default: yes).")
+    private boolean contractPulled;
+
+    @Option(names = "--rank", paramLabel = "R", description = "Only cores of rank R (default: every rank from "
+            + "rank(M) down to 3).")
+    private Integer rank;
+
+    @Option(names = "--symmetry", paramLabel = "GROUP", defaultValue = "auto",
+            description = "auto (default): for --cube the cube symmetries fixing H and O, for FILE its automorphisms; "
+                    + "none: no symmetry.")
+    private String symmetry;
+
+    @Mixin
+    private SeedOption seed;
+
+    @Mixin
+    private BudgetOptions budget;
+
+    @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output directory.")
+    private Path out;
+
+    @Mixin
+    private OutputOptions output;
+
+    @Override
+    public Integer call() {
+        if (!symmetry.equals("auto") && !symmetry.equals("none")) {
+            throw new ParameterException(spec.commandLine(), "--symmetry is auto or none, not \"" + symmetry + "\".");
+        }
+        output.checkDirectory(out, Arrays.asList(file), List.of(SUMMARY_JSON, SUMMARY_MD));
+        Subject input = input();
+        if (!SteeredSearch.explorable(input.matroid())) {
+            throw new BadInputException("the matroid (rank " + input.matroid().rank() + " on " + input.matroid().size()
+                    + " elements) is too large to enumerate: at most 64 elements and " + SteeredSearch.EXPLORED_SUBSETS
+                    + " r-subsets", null);
+        }
+        ExplicitMatroid m = ExplicitMatroid.of(input.matroid());
+        CoreConstraints constraints = new CoreConstraints(rank == null ? OptionalInt.empty() : OptionalInt.of(rank),
+                List.of(), List.of());
+        try {
+            constraints.validate(m);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage());
+        }
+        Symmetry group = group(input, m);
+        try {
+            Files.createDirectories(out);
+        } catch (IOException e) {
+            throw new BadInputException(out + ": cannot create the output directory: " + e, e);
+        }
+        SearchSettings settings = new SearchSettings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget());
+        ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
+        CoreEnumeration.Result result = new CoreEnumeration(settings, constraints, group, progress).enumerate(m);
+        progress.finish();
+        List<Optional<CertificateWriter.Written>> certificates = new ArrayList<>();
+        for (int k = 0; k < result.classes().size(); k++) {
+            certificates.add(certify(result.classes().get(k), input.source(), k + 1));
+        }
+        Inputs.write(out.resolve(SUMMARY_JSON), summaryJson(input, m, group, result, certificates));
+        String markdown = summaryMarkdown(m, group, result, certificates);
+        Inputs.writeText(out.resolve(SUMMARY_MD), markdown);
+        PrintWriter w = spec.commandLine().getOut();
+        w.print(markdown);
+        w.println("wrote " + out.resolve(SUMMARY_JSON) + ", " + out.resolve(SUMMARY_MD) + " and "
+                + certificates.stream().filter(Optional::isPresent).count() + " verified certificates");
+        return result.complete() ? ExitCodes.OK : ExitCodes.UNKNOWN;
+    }
+
+    /** The input chosen by exactly one of FILE and --cube. */
+    private Subject input() {
+        return Inputs.choose(spec, file, cube, construction, contractPulled);
+    }
+
+    private Symmetry group(Subject input, ExplicitMatroid m) {
+        if (symmetry.equals("none")) {
+            return Symmetry.none(m.size());
+        }
+        if (input.source() instanceof Source.Constructed c) {
+            return c.construction() instanceof CubeConstruction cube ? Symmetry.ofCube(cube, m) : Symmetry.none(m.size());
+        }
+        try {
+            return Symmetry.automorphisms(m);
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException(file + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** The class's certificate, written and verified, or empty when its refutation ran out of budget. */
+    private Optional<CertificateWriter.Written> certify(CoreEnumeration.CoreClass c, Source source, int k) {
+        try {
+            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(c.example(), source),
+                    budget.budget(), out.resolve(certificateName(k)));
+            return outcome instanceof CertifiedReduction.Verified v ? Optional.of(v.written()) : Optional.empty();
+        } catch (IOException e) {
+            throw new BadInputException(out.resolve(certificateName(k)) + ": cannot write the certificate: " + e, e);
+        }
+    }
+
+    static String certificateName(int k) {
+        return "class-" + k + ".cert.json";
+    }
+
+    private static Json summaryJson(Subject input, ExplicitMatroid m, Symmetry group,
+            CoreEnumeration.Result r, List<Optional<CertificateWriter.Written>> certificates) {
+        List<Json> classes = new ArrayList<>();
+        for (int k = 0; k < r.classes().size(); k++) {
+            CoreEnumeration.CoreClass c = r.classes().get(k);
+            ExplicitMatroid core = c.example().core();
+            Optional<CertificateWriter.Written> written = certificates.get(k);
+            classes.add(Json.Obj.builder()
+                    .put("class", k + 1)
+                    .put("elements", core.size())
+                    .put("rank", core.rank())
+                    .put("bases", core.basisCount())
+                    .put("count", c.count())
+                    .put("example", Json.Obj.builder()
+                            .put("labels", Json.Arr.ofStrings(core.labels()))
+                            .put("contracted", Json.Arr.ofStrings(c.example().contracted()))
+                            .build())
+                    .put("certificate", written.isPresent() ? new Json.Str(certificateName(k + 1)) : Json.NULL)
+                    .put("sha256", written.<Json>map(x -> new Json.Str(x.sha256())).orElse(Json.NULL))
+                    .put("foundAtMillis", c.foundAtMillis())
+                    .put("solverCallsAtDiscovery", c.solverCallsAtDiscovery())
+                    .build());
+        }
+        Json.Obj.Builder source = Json.Obj.builder();
+        if (input.source() instanceof Source.Constructed c) {
+            source.put("construction", CertificateWriter.construction(c.construction()));
+        } else if (input.source() instanceof Source.Given g) {
+            source.put("sha256", g.sha256());
+        }
+        return Json.Obj.builder()
+                .put("format", "chirocore-enumeration")
+                .put("version", 1)
+                .put("input", source.put("elements", m.size()).put("rank", m.rank()).build())
+                .put("ranks", new Json.Arr(r.ranks().stream().<Json>map(Json.Num::of).toList()))
+                .put("symmetry", Json.Obj.builder().put("kind", group.kind()).put("order", group.order()).build())
+                .put("complete", r.complete())
+                .put("incomplete", r.incomplete().<Json>map(Json.Str::new).orElse(Json.NULL))
+                .put("contractionSets", Json.Obj.builder().put("representatives", r.representatives())
+                        .put("all", r.contractionSets()).build())
+                .put("minimalNonOrientableRestrictions", r.restrictions())
+                .put("withNonOrientableContraction", r.deadEnds())
+                .put("solverCalls", r.solverCalls())
+                .put("millis", r.millis())
+                .put("classes", new Json.Arr(classes))
+                .build();
+    }
+
+    private static String summaryMarkdown(ExplicitMatroid m, Symmetry group, CoreEnumeration.Result r,
+            List<Optional<CertificateWriter.Written>> certificates) {
+        StringBuilder b = new StringBuilder();
+        b.append("# Minor-minimal non-orientable minors\n\n");
+        b.append("Input: ").append(Format.shape(m.rank(), m.size())).append("; ranks ")
+                .append(r.ranks()).append("; symmetry ").append(group.kind()).append(" (order ")
+                .append(group.order()).append(").\n\n");
+        b.append(r.complete() ? "The enumeration is **complete**: " : "The enumeration is **incomplete** ("
+                + r.incomplete().orElseThrow() + "): ");
+        b.append(r.representatives()).append(" contraction sets up to symmetry (")
+                .append(r.contractionSets()).append(" in all), ").append(r.restrictions())
+                .append(" minimal non-orientable restrictions, ").append(r.deadEnds())
+                .append(" of them with a non-orientable single-element contraction; ").append(r.solverCalls())
+                .append(" solver calls, ").append(r.millis()).append(" ms.\n\n");
+        b.append("| class | elements | rank | bases | count | found at (ms) | solver calls then | certificate "
+                + "| example (contracted; labels) |\n");
+        b.append("|---".repeat(9)).append("|\n");
+        for (int k = 0; k < r.classes().size(); k++) {
+            CoreEnumeration.CoreClass c = r.classes().get(k);
+            ExplicitMatroid core = c.example().core();
+            b.append("| ").append(k + 1).append(" | ").append(core.size()).append(" | ").append(core.rank())
+                    .append(" | ").append(core.basisCount()).append(" | ").append(c.count()).append(" | ")
+                    .append(c.foundAtMillis()).append(" | ").append(c.solverCallsAtDiscovery()).append(" | ")
+                    .append(certificates.get(k).isPresent() ? "`" + certificateName(k + 1) + "` verified"
+                            : "none (refutation out of budget)")
+                    .append(" | ").append(Format.labels(c.example().contracted())).append("; ")
+                    .append(String.join(" ", core.labels())).append(" |\n");
+        }
+        return b.toString();
+    }
+}

@@ -1,0 +1,160 @@
+package org.chirocore.orient;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.chirocore.matroid.ElementSets;
+
+import org.sat4j.core.VecInt;
+import org.sat4j.minisat.SolverFactory;
+import org.sat4j.specs.ContradictionException;
+import org.sat4j.specs.ISolver;
+import org.sat4j.specs.TimeoutException;
+
+/**
+ * The map of a MARCO-style enumeration: the subsets of a ground set of at most 64 elements that
+ * are still unexplored, kept as a CNF over one variable per element (true = the element is in
+ * the subset). Exploring a set T whose subsets are all known (T orientable) adds the clause "some
+ * element outside T"; exploring a set U whose supersets are all known (U non-orientable) adds
+ * "some element of U is missing". A seed is any model, extended greedily to a maximal one (adding
+ * an element can only violate clauses of the second kind, which are checked directly).
+ *
+ * <p>Each call of {@link #next} is one sat4j call bounded by the conflicts and time of a
+ * {@link Budget}; the map's formula has no auxiliary variables, so its size is the number of
+ * explored sets.
+ */
+public final class UnexploredSubsets {
+    /** The result of {@link #next}. */
+    public sealed interface Next {
+    }
+
+    /** An unexplored set, maximal among the unexplored ones, as a mask. */
+    public record Seed(long set) implements Next {
+    }
+
+    /** Every subset allowed by the map has been explored. */
+    public record Exhausted() implements Next {
+    }
+
+    /** The map's solver ran out of budget; nothing is claimed. */
+    public record OutOfBudget(String reason) implements Next {
+    }
+
+    private final int size;
+    private final long allowed;
+    private final ISolver solver;
+    private final List<Long> supersetsBlocked = new ArrayList<>();
+    private boolean contradiction;
+    private int calls;
+
+    /**
+     * A map of the subsets T of {0, …, size − 1} with {@code required} ⊆ T ⊆ {@code allowed}.
+     *
+     * @throws IllegalArgumentException when size is outside 0..64 or required is not inside allowed
+     */
+    public UnexploredSubsets(int size, long allowed, long required) {
+        if (size < 0 || size > 64) {
+            throw new IllegalArgumentException("A subset map holds 0 to 64 elements, not " + size + ".");
+        }
+        if ((required & ~allowed) != 0) {
+            throw new IllegalArgumentException("The required elements " + Long.toBinaryString(required)
+                    + " are not all allowed (" + Long.toBinaryString(allowed) + ").");
+        }
+        this.size = size;
+        this.allowed = allowed & ElementSets.allMask(size);
+        this.solver = SolverFactory.newDefault();
+        solver.newVar(Math.max(size, 1));
+        for (int e = 0; e < size; e++) {
+            if ((this.allowed & (1L << e)) == 0) {
+                add(new int[] {-(e + 1)});
+            } else if ((required & (1L << e)) != 0) {
+                add(new int[] {e + 1});
+            }
+        }
+    }
+
+    private void add(int[] clause) {
+        if (contradiction) {
+            return;
+        }
+        if (clause.length == 0) {
+            contradiction = true;
+            return;
+        }
+        try {
+            solver.addClause(new VecInt(clause));
+        } catch (ContradictionException e) {
+            contradiction = true;
+        }
+    }
+
+    /** Marks every subset of {@code set} explored. */
+    public void blockSubsets(long set) {
+        add(literals(allowed & ~set, 1));
+    }
+
+    /** Marks every superset of {@code set} explored. */
+    public void blockSupersets(long set) {
+        supersetsBlocked.add(set);
+        add(literals(set, -1));
+    }
+
+    private static int[] literals(long set, int sign) {
+        int[] elements = ElementSets.elements(set);
+        int[] clause = new int[elements.length];
+        for (int i = 0; i < elements.length; i++) {
+            clause[i] = sign * (elements[i] + 1);
+        }
+        return clause;
+    }
+
+    /**
+     * An unexplored set that no other unexplored set contains: a model of the map, extended by
+     * the elements of {@code order} (element indices) in that order while it stays unexplored.
+     */
+    public Next next(Budget budget, int[] order) {
+        if (contradiction) {
+            return new Exhausted();
+        }
+        if (budget.conflictsPerCall() > 0) {
+            solver.setTimeoutOnConflicts(budget.conflictsPerCall());
+        } else if (budget.millis() > 0) {
+            solver.setTimeoutMs(budget.millis());
+        }
+        calls++;
+        try {
+            if (!solver.isSatisfiable()) {
+                return new Exhausted();
+            }
+        } catch (TimeoutException e) {
+            return new OutOfBudget("the map of unexplored sets could not be solved within the budget");
+        }
+        long set = 0;
+        for (int e = 0; e < size; e++) {
+            if (solver.model(e + 1)) {
+                set |= 1L << e;
+            }
+        }
+        for (int e : order) {
+            long bigger = set | (1L << e);
+            if ((allowed & (1L << e)) != 0 && bigger != set && !containsBlocked(bigger)) {
+                set = bigger;
+            }
+        }
+        return new Seed(set);
+    }
+
+    private boolean containsBlocked(long set) {
+        for (long u : supersetsBlocked) {
+            if ((u & ~set) == 0) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The solver calls made by {@link #next} so far. */
+    public int calls() {
+        return calls;
+    }
+}

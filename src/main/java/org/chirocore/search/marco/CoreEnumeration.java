@@ -1,0 +1,240 @@
+package org.chirocore.search.marco;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.MatroidShape;
+import org.chirocore.matroid.Minor;
+import org.chirocore.search.CoreConstraints;
+import org.chirocore.search.MinimalCore;
+import org.chirocore.search.MinimalityDecider;
+import org.chirocore.search.Progress;
+import org.chirocore.search.SearchSettings;
+import org.chirocore.search.SearchStats;
+
+/**
+ * Lists every minor-minimal non-orientable minor of a matroid M (of the wanted ranks), grouped
+ * into isomorphism classes. A minor of rank R is (M/C)|S with C independent of size
+ * rank(M) − R; so for each rank, each independent C up to the symmetry group (the smallest mask
+ * of its orbit), it enumerates every minimal non-orientable restriction of M/C completely
+ * ({@link RestrictionExplorer}, seeds grown to maximal orientable restrictions), and keeps those
+ * whose single-element contractions are all orientable ({@link MinimalityDecider}, whose witnesses
+ * then prove minimality). The images of each core under the group are the cores of the other
+ * members of C's orbit; a minor is counted once as a matroid on its labelled ground set, however
+ * many (C, S) give it. Ranks below 3 are not enumerated: every matroid of rank at most 2 is
+ * orientable.
+ *
+ * <p>Cost: per contraction set, a complete enumeration of minimal non-orientable and maximal
+ * orientable restrictions (exponential in the worst case; every solve within the budget), plus
+ * up to 2|S| decisions per minimal non-orientable restriction, plus |group| images per core.
+ */
+public final class CoreEnumeration {
+    /**
+     * One isomorphism class of cores.
+     *
+     * @param example the first core found in the class, with its path and minimality witnesses
+     * @param count how many minors of M (matroids on labelled ground sets) lie in the class
+     * @param foundAtMillis time from the start until the example was found
+     * @param solverCallsAtDiscovery solver calls made until then
+     */
+    public record CoreClass(MinimalCore example, int count, long foundAtMillis, int solverCallsAtDiscovery) {
+    }
+
+    /**
+     * The enumeration.
+     *
+     * @param incomplete why it is not complete (a budget ran out), empty when it is complete
+     * @param ranks the ranks enumerated
+     * @param representatives contraction sets enumerated (one per orbit)
+     * @param contractionSets all independent contraction sets of those sizes (the orbits' sizes summed)
+     * @param classes the classes, in order of discovery
+     * @param restrictions minimal non-orientable restrictions found (over the representatives)
+     * @param deadEnds those with a non-orientable single-element contraction
+     * @param solverCalls orientability solves, map calls and minimality decisions
+     * @param millis wall-clock time
+     */
+    public record Result(Optional<String> incomplete, List<Integer> ranks, int representatives, int contractionSets,
+            List<CoreClass> classes, int restrictions, int deadEnds, int solverCalls, long millis) {
+        public Result {
+            ranks = List.copyOf(ranks);
+            classes = List.copyOf(classes);
+        }
+
+        /** Whether every contraction set's enumeration finished. */
+        public boolean complete() {
+            return incomplete.isEmpty();
+        }
+    }
+
+    private final SearchSettings settings;
+    private final CoreConstraints constraints;
+    private final Symmetry symmetry;
+    private final Progress progress;
+
+    /** An enumeration with these settings (seed, budget), ranks (only the rank of the constraints is read) and group. */
+    public CoreEnumeration(SearchSettings settings, CoreConstraints constraints, Symmetry symmetry, Progress progress) {
+        this.settings = settings;
+        this.constraints = constraints;
+        this.symmetry = symmetry;
+        this.progress = progress;
+    }
+
+    /** Mutable state of one enumeration. */
+    private static final class Run {
+        final long started = System.currentTimeMillis();
+        final List<CoreClass> classes = new ArrayList<>();
+        final List<MatroidShape> shapes = new ArrayList<>();
+        final Set<Key> seen = new HashSet<>();
+        String incomplete;
+        int representatives;
+        int contractionSets;
+        int restrictions;
+        int deadEnds;
+        int solverCalls;
+    }
+
+    /** A minor of M as a matroid on a labelled ground set: its elements and its bases, as masks over M. */
+    private record Key(long ground, List<Long> bases) {
+    }
+
+    /**
+     * Enumerates the cores of {@code m}.
+     *
+     * @throws IllegalArgumentException when the rank constraint is out of range for m
+     */
+    public Result enumerate(ExplicitMatroid m) {
+        constraints.validate(m);
+        Run run = new Run();
+        List<Integer> ranks = constraints.ranks(m.rank());
+        for (int rank : ranks) {
+            int k = m.rank() - rank;
+            int[] c = ElementSets.range(k);
+            do {
+                long mask = ElementSets.mask(c);
+                if (m.rank(c) < k || !symmetry.isRepresentative(mask)) {
+                    continue;
+                }
+                run.representatives++;
+                run.contractionSets += orbit(mask).size();
+                explore(m, c.clone(), run);
+            } while (ElementSets.nextCombination(c, m.size()));
+        }
+        return new Result(Optional.ofNullable(run.incomplete), ranks, run.representatives, run.contractionSets,
+                run.classes, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started);
+    }
+
+    private Set<Long> orbit(long set) {
+        Set<Long> images = new HashSet<>();
+        for (int[] p : symmetry.permutations()) {
+            images.add(symmetry.apply(p, set));
+        }
+        return images;
+    }
+
+    /** Enumerates the minimal non-orientable restrictions of M/C and records the cores among them. */
+    private void explore(ExplicitMatroid m, int[] c, Run run) {
+        ExplicitMatroid n0 = ExplicitMatroid.of(new Minor(m, c, new int[0]));
+        List<String> contracted = Arrays.stream(c).mapToObj(m.labels()::get).toList();
+        progress.report("contracting " + (c.length == 0 ? "nothing" : String.join(" ", contracted)), n0.size(),
+                n0.rank(), run.solverCalls);
+        RestrictionExplorer explorer = new RestrictionExplorer(n0, 0, settings.budget(), true, settings.seed());
+        try {
+            while (true) {
+                RestrictionExplorer.Step step = explorer.next();
+                if (step instanceof RestrictionExplorer.Done) {
+                    return;
+                }
+                if (step instanceof RestrictionExplorer.OutOfBudget o) {
+                    run.incomplete = "the enumeration after contracting " + contracted + " ran out of budget: "
+                            + o.reason();
+                    return;
+                }
+                if (step instanceof RestrictionExplorer.MinimalNonOrientable mus) {
+                    run.restrictions++;
+                    candidate(m, n0, mus.set(), contracted, run);
+                }
+            }
+        } finally {
+            run.solverCalls += explorer.solverCalls();
+        }
+    }
+
+    private void candidate(ExplicitMatroid m, ExplicitMatroid n0, long set, List<String> contracted, Run run) {
+        ExplicitMatroid core = ExplicitMatroid.of(Minor.restriction(n0, ElementSets.elements(set)));
+        MinimalityDecider.Result result = MinimalityDecider.decide(core, settings.budget());
+        run.solverCalls += 2 * core.size();
+        if (result instanceof MinimalityDecider.Unknown u) {
+            run.incomplete = "deciding the single-element minors of a restriction ran out of budget: " + u.reason();
+            return;
+        }
+        if (result instanceof MinimalityDecider.NonOrientableDeletion) {
+            throw new IllegalStateException("A restriction found minimal non-orientable has a non-orientable deletion.");
+        }
+        if (result instanceof MinimalityDecider.NonOrientableContraction) {
+            run.deadEnds++;
+            return;
+        }
+        Key key = key(m, core);
+        if (run.seen.contains(key)) {
+            return;
+        }
+        Set<Key> images = new HashSet<>();
+        for (int[] p : symmetry.permutations()) {
+            images.add(image(p, key));
+        }
+        run.seen.addAll(images);
+        MatroidShape shape = MatroidShape.of(core);
+        for (int j = 0; j < run.classes.size(); j++) {
+            CoreClass k = run.classes.get(j);
+            if (run.shapes.get(j).equals(shape)
+                    && new HyperplaneIsomorphismInspector(k.example().core(), core).find().isPresent()) {
+                run.classes.set(j, new CoreClass(k.example(), k.count() + images.size(), k.foundAtMillis(),
+                        k.solverCallsAtDiscovery()));
+                return;
+            }
+        }
+        List<String> deleted = m.labels().stream().filter(l -> !contracted.contains(l) && !core.labels().contains(l))
+                .toList();
+        long millis = System.currentTimeMillis() - run.started;
+        MinimalCore example = new MinimalCore(core, contracted, deleted, ((MinimalityDecider.Minimal) result).witnesses(),
+                settings, new SearchStats(run.solverCalls, n0.size(), millis));
+        progress.report("found class " + (run.classes.size() + 1), core.size(), core.rank(), run.solverCalls);
+        run.classes.add(new CoreClass(example, images.size(), millis, run.solverCalls));
+        run.shapes.add(shape);
+    }
+
+    /** The core as a key over M's elements. */
+    private static Key key(ExplicitMatroid m, ExplicitMatroid core) {
+        int[] toM = core.labels().stream().mapToInt(m.labels()::indexOf).toArray();
+        List<Long> bases = new ArrayList<>();
+        for (long b : core.basisMasks()) {
+            long lifted = 0;
+            for (long s = b; s != 0; s &= s - 1) {
+                lifted |= 1L << toM[Long.numberOfTrailingZeros(s)];
+            }
+            bases.add(lifted);
+        }
+        long ground = 0;
+        for (int e : toM) {
+            ground |= 1L << e;
+        }
+        return canonical(ground, bases);
+    }
+
+    private Key image(int[] p, Key key) {
+        return canonical(symmetry.apply(p, key.ground()), key.bases().stream().map(b -> symmetry.apply(p, b)).toList());
+    }
+
+    private static Key canonical(long ground, List<Long> bases) {
+        List<Long> sorted = new ArrayList<>(bases);
+        sorted.sort(Long::compareUnsigned);
+        return new Key(ground, sorted);
+    }
+}

@@ -1,0 +1,39 @@
+package org.chirocore.check;
+
+/**
+ * Every limit of the verifier, declared once. Each bounds the memory or the work of one check, so
+ * that a small hostile file cannot make the verifier run for hours or exhaust its heap; a file
+ * beyond a limit is rejected with a FAIL line naming the limit, never accepted unchecked.
+ * Stored certificates are far inside every limit (the largest has 64 KB and 1 400 bases).
+ */
+final class Limits {
+    /** Largest certificate file read, in bytes; the size is checked before reading. */
+    static final long MAX_CERTIFICATE_BYTES = 64L << 20;
+    /** Largest proof read from a separate file, in bytes after decompression; the proof is streamed. */
+    static final long MAX_PROOF_BYTES = 256L << 20;
+    /** Most elements of a core (bases are 64-bit masks) and of a given matroid. */
+    static final int MAX_ELEMENTS = 64;
+    /** Most bases of a core. */
+    static final int MAX_BASES = 4_000_000;
+    /** Most listed relations (each gives up to 16 clauses of the CNF, which the proof checker holds). */
+    static final int MAX_RELATIONS = 250_000;
+    /** Longest element label, in characters. */
+    static final int MAX_LABEL = 256;
+    /** Most literals in the lemmas of a proof (the checker holds them all), bounding its memory. */
+    static final long MAX_PROOF_LITERALS = 50_000_000;
+    /** Most watch-list visits of unit propagation in one proof check, bounding its work. */
+    static final long MAX_PROPAGATION_STEPS = 500_000_000L;
+    /** Most entries (a basis with one or two of its elements) sorted by the basis-exchange check; three longs each. */
+    static final long MAX_EXCHANGE_PAIRS = 12_000_000;
+    /** Most 3-term relations evaluated over all minimality witnesses together. */
+    static final long MAX_WITNESS_RELATIONS = 100_000_000L;
+    /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
+    static final int MAX_CUBE = 16;
+    /** Most r-subsets of the core's ground set whose rank is computed when rebuilding the core. */
+    static final long MAX_CANDIDATES = 2_000_000;
+    /** Most span-membership tests (one dot product each) when testing general position. */
+    static final long MAX_VECTOR_TESTS = 200_000_000L;
+
+    private Limits() {
+    }
+}
