@@ -48,8 +48,7 @@ final class FamilyConsole implements FamilyRun.Listener {
     @Override
     public synchronized void finished(MemberResult m) {
         if (m instanceof MemberResult.Certified c) {
-            out.println("n = " + m.n() + ": core " + Format.shape(c.facts().core().rank(), c.facts().core().size(),
-                    c.facts().core().basisCount()) + "; " + c.status() + (c.reused() ? " (reused)" : "") + "; "
+            out.println("n = " + m.n() + ": core " + Format.core(c.facts().core()) + "; " + c.status() + (c.reused() ? " (reused)" : "") + "; "
                     + dir.resolve(c.certificate()));
         } else {
             out.println("n = " + m.n() + ": " + m.status());

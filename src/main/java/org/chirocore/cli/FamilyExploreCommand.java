@@ -100,7 +100,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
             w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
                     + " of cores, " + m.rejected().size() + " of " + runs + " runs filtered or without a core");
             for (FamilyExploration.CoreClass c : m.classes()) {
-                w.println("  " + Format.shape(c.core().rank(), c.core().size(), c.core().basisCount()) + " x "
+                w.println("  " + Format.core(c.core()) + " x "
                         + c.attempts().size() + "; " + c.status()
                         + c.certificate().map(f -> "; " + out.resolve(f.file())).orElse(""));
             }

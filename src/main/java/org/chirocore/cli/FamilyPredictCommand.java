@@ -57,8 +57,7 @@ final class FamilyPredictCommand implements Callable<Integer> {
         int exit = ExitCodes.OK;
         for (FamilyPrediction.Outcome o : outcomes) {
             if (o instanceof FamilyPrediction.Confirmed c) {
-                w.println("n = " + c.n() + ": prediction confirmed: core " + Format.shape(c.facts().core().rank(),
-                        c.facts().core().size(), c.facts().core().basisCount()) + "; verified; "
+                w.println("n = " + c.n() + ": prediction confirmed: core " + Format.core(c.facts().core()) + "; verified; "
                         + out.resolve(c.certificate()));
             } else if (o instanceof FamilyPrediction.Refuted r) {
                 w.println("n = " + r.n() + ": prediction refuted: " + r.reason());

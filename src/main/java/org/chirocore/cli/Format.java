@@ -3,6 +3,8 @@ package org.chirocore.cli;
 import java.util.List;
 import java.util.Optional;
 
+import org.chirocore.matroid.Catalogue;
+import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.NamedMatroid;
 
 import org.chirocore.pipeline.CertifiedReduction;
@@ -27,6 +29,12 @@ final class Format {
     /** "rank 3 on 7 elements, 28 bases". */
     static String shape(int rank, int elements, long bases) {
         return shape(rank, elements) + ", " + bases + " bas" + (bases == 1 ? "is" : "es");
+    }
+
+    /** A core's shape, "rank 3 on 7 elements, 28 bases", with " (F7)" after it when the catalogue names it. */
+    static String core(ExplicitMatroid core) {
+        return shape(core.rank(), core.size(), core.basisCount())
+                + Catalogue.identify(core).map(n -> " (" + n.symbol() + ")").orElse("");
     }
 
     /** The labels separated by spaces, or "none". */

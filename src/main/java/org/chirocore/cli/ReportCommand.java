@@ -98,6 +98,12 @@ final class ReportCommand implements Callable<Integer> {
         if (subject.family != null && !Files.isDirectory(subject.family)) {
             throw new BadInputException(subject.family + ": not an existing directory", null);
         }
+        for (Path file : Arrays.asList(subject.certificate, input)) {
+            if (file != null && !Files.isRegularFile(file)) {
+                throw new BadInputException(file + ": cannot read the file: " + (Files.exists(file) ? "not a regular file" : "no such file"),
+                        null);
+            }
+        }
         if (index && subject.family == null) {
             throw new BadInputException("--index applies to --run DIR, not to a certificate", null);
         }

@@ -12,6 +12,7 @@ import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Source;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
+import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
@@ -222,7 +223,8 @@ public final class FamilyExploration {
                 b.append("|---".repeat(9)).append("|\n");
                 for (int j = 0; j < m.classes().size(); j++) {
                     CoreClass c = m.classes().get(j);
-                    b.append("| ").append(j + 1).append(" | ").append(c.core().size()).append(" | ")
+                    b.append("| ").append(j + 1).append(Catalogue.identify(c.core()).map(n -> " (" + n.symbol() + ")").orElse(""))
+                            .append(" | ").append(c.core().size()).append(" | ")
                             .append(c.core().rank()).append(" | ").append(c.core().basisCount()).append(" | ")
                             .append(nonBases(c.core())).append(" | ").append(c.attempts().size()).append(" | ")
                             .append(String.join(", ", c.attempts().stream().map(Attempt::toString).toList()))

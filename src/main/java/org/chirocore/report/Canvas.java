@@ -121,7 +121,7 @@ final class Canvas {
         };
         return add("<text x=\"" + num(x) + "\" y=\"" + num(y) + "\" text-anchor=\"" + anchor
                 + "\" font-family=\"sans-serif\" font-size=\"" + size + "\">" + escape(text) + "</text>",
-                "\\node[anchor=" + tikzAnchor + ", inner sep=0pt, font=\\sffamily" + (size * scale() < 7.5 ? "\\tiny" : "\\scriptsize")
+                "\\node[anchor=" + tikzAnchor + ", inner sep=0pt, font=\\sffamily" + (size * scale() < 6 ? "\\tiny" : "\\scriptsize")
                         + "] at " + point(x, y) + " {" + ReportFormat.TEX.text(text) + "};");
     }
 

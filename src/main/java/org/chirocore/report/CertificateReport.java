@@ -168,7 +168,8 @@ public final class CertificateReport {
         items.add(path("D (deleted)", origin.deleted(), origin.contracted().size() + origin.deleted().size() + coreSize == ground));
         String base = origin instanceof Origin.Construction c ? "the pulled matroid" + (c.contractPulled() ? " contracted by O" : "")
                 : "the given matroid";
-        items.add(List.of(new Text("M is " + base + ", then "), new Document.Math("/C\\setminus D", "/C\\D")));
+        items.add(origin.contracted().isEmpty() && origin.deleted().isEmpty() ? List.of(new Text("M is " + base + " itself"))
+                : List.of(new Text("M = "), new Document.Math("N/C\\setminus D", "N/C\\D"), new Text(", N being " + base)));
         return new Document.Bullets(items);
     }
 

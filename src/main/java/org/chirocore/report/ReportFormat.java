@@ -114,9 +114,10 @@ public enum ReportFormat {
 
         @Override
         String table(List<String> header, List<List<String>> rows) {
-            return "{\\footnotesize\\setlength{\\tabcolsep}{3pt}\n\\begin{tabular}{" + "l".repeat(header.size()) + "}\n\\hline\n"
-                    + row(header) + "\\hline\n" + rows.stream().map(this::row).collect(Collectors.joining())
-                    + "\\hline\n\\end{tabular}}\n\n";
+            // centred, so that two tables in a row are apart and neither gets a paragraph indent
+            return "\\begin{center}\\footnotesize\\setlength{\\tabcolsep}{3pt}\n\\begin{tabular}{" + "l".repeat(header.size())
+                    + "}\n\\hline\n" + row(header) + "\\hline\n" + rows.stream().map(this::row).collect(Collectors.joining())
+                    + "\\hline\n\\end{tabular}\n\\end{center}\n\n";
         }
 
         private String row(List<String> cells) {

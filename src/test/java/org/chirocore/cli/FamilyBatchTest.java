@@ -56,7 +56,7 @@ class FamilyBatchTest {
         CliRun run = CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", out.toString(), "--progress");
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.err().contains("n = 3: checking the existing certificate"), run.err());
-        assertTrue(run.out().startsWith("n = 3: core rank 3 on 7 elements, 28 bases; verified (reused)"), run.out());
+        assertTrue(run.out().startsWith("n = 3: core rank 3 on 7 elements, 28 bases (F7); verified (reused)"), run.out());
     }
 
     @Test

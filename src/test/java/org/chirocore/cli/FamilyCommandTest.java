@@ -19,7 +19,7 @@ class FamilyCommandTest {
         Path out = dir.resolve("corner");
         CliRun run = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
-        assertTrue(run.out().contains("n = 3: core rank 3 on 7 elements, 28 bases; verified"), run.out());
+        assertTrue(run.out().contains("n = 3: core rank 3 on 7 elements, 28 bases (F7); verified"), run.out());
         assertTrue(Files.exists(out.resolve("table.md")) && Files.exists(out.resolve("n=4.cert.json")));
         CliRun again = CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--out", out.toString());
         assertTrue(again.out().contains("verified (reused)"), again.out());
@@ -51,6 +51,7 @@ class FamilyCommandTest {
                 "--keep", "000,001", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.out().contains("n = 3: 1 class of cores, 0 of 2 runs"), run.out());
+        assertTrue(run.out().contains("rank 3 on 7 elements, 28 bases (F7) x 2"), run.out());
         assertTrue(Files.exists(out.resolve("n=3.core-1.cert.json")) && Files.exists(out.resolve("explore.json")));
         assertEquals(2, CliRun.of("family", "run", "families/corner.json", "--n", "3", "--keep", "000", "--out",
                 out.toString()).exit());
@@ -66,7 +67,7 @@ class FamilyCommandTest {
         CliRun run = CliRun.of("family", "predict", "families/corner.json", "--n", "3", "--prediction",
                 "families/corner.predict.json", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
-        assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases; verified"),
+        assertTrue(run.out().contains("n = 3: prediction confirmed: core rank 3 on 7 elements, 28 bases (F7); verified"),
                 run.out());
         assertEquals(2, CliRun.of("family", "predict", "families/corner.json", "--n", "3..4", "--prediction",
                 "families/corner.predict.json", "--out", out.toString()).exit());

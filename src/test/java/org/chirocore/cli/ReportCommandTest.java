@@ -68,6 +68,17 @@ class ReportCommandTest {
     }
 
     @Test
+    void aMissingCertificateIsNamedAsMissing() {
+        CliRun run = CliRun.of("report", dir.resolve("none.cert.json").toString(), "--out", dir.resolve("r.md").toString());
+        assertEquals(ExitCodes.BAD_INPUT, run.exit());
+        assertTrue(run.err().contains("none.cert.json: cannot read the file: no such file"), run.err());
+        CliRun input = CliRun.of("report", "certificates/fano.cert.json", "--input", dir.toString(), "--out",
+                dir.resolve("r.md").toString());
+        assertEquals(ExitCodes.BAD_INPUT, input.exit());
+        assertTrue(input.err().contains(dir + ": cannot read the file: not a regular file"), input.err());
+    }
+
+    @Test
     void indexNeedsARunDirectory() {
         CliRun run = CliRun.of("report", "certificates/fano.cert.json", "--index", "--out", dir.toString());
         assertEquals(ExitCodes.BAD_INPUT, run.exit());

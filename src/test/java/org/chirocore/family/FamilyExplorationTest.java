@@ -55,7 +55,10 @@ class FamilyExplorationTest {
         }
         Json.Obj json = Json.parse(Files.readString(dir.resolve(FamilyExploration.EXPLORE_JSON))).asObject("explore");
         assertEquals(2, json.requireArray("members").size());
-        assertTrue(Files.readString(dir.resolve(FamilyExploration.EXPLORE_MD)).contains("## n = 4"));
+        String md = Files.readString(dir.resolve(FamilyExploration.EXPLORE_MD));
+        assertTrue(md.contains("## n = 4"));
+        // the class at n = 3 is the Fano plane (the corner member itself, see everyCoreAtThreeIsTheFanoPlane)
+        assertTrue(md.contains("| 1 (F7) | 7 | 3 | 28 |"), md);
     }
 
     @Test

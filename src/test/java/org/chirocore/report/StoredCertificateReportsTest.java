@@ -118,7 +118,14 @@ class StoredCertificateReportsTest {
                 () -> assertTrue(md.contains("D (deleted) (6): `0000 0001 0010 0011 1010 1100`")
                         || md.contains("D (deleted): all other elements"), md),
                 () -> assertTrue(md.contains("](r-cube.svg)"), md),
-                () -> assertTrue(md.contains("labelled by their cube coordinates"), md));
+                () -> assertTrue(md.contains("labelled by their cube coordinates"), md),
+                () -> assertTrue(md.contains(", N being the pulled matroid contracted by O"), md));
+    }
+
+    @Test
+    void aGivenMatroidThatIsItsOwnCoreIsSaidToBeSo() {
+        String md = ReportFormat.MD.render(CertificateReport.of(STORED.resolve("fano.cert.json"), Optional.empty()), "r").text();
+        assertTrue(md.contains("M is the given matroid itself"), md);
     }
 
     @Test
