@@ -110,7 +110,7 @@ final class EnumerateCommand implements Callable<Integer> {
         progress.finish();
         List<Optional<CertificateWriter.Written>> certificates = new ArrayList<>();
         for (int k = 0; k < result.classes().size(); k++) {
-            certificates.add(certify(result.classes().get(k), input.source(), k + 1));
+            certificates.add(certify(result.classes().get(k), input, k + 1));
         }
         Inputs.write(out.resolve(SUMMARY_JSON), summaryJson(input, m, group, result, certificates));
         String markdown = summaryMarkdown(m, group, result, certificates);
@@ -138,10 +138,10 @@ final class EnumerateCommand implements Callable<Integer> {
     }
 
     /** The class's certificate, written and verified, or empty when its refutation ran out of budget. */
-    private Optional<CertificateWriter.Written> certify(CoreEnumeration.CoreClass c, Source source, int k) {
+    private Optional<CertificateWriter.Written> certify(CoreEnumeration.CoreClass c, Subject input, int k) {
         try {
-            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(c.example(), source),
-                    budget.budget(), out.resolve(certificateName(k)));
+            CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(c.example(),
+                    input.source()), budget.budget(), out.resolve(certificateName(k)), input.file());
             return outcome instanceof CertifiedReduction.Verified v ? Optional.of(v.written()) : Optional.empty();
         } catch (IOException e) {
             throw new BadInputException(out.resolve(certificateName(k)) + ": cannot write the certificate: " + e, e);

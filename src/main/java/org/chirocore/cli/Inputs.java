@@ -25,7 +25,7 @@ final class Inputs {
     static Subject read(Path file) {
         try {
             MatroidFiles.Hashed read = MatroidFiles.readHashed(file);
-            return Subject.given(read.matroid(), read.sha256());
+            return Subject.read(read.matroid(), read.sha256(), file);
         } catch (MatroidFileException e) {
             throw new BadInputException(e.getMessage(), e);
         }

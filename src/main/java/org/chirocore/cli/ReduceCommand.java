@@ -118,7 +118,7 @@ final class ReduceCommand implements Callable<Integer> {
                 }
                 outcome = steered instanceof SteeredSearch.Found f
                         ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
-                                out)
+                                out, subject.file())
                         : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
             } else {
                 outcome = new CertifiedReduction(settings, progress).run(subject, out);

@@ -48,9 +48,8 @@ public final class CertifiedReduction {
     /**
      * A certificate of minor-minimal non-orientability, written and accepted by the verifier.
      * The verifier rebuilds a construction and checks the path from it; a given matroid's
-     * provenance needs its input file, which the pipeline does not pass yet (the verifier's
-     * reader of matroid files does not yet accept every file the producer reads), so that check
-     * is listed in {@link Checked#notChecked}, never reported as passed.
+     * provenance is checked against its input file when the subject names one, and is otherwise
+     * listed in {@link Checked#notChecked}, never reported as passed.
      *
      * @param certificate what was certified
      * @param written the files written and the content digest
@@ -123,7 +122,7 @@ public final class CertifiedReduction {
             return new Unknown(u.reason());
         }
         CoreFinding found = CoreFinding.searched(((SearchResult.Found) result).core(), subject.source());
-        return certify(found, settings.budget(), out);
+        return certify(found, settings.budget(), out, subject.file());
     }
 
     /**
@@ -135,13 +134,24 @@ public final class CertifiedReduction {
      *     re-check, or the verifier rejects the file (the files are then removed)
      */
     public static Outcome certify(CoreFinding found, Budget budget, Path out) throws IOException {
+        return certify(found, budget, out, Optional.empty());
+    }
+
+    /**
+     * As {@link #certify(CoreFinding, Budget, Path)}, for a core of a matroid read from {@code input}:
+     * the verifier then also checks the provenance against that file.
+     *
+     * @throws IOException when a file cannot be written
+     * @throws IllegalStateException as for {@link #certify(CoreFinding, Budget, Path)}
+     */
+    public static Outcome certify(CoreFinding found, Budget budget, Path out, Optional<Path> input) throws IOException {
         Certification certification = Certification.of(found, budget);
         if (certification instanceof Certification.OutOfBudget o) {
             return new Unknown("proving the core ran out of budget: " + o.reason());
         }
         Certificate certificate = ((Certification.Certified) certification).certificate();
         CertificateWriter.Written written = CertificateWriter.write(certificate, out);
-        return new Verified(certificate, written, verifyWritten(out, written.dratFile()));
+        return new Verified(certificate, written, verifyWritten(out, written.dratFile(), input));
     }
 
     /**
@@ -165,12 +175,12 @@ public final class CertifiedReduction {
      */
     public static Checked writeVerified(Json.Obj document, Path out) throws IOException {
         AtomicFiles.writeJson(out, document);
-        return verifyWritten(out, Optional.empty());
+        return verifyWritten(out, Optional.empty(), Optional.empty());
     }
 
     /** Verifies {@code out}; on rejection removes it and its proof file and throws. */
-    private static Checked verifyWritten(Path out, Optional<Path> dratFile) throws IOException {
-        VerificationReport report = CertificateVerifier.verify(out);
+    private static Checked verifyWritten(Path out, Optional<Path> dratFile, Optional<Path> input) throws IOException {
+        VerificationReport report = CertificateVerifier.verify(out, input);
         if (!report.passed()) {
             Files.deleteIfExists(out);
             if (dratFile.isPresent()) {

@@ -15,6 +15,8 @@ import java.util.Map;
 
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.io.Json;
+import org.chirocore.io.MatroidFileException;
+import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.orient.Budget;
@@ -50,6 +52,17 @@ class CertifiedReductionTest {
         CertifiedReduction.Verified v = assertInstanceOf(CertifiedReduction.Verified.class,
                 PIPELINE.run(Subject.given(NamedMatroids.fano(), "0".repeat(64)), out));
         assertEquals(List.of("provenance"), v.verification().notChecked());
+    }
+
+    @Test
+    void aMatroidReadFromAFileHasItsProvenanceChecked() throws IOException, MatroidFileException {
+        // The documented Fano matrix example (docs/matroid-format.md), read as reduce reads it.
+        Path input = Path.of("certificates/inputs/fano.json");
+        MatroidFiles.Hashed read = MatroidFiles.readHashed(input);
+        Path out = dir.resolve("f7-read.json");
+        CertifiedReduction.Verified v = assertInstanceOf(CertifiedReduction.Verified.class,
+                PIPELINE.run(Subject.read(read.matroid(), read.sha256(), input), out));
+        assertEquals(List.of(), v.verification().notChecked(), "the verifier checked the digest and the path");
     }
 
     @Test
