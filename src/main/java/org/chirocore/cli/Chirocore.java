@@ -25,7 +25,8 @@ import picocli.CommandLine.Spec;
                 "1:internal error (a bug; set " + Chirocore.STACKTRACE_VARIABLE + "=1 for its stack trace); for verify: a check failed",
                 "2:bad usage, bad input, an input beyond the limits, or out of memory (message on stderr)",
                 "3:unknown: the budget ran out before an answer",
-                "4:none exists: a constrained search (reduce --rank/--keep/--avoid) exhausted its space"})
+                "4:verify: no check failed, but some part was not checked",
+                "5:none exists: a constrained search (reduce --rank/--keep/--avoid) exhausted its space"})
 public final class Chirocore implements Runnable {
     @Spec
     private CommandSpec spec;

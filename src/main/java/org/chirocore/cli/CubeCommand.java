@@ -11,6 +11,7 @@ import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeGeometry;
 import org.chirocore.matroid.CubeHyperplane;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Field;
 import org.chirocore.matroid.CubeReport;
 import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
@@ -73,7 +74,31 @@ final class CubeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        // Every option is checked before the first line is printed, so bad input leaves no partial output.
+        if (orbits && (n < SweepRun.MIN_DIMENSION || n > HyperplaneOrbits.MAX_DIMENSION)) {
+            throw new ParameterException(spec.commandLine(), "--orbits needs N within " + SweepRun.MIN_DIMENSION + ".."
+                    + HyperplaneOrbits.MAX_DIMENSION + ", not " + n + ".");
+        }
+        if (orbits && !construction.field().equals(Field.RATIONALS)) {
+            throw new ParameterException(spec.commandLine(), "--orbits lists the hyperplanes of the real cube; "
+                    + "it cannot be combined with --field " + construction.field() + ".");
+        }
+        if (part != null && !orbits) {
+            throw new ParameterException(spec.commandLine(), "--part splits the enumeration of --orbits; give --orbits too.");
+        }
+        Shard split;
+        try {
+            split = part == null ? Shard.ALL : Shard.parse(part);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), "--part: " + e.getMessage());
+        }
         output.checkFiles(List.of(), save);
+        Matroid saved = null;
+        if (save != null) {
+            saved = Inputs.build(construction.construction(n, contractPulled)).matroid();
+            // Checked before the C(n, r) rank tests of the enumeration, which are the long part.
+            Limits.requireExplicit(saved.size(), saved.rank(), "--save " + save + ": the pulled matroid");
+        }
         CubeReport r;
         try {
             r = CubeReport.of(n, construction.field(), construction.hyperplane(), construction.pull());
@@ -96,33 +121,17 @@ final class CubeCommand implements Callable<Integer> {
         });
         r.pull().ifPresent(p -> out.println("pulling " + p.vertex() + " to H: "
                 + p.problem().map(why -> "not possible: " + why).orElse("in general position")));
-        if (part != null && !orbits) {
-            throw new ParameterException(spec.commandLine(), "--part splits the enumeration of --orbits; give --orbits too.");
-        }
         if (orbits) {
-            printOrbits(out);
+            printOrbits(out, split);
         }
-        if (save != null) {
-            Matroid m = Inputs.build(construction.construction(n, contractPulled)).matroid();
-            // Checked before the C(n, r) rank tests of the enumeration, which are the long part.
-            Limits.requireExplicit(m.size(), m.rank(), "--save " + save + ": the pulled matroid");
-            Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(m)));
-            out.println("wrote " + save + " (rank " + m.rank() + " on " + m.size() + " elements)");
+        if (saved != null) {
+            Inputs.write(save, MatroidFiles.toJson(ExplicitMatroid.of(saved)));
+            out.println("wrote " + save + " (rank " + saved.rank() + " on " + saved.size() + " elements)");
         }
         return ExitCodes.OK;
     }
 
-    private void printOrbits(PrintWriter out) {
-        if (n < SweepRun.MIN_DIMENSION || n > HyperplaneOrbits.MAX_DIMENSION) {
-            throw new ParameterException(spec.commandLine(), "--orbits needs N within " + SweepRun.MIN_DIMENSION + ".."
-                    + HyperplaneOrbits.MAX_DIMENSION + ", not " + n + ".");
-        }
-        Shard split;
-        try {
-            split = part == null ? Shard.ALL : Shard.parse(part);
-        } catch (IllegalArgumentException e) {
-            throw new ParameterException(spec.commandLine(), "--part: " + e.getMessage());
-        }
+    private void printOrbits(PrintWriter out, Shard split) {
         long[] candidates = {0};
         List<HyperplaneOrbit> found = HyperplaneOrbits.part(n, split.index(), split.count(), v -> candidates[0] += v);
         out.println("hyperplane orbits" + (part == null ? "" : " in part " + split.index() + "/" + split.count()) + ": "

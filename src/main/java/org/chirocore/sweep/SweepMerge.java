@@ -20,9 +20,10 @@ import org.chirocore.io.Json;
  * sweep.json; shards of another range, seed, strategy or shard count; a shard index missing or
  * given twice; per-n counts that differ between shards; a pair outside its shard (index ≢ i mod
  * k), a pair index missing or given twice; a certificate that is missing, fails the verifier or
- * records another construction than its pair. Each certificate, witness and DRAT side file is
- * copied into the output, and each certificate is verified there again. Cost: one verification
- * per certificate.
+ * records another construction than its pair.
+ * Each certificate is verified in its shard first; only when every check has passed are the
+ * certificates, witnesses and DRAT side files copied into the output, so a refused merge writes
+ * nothing. Cost: one verification per certificate.
  */
 public final class SweepMerge {
     private SweepMerge() {
@@ -68,8 +69,13 @@ public final class SweepMerge {
             }
         }
         List<SweepLevel> levels = new ArrayList<>();
+        List<Copy> copies = new ArrayList<>();
         for (int li = 0; li < first.levels().size(); li++) {
-            levels.add(mergeLevel(parts, shards, li, out));
+            levels.add(mergeLevel(parts, shards, li, out, copies));
+        }
+        // Only after every shard and certificate passed is anything written, so a refused merge leaves nothing behind.
+        for (Copy c : copies) {
+            c.run();
         }
         SweepResult merged = new SweepResult(first.from(), first.to(), Shard.ALL, first.seed(), first.strategy(),
                 levels);
@@ -89,8 +95,8 @@ public final class SweepMerge {
         }
     }
 
-    private static SweepLevel mergeLevel(List<SweepResult> parts, List<Path> shards, int li, Path out)
-            throws IOException {
+    private static SweepLevel mergeLevel(List<SweepResult> parts, List<Path> shards, int li, Path out,
+            List<Copy> copies) throws IOException {
         SweepLevel reference = parts.get(0).levels().get(li);
         int n = reference.n();
         Map<Integer, PairResult> pairs = new TreeMap<>();
@@ -112,7 +118,10 @@ public final class SweepMerge {
                     throw new SweepException(where + ": pair index " + pair.index() + " of n = " + n
                             + " appears twice.");
                 }
-                copyFiles(pair, SweepRun.levelDirectory(shards.get(s), n), SweepRun.levelDirectory(out, n), where);
+                Path from = SweepRun.levelDirectory(shards.get(s), n);
+                check(pair, pair.contractedVerdict(), true, from, where);
+                check(pair, pair.pulledVerdict(), false, from, where);
+                copies.add(new Copy(pair, from, SweepRun.levelDirectory(out, n)));
             }
         }
         for (int i = 0; i < reference.generalPositionPairs(); i++) {
@@ -124,39 +133,43 @@ public final class SweepMerge {
         return reference.withPairs(new ArrayList<>(pairs.values()));
     }
 
-    private static void copyFiles(PairResult pair, Path from, Path to, String where) throws IOException {
-        Files.createDirectories(to);
-        copyAndCheck(pair, pair.contractedVerdict(), true, from, to, where);
-        copyAndCheck(pair, pair.pulledVerdict(), false, from, to, where);
+    /** Copies a checked pair's certificates (and their DRAT files) from its shard into the merged directory. */
+    private record Copy(PairResult pair, Path from, Path to) {
+        void run() throws IOException {
+            Files.createDirectories(to);
+            for (Verdict v : List.of(pair.contractedVerdict(), pair.pulledVerdict())) {
+                if (v.file().isEmpty()) {
+                    continue;
+                }
+                Path source = from.resolve(v.file());
+                Files.copy(source, to.resolve(v.file()), StandardCopyOption.REPLACE_EXISTING);
+                Path drat = from.resolve(CertificateWriter.baseName(source) + ".drat.gz");
+                if (Files.exists(drat)) {
+                    Files.copy(drat, to.resolve(drat.getFileName()), StandardCopyOption.REPLACE_EXISTING);
+                }
+            }
+        }
     }
 
-    private static void copyAndCheck(PairResult pair, Verdict v, boolean contract, Path from, Path to, String where)
+    private static void check(PairResult pair, Verdict v, boolean contract, Path from, String where)
             throws IOException {
         if (v.file().isEmpty()) {
             return;
         }
         Path source = from.resolve(v.file());
-        Path target = to.resolve(v.file());
         if (!Files.isRegularFile(source)) {
             throw new SweepException(where + ": the file " + source + " of pair " + pair.id() + " is missing.");
-        }
-        if (!source.toAbsolutePath().normalize().equals(target.toAbsolutePath().normalize())) {
-            Files.copy(source, target, StandardCopyOption.REPLACE_EXISTING);
-            Path drat = from.resolve(CertificateWriter.baseName(source) + ".drat.gz");
-            if (Files.exists(drat)) {
-                Files.copy(drat, to.resolve(drat.getFileName()), StandardCopyOption.REPLACE_EXISTING);
-            }
         }
         if (!(v instanceof Verdict.NonOrientable)) {
             return;
         }
-        if (!CertificateVerifier.verify(target).passed()) {
+        if (!CertificateVerifier.verify(source).passed()) {
             throw new SweepException(where + ": the certificate " + source + " of pair " + pair.id()
                     + " fails the verifier.");
         }
         Json.Obj recorded;
         try {
-            recorded = RecordedCertificate.read(target).construction();
+            recorded = RecordedCertificate.read(source).construction();
         } catch (IllegalArgumentException e) {
             throw new SweepException(where + ": the certificate " + source + " is not one the sweep writes: "
                     + e.getMessage(), e);

@@ -32,8 +32,8 @@ public final class SweepReport {
         List<PairResult> found = result.discoveries();
         if (!found.isEmpty()) {
             s.append("**!!! ORIENTABLE PULLS FOUND: ").append(found.stream().map(PairResult::id)
-                    .collect(Collectors.joining(", "))).append(". No orientable pull was known; check the witness "
-                    + "files. !!!**\n\n");
+                    .collect(Collectors.joining(", "))).append(". No orientable pull of an n-cube with n >= 3 was "
+                    + "known (at n = 2 every pull is orientable); check the witness files. !!!**\n\n");
         }
         s.append("Pairs (H, O) up to the symmetry group of the cube (order 2^n·n!): H a hyperplane spanned by "
                 + "vertices, O a vertex off H in general position. Seed ").append(result.seed())

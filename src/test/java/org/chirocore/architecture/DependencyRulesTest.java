@@ -7,8 +7,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 import java.util.stream.Stream;
 
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -69,5 +73,72 @@ class DependencyRulesTest {
             }
         }
         return offending;
+    }
+
+    /**
+     * The "may import" column of DEVELOPERS.md's package table, as an allow-list: every package in
+     * the source tree has a row, and imports nothing from this project, sat4j, jgrapht or picocli
+     * beyond its row ({@code cli} may import everything).
+     */
+    private static final Map<String, Set<String>> MAY_IMPORT = Map.ofEntries(
+            Map.entry("matroid", Set.of("org.jgrapht")),
+            Map.entry("orient", Set.of("matroid", "org.sat4j")),
+            Map.entry("search", Set.of("matroid", "orient")),
+            Map.entry("io", Set.of("matroid", "orient")),
+            Map.entry("cert", Set.of("matroid", "orient", "search", "io", "proof")),
+            Map.entry("pipeline", Set.of("matroid", "orient", "search", "cert", "io", "check")),
+            Map.entry("proof", Set.of("matroid", "orient")),
+            Map.entry("report", Set.of("io", "matroid", "check")),
+            Map.entry("family", Set.of("matroid", "orient", "search", "cert", "pipeline", "check", "io")),
+            Map.entry("sweep", Set.of("matroid", "orient", "search", "cert", "check", "pipeline", "family", "io")));
+
+    @Test
+    void everyPackageImportsOnlyWhatTheTableAllows() throws IOException {
+        List<String> offending = new ArrayList<>();
+        try (Stream<Path> dirs = Files.list(MAIN)) {
+            for (Path dir : dirs.filter(Files::isDirectory).sorted().toList()) {
+                String pkg = dir.getFileName().toString();
+                if (pkg.equals("cli")) {
+                    continue;
+                }
+                Set<String> allowed = MAY_IMPORT.get(pkg);
+                if (allowed == null) {
+                    offending.add(pkg + ": no row in DEVELOPERS.md's package table");
+                    continue;
+                }
+                for (String used : dependenciesOf(pkg)) {
+                    if (!used.equals(pkg) && !allowed.contains(used)) {
+                        offending.add(pkg + " imports " + used);
+                    }
+                }
+            }
+        }
+        assertEquals(List.of(), offending);
+    }
+
+    /** The project packages and third-party roots (org.sat4j, org.jgrapht, picocli) imported by a package. */
+    private static Set<String> dependenciesOf(String pkg) throws IOException {
+        Set<String> used = new TreeSet<>();
+        try (Stream<Path> files = Files.walk(MAIN.resolve(pkg))) {
+            for (Path f : files.filter(p -> p.toString().endsWith(".java")).toList()) {
+                for (String line : Files.readAllLines(f)) {
+                    String t = line.trim();
+                    if (!t.startsWith("import ")) {
+                        continue;
+                    }
+                    String name = t.replace("import static ", "").replace("import ", "");
+                    if (name.startsWith("org.chirocore.")) {
+                        used.add(name.substring("org.chirocore.".length()).split("\\.")[0]);
+                    } else {
+                        for (String root : List.of("org.sat4j", "org.jgrapht", "picocli")) {
+                            if (name.startsWith(root + ".")) {
+                                used.add(root);
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return used;
     }
 }

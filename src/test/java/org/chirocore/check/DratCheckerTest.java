@@ -55,11 +55,8 @@ class DratCheckerTest {
     void sat4jProofsOfPigeonholeAreAcceptedAndTheirLratToo(String name, Supplier<ISolver> solver) {
         Cnf cnf = pigeonhole(6);
         String drat = TestCertificates.proof(cnf.variables(), cnf.clauses(), solver);
-        long start = System.nanoTime();
         DratChecker.Outcome outcome = DratChecker.check(cnf, drat);
-        long millis = (System.nanoTime() - start) / 1_000_000;
         assertTrue(outcome.valid(), outcome::failure);
-        assertTrue(millis < 10_000, "checking took " + millis + " ms for " + outcome.summary());
         String lrat = LratConversion.convert(cnf.variables(), cnf.clauses(), drat);
         assertEquals(Optional.empty(), LratChecker.check(cnf, lrat));
     }

@@ -19,7 +19,7 @@ class EnumerateCommandTest {
     Path dir;
 
     /**
-     * The 3-cube's corner construction is the Fano plane (math-notes §3; F7 is minimal
+     * The 3-cube's corner construction is the Fano plane (docs/mathematics.md §7; F7 is minimal
      * non-orientable, Oxley, Matroid Theory, 2nd ed., §6.6): one class, itself, counted once; its
      * symmetry group fixing H and O is S3 (computed).
      */

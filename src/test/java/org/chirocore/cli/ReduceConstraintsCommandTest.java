@@ -24,7 +24,7 @@ class ReduceConstraintsCommandTest {
         return CliRun.of(args);
     }
 
-    /** The 3-cube's corner construction is the Fano plane (math-notes §3), a rank-3 core keeping every element. */
+    /** The 3-cube's corner construction is the Fano plane (docs/mathematics.md §7), a rank-3 core keeping every element. */
     @Test
     void rankThreeKeepingAVertexGivesTheVerifiedFanoCore() {
         Path out = dir.resolve("f.json");

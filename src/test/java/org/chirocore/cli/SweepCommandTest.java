@@ -3,6 +3,7 @@ package org.chirocore.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -14,7 +15,7 @@ class SweepCommandTest {
     Path dir;
 
     @Test
-    void sweepsTheThreeCubeWithProgressLinesAndMerges() {
+    void sweepsTheThreeCubeWithProgressLinesAndMerges() throws IOException {
         Path out = dir.resolve("s");
         CliRun run = CliRun.of("sweep", "--n", "3", "--out", out.toString());
         assertEquals(0, run.exit(), run.err());
@@ -26,6 +27,18 @@ class SweepCommandTest {
         CliRun merged = CliRun.of("sweep-merge", out.toString(), "--out", dir.resolve("m").toString());
         assertEquals(0, merged.exit(), merged.err());
         assertTrue(Files.exists(dir.resolve("m/n=3/n3_a1-1-1_b1_o111.pulled.cert.json")));
+
+        // The merged directory may not be a shard: that would overwrite the shard's own sweep.json.
+        CliRun onto = CliRun.of("sweep-merge", out.toString(), "--out", out.toString());
+        assertEquals(2, onto.exit());
+        assertTrue(onto.err().contains("is also an input"), onto.err());
+        // A certificate that fails the verifier is refused before anything is copied.
+        Path cert = out.resolve("n=3/n3_a1-1-1_b1_o111.pulled.cert.json");
+        Files.writeString(cert, Files.readString(cert).replace("\"rank\": 3", "\"rank\": 4"));
+        CliRun tampered = CliRun.of("sweep-merge", out.toString(), "--out", dir.resolve("t").toString());
+        assertEquals(2, tampered.exit());
+        assertTrue(tampered.err().contains("fails the verifier"), tampered.err());
+        assertTrue(Files.notExists(dir.resolve("t")), "a refused merge writes nothing");
     }
 
     @Test
@@ -47,6 +60,20 @@ class SweepCommandTest {
         assertTrue(run.out().contains("hyperplane orbits: 6 (140 hyperplanes; "), run.out());
         assertTrue(run.out().contains("general-position pairs up to symmetry: 2 (80 pairs)"), run.out());
         assertTrue(run.out().contains("x1 + x2 + x3 + 2·x4 = 2, O = 1111: orbit size 64"), run.out());
+    }
+
+    /** Bad --orbits usage is refused before anything is printed (no partial output on standard output). */
+    @Test
+    void badOrbitsUsageIsRefusedBeforeOutput() {
+        for (String[] args : new String[][] {{"cube", "1", "--orbits"}, {"cube", "10", "--orbits"},
+                {"cube", "3", "--orbits", "--field", "5"}, {"cube", "3", "--orbits", "--save", dir.resolve("m.json").toString()},
+                {"cube", "3", "--orbits", "--part", "x"}, {"cube", "3", "--part", "0/2"}}) {
+            CliRun run = CliRun.of(args);
+            assertEquals(2, run.exit(), String.join(" ", args));
+            assertEquals("", run.out(), String.join(" ", args));
+        }
+        assertTrue(CliRun.of("cube", "3", "--orbits", "--field", "5").err().contains("real cube"));
+        assertTrue(Files.notExists(dir.resolve("m.json")));
     }
 
     /** The two parts of the 5-cube's enumeration hold its 15 orbits (OEIS A363505) between them. */

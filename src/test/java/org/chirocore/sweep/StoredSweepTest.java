@@ -13,16 +13,21 @@ import java.util.stream.Stream;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.VerificationReport;
+import org.chirocore.family.Shard;
 import org.chirocore.io.Json;
+import org.chirocore.orient.Budget;
+import org.chirocore.search.Strategy;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * The sweep stored in {@code certificates/sweep} (n = 3..6, docs/sweep.md): complete against a
  * fresh enumeration, and every certificate passes every check of the independent verifier and
- * records its own pair's construction.
+ * records its own pair's construction; the certificates of n = 3..4 are regenerated with their
+ * recorded settings (seed 0, contract-first) and must be byte-identical in their hashed content.
  */
 class StoredSweepTest {
     private static final Path DIR = Path.of("certificates/sweep");
@@ -72,5 +77,28 @@ class StoredSweepTest {
             assertEquals(CertificateWriter.construction(SweepRun.construction(pair.n(), pair.normal(), pair.offset(),
                     pair.pulled(), contract)), RecordedCertificate.read(file).construction(), file.toString());
         }
+    }
+
+    /** Behaviour unchanged: a fresh sweep of n = 3..4 writes certificates with the stored content digests. */
+    @Test
+    void smallLevelsAreRegeneratedByteIdentically(@TempDir Path fresh) throws IOException {
+        new SweepRun(fresh, new SweepRun.Settings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED, 1, Shard.ALL),
+                SweepRun.Listener.SILENT).run(3, 4);
+        int compared = 0;
+        for (SweepLevel level : stored.levels().subList(0, 2)) {
+            for (PairResult pair : level.pairs()) {
+                for (Verdict v : List.of(pair.pulledVerdict(), pair.contractedVerdict())) {
+                    Path old = SweepRun.levelDirectory(DIR, pair.n()).resolve(v.file());
+                    Path now = SweepRun.levelDirectory(fresh, pair.n()).resolve(v.file());
+                    assertEquals(digest(old), digest(now), now + " differs from " + old);
+                    compared++;
+                }
+            }
+        }
+        assertEquals(6, compared, "the stored sweep has 1 + 2 pairs at n = 3, 4");
+    }
+
+    private static String digest(Path certificate) throws IOException {
+        return Json.parseUtf8(Files.readAllBytes(certificate)).asObject(certificate.toString()).requireString("sha256");
     }
 }

@@ -16,7 +16,11 @@ import java.util.Optional;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.family.Shard;
 import org.chirocore.io.Json;
+import org.chirocore.io.ResultJson;
+import org.chirocore.matroid.Matroid;
 import org.chirocore.orient.Budget;
+import org.chirocore.orient.Chirotope;
+import org.chirocore.pipeline.IndependentCheck;
 import org.chirocore.search.Strategy;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -43,6 +47,36 @@ class SweepRunTest {
 
     private static SweepRun.Settings settings(Shard shard) {
         return new SweepRun.Settings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED, 1, shard);
+    }
+
+    /**
+     * n = 2: every pull is a matroid of rank 3 on 4 elements (or rank 2 on 3 with O contracted),
+     * and every such matroid is realisable over the reals, so orientable (from memory). That makes
+     * n = 2 the test of the discovery path: both pairs (the facet x2 = 0 with O = 01 and the
+     * diagonal x1 + x2 = 1 with O = 00, as {@code cube 2 --orbits} lists) are reported orientable
+     * in sweep.json, at the top of sweep.md and in the progress lines, and each written witness
+     * passes the independent checker against the pair's matroid.
+     */
+    @Test
+    void orientablePullsAreMarkedAndTheirWitnessesCheck(@TempDir Path dir) throws IOException {
+        List<String> lines = new ArrayList<>();
+        SweepResult r = new SweepRun(dir, settings(Shard.ALL), lines::add).run(2, 2);
+        assertEquals(List.of("n2_a0-1_b0_o01", "n2_a1-1_b1_o00"), r.discoveries().stream().map(PairResult::id).toList());
+        String json = Files.readString(dir.resolve(SweepRun.SWEEP_JSON));
+        assertEquals(r, SweepResult.fromJson(Json.parseUtf8(json.getBytes()).asObject("sweep.json")));
+        assertTrue(json.contains("orientablePulls") && json.contains("\"n2_a1-1_b1_o00\""), json);
+        assertTrue(Files.readString(dir.resolve(SweepRun.SWEEP_MD)).contains("ORIENTABLE PULLS FOUND"));
+        assertTrue(lines.stream().anyMatch(l -> l.contains("!!! ORIENTABLE PULL n2_a1-1_b1_o00")), lines.toString());
+        for (PairResult p : r.discoveries()) {
+            for (boolean contract : new boolean[] {false, true}) {
+                Verdict.Orientable v = assertInstanceOf(Verdict.Orientable.class,
+                        contract ? p.contractedVerdict() : p.pulledVerdict());
+                Chirotope witness = ResultJson.readChirotope(
+                        Json.parseUtf8(Files.readAllBytes(dir.resolve("n=2").resolve(v.file()))));
+                Matroid m = SweepRun.construction(2, p.normal(), p.offset(), p.pulled(), contract).build();
+                IndependentCheck.assertOrients(m, witness);
+            }
+        }
     }
 
     /**
