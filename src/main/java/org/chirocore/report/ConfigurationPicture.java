@@ -19,8 +19,11 @@ public final class ConfigurationPicture {
     private static final int MARGIN = 40;
     private static final int ROW = 18;
     private static final int LABEL_SIZE = 13;
-    /** Label offsets tried in turn: right, above right, above, ... (unit vectors times 14 px). */
-    private static final int DIRECTIONS = 8;
+    /** Label positions tried on each ring: right, then counter-clockwise in equal steps. */
+    private static final int DIRECTIONS = 16;
+    /** Rings of label positions, each {@link #RING_STEP} px farther from the point than the last. */
+    private static final int RINGS = 4;
+    private static final int RING_STEP = 8;
 
     private ConfigurationPicture() {
     }
@@ -86,6 +89,10 @@ public final class ConfigurationPicture {
         for (double[] p : d.points()) {
             plotHeight = Math.max(plotHeight, p[1]);
         }
+        List<double[]> boxes = labelBoxes(d, core.labels());
+        for (double[] box : boxes) {
+            plotHeight = Math.max(plotHeight, box[3]);
+        }
         int legendTop = (int) Math.ceil(plotHeight) + 30;
         int longest = 0;
         for (int[] line : lines) {
@@ -102,7 +109,10 @@ public final class ConfigurationPicture {
         for (double[] p : d.points()) {
             svg.circle(p[0], p[1], 5.5, "point", "black", "white");
         }
-        labels(svg, d, core.labels());
+        for (int e = 0; e < boxes.size(); e++) {
+            double[] box = boxes.get(e);
+            svg.text((box[0] + box[2]) / 2, box[3] - 2, core.labels().get(e), "middle", LABEL_SIZE);
+        }
         svg.text(20, legendTop, "Lines (colour, points; straight or curved):", "start", 12);
         for (int l = 0; l < lines.size(); l++) {
             double x = 20 + (l % columns) * (WIDTH / 2.0);
@@ -167,40 +177,93 @@ public final class ConfigurationPicture {
     }
 
     /**
-     * Puts each label on the side of its point with the lowest cost: overlapping a label already
-     * placed or another point is expensive, passing close to a line costs in proportion.
+     * Each label's box {left, top, right, bottom} in pixels, placed in turn at the candidate
+     * position with the lowest cost: overlapping a label already placed or a point is worst, a
+     * box that a line's drawn path crosses (its overhang past the end points included) is next, a
+     * position off the picture's left, right or top follows; then passing close to a line costs in
+     * proportion, and a farther ring of positions a little more than a nearer one.
      */
-    private static void labels(Canvas svg, Drawing d, List<String> labels) {
+    static List<double[]> labelBoxes(Drawing d, List<String> labels) {
+        List<double[][]> paths = new ArrayList<>();
+        for (int l = 0; l < d.layout().paths().size(); l++) {
+            paths.add(pixelPath(d, l));
+        }
         List<double[]> boxes = new ArrayList<>();
         for (int e = 0; e < labels.size(); e++) {
             double w = 7.5 * labels.get(e).length() + 2;
             double h = LABEL_SIZE;
             double[] best = null;
             double bestCost = Double.MAX_VALUE;
-            for (int dir = 0; dir < DIRECTIONS; dir++) {
-                double angle = 2 * Math.PI * dir / DIRECTIONS;
-                double cx = d.points()[e][0] + Math.cos(angle) * (10 + w / 2);
-                double cy = d.points()[e][1] - Math.sin(angle) * (9 + h / 2);
-                double[] box = {cx - w / 2, cy - h / 2, cx + w / 2, cy + h / 2};
-                double cost = dir * 0.01;
-                for (double[] other : boxes) {
-                    cost += overlap(box, other) ? 1000 : 0;
-                }
-                for (double[] p : d.points()) {
-                    cost += overlap(box, new double[] {p[0] - 6, p[1] - 6, p[0] + 6, p[1] + 6}) ? 1000 : 0;
-                }
-                for (int l = 0; l < d.layout().paths().size(); l++) {
-                    cost += Math.max(0, 12 - d.distance(l, cx, cy));
-                }
-                cost += box[0] < 0 || box[2] > WIDTH || box[1] < 0 ? 500 : 0;
-                if (cost < bestCost) {
-                    bestCost = cost;
-                    best = box;
+            for (int ring = 0; ring < RINGS; ring++) {
+                for (int dir = 0; dir < DIRECTIONS; dir++) {
+                    double angle = 2 * Math.PI * dir / DIRECTIONS;
+                    double cx = d.points()[e][0] + Math.cos(angle) * (10 + RING_STEP * ring + w / 2);
+                    double cy = d.points()[e][1] - Math.sin(angle) * (9 + RING_STEP * ring + h / 2);
+                    double[] box = {cx - w / 2, cy - h / 2, cx + w / 2, cy + h / 2};
+                    double cost = ring * 3 + dir * 0.01;
+                    for (double[] other : boxes) {
+                        cost += overlap(box, other) ? 1000 : 0;
+                    }
+                    for (double[] p : d.points()) {
+                        cost += overlap(box, new double[] {p[0] - 6, p[1] - 6, p[0] + 6, p[1] + 6}) ? 1000 : 0;
+                    }
+                    // the stroke is 2.5 px wide: a path within 1.5 px of the box touches the text
+                    double[] padded = {box[0] - 1.5, box[1] - 1.5, box[2] + 1.5, box[3] + 1.5};
+                    for (int l = 0; l < paths.size(); l++) {
+                        cost += crosses(paths.get(l), padded) ? 300 : Math.max(0, 12 - d.distance(l, cx, cy));
+                    }
+                    cost += box[0] < 0 || box[2] > WIDTH || box[1] < 0 ? 500 : 0;
+                    if (cost < bestCost) {
+                        bestCost = cost;
+                        best = box;
+                    }
                 }
             }
             boxes.add(best);
-            svg.text((best[0] + best[2]) / 2, best[3] - 2, labels.get(e), "middle", LABEL_SIZE);
         }
+        return boxes;
+    }
+
+    /** Line l's drawn path in pixels as a polyline: a segment's two ends, or a closed curve's samples (first repeated). */
+    static double[][] pixelPath(Drawing d, int l) {
+        ConfigurationLayout.Path path = d.layout().paths().get(l);
+        if (path instanceof ConfigurationLayout.Segment s) {
+            return new double[][] {d.pixel(s.x1(), s.y1()), d.pixel(s.x2(), s.y2())};
+        }
+        double[][] samples = path.samples();
+        double[][] out = new double[samples.length + 1][];
+        for (int i = 0; i <= samples.length; i++) {
+            double[] q = samples[i % samples.length];
+            out[i] = d.pixel(q[0], q[1]);
+        }
+        return out;
+    }
+
+    /** Whether the polyline meets the box {left, top, right, bottom}: a piece clipped to it keeps some length (Liang–Barsky). */
+    private static boolean crosses(double[][] polyline, double[] box) {
+        for (int i = 0; i + 1 < polyline.length; i++) {
+            double[] a = polyline[i];
+            double dx = polyline[i + 1][0] - a[0];
+            double dy = polyline[i + 1][1] - a[1];
+            double[] p = {-dx, dx, -dy, dy};
+            double[] q = {a[0] - box[0], box[2] - a[0], a[1] - box[1], box[3] - a[1]};
+            double lo = 0;
+            double hi = 1;
+            boolean outside = false;
+            for (int k = 0; k < 4 && !outside; k++) {
+                if (p[k] == 0) {
+                    outside = q[k] < 0;
+                } else if (p[k] < 0) {
+                    lo = Math.max(lo, q[k] / p[k]);
+                } else {
+                    hi = Math.min(hi, q[k] / p[k]);
+                }
+            }
+            if (!outside && lo <= hi) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean overlap(double[] a, double[] b) {

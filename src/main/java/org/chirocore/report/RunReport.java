@@ -15,7 +15,7 @@ import org.chirocore.matroid.NamedMatroid;
 
 /**
  * Reports on a run directory of any kind in {@link #KINDS} (family run, exploration,
- * prediction, sweep): what the run's record says, then every certificate of the run that the
+ * prediction, sweep, enumeration): what the run's record says, then every certificate of the run that the
  * independent verifier passes, with its core's isomorphism class, vertices, contracted and
  * deleted sets and picture. A certificate that does not verify is named with the failed check
  * and not described. {@link #writeAll} also writes each certificate's own report and an index
@@ -24,7 +24,7 @@ import org.chirocore.matroid.NamedMatroid;
 public final class RunReport {
     /** The kinds of run directory, tried in order; the first that recognises a directory describes it. */
     static final List<RunKind> KINDS = List.of(new FamilyRunKind(), new ExploreRunKind(), new PredictRunKind(),
-            new SweepRunKind());
+            new SweepRunKind(), new EnumerationRunKind());
 
     private RunReport() {
     }
@@ -37,7 +37,7 @@ public final class RunReport {
     public static RunKind kindOf(Path dir) {
         return KINDS.stream().filter(k -> k.recognises(dir)).findFirst().orElseThrow(() -> new ReportException(dir
                 + ": not a run directory: expected a family run (table.json), an exploration (explore.json), a "
-                + "prediction (n=K.predicted.cert.json files) or a sweep (sweep.json).", null));
+                + "prediction (n=K.predicted.cert.json files), a sweep (sweep.json) or an enumeration (summary.json).", null));
     }
 
     /** The report on the run in {@code dir}. */

@@ -22,8 +22,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Reports on run directories: the stored corner family run (families/corner, n = 3..10), and an
- * exploration and a checked prediction of the corner family made here.
+ * Reports on run directories: the stored corner family run (families/corner, n = 3..10), the
+ * stored sweep and enumeration, and an exploration and a checked prediction of the corner family
+ * made here.
  */
 class RunReportTest {
     private static final Path CORNER = Path.of("families/corner");
@@ -115,6 +116,51 @@ class RunReportTest {
         assertAll(() -> assertEquals("", Structure.latexProblem(tex)),
                 () -> assertTrue(tex.contains("$F_7$") && tex.contains("$AG(2,3)\\setminus e$"), "classes named"),
                 () -> assertEquals(23, count(tex, "\\subsection*{n = "), "one section per pair (23 pairs, docs/sweep.md)"));
+    }
+
+    @Test
+    void enumerationIsReportedInEveryFormat(@TempDir Path dir) throws IOException {
+        Path enumeration = Path.of("docs/enumerations/corner-n4");
+        assertTrue(RunReport.kindOf(enumeration) instanceof EnumerationRunKind);
+        Document doc = RunReport.of(enumeration);
+        Document.Table table = (Document.Table) doc.blocks().stream()
+                .filter(b -> b instanceof Document.Table t && t.header().contains("example labels")).findFirst().orElseThrow();
+        // docs/enumerations/corner-n4/summary.md: three classes, 8 elements each, ranks 4, 4, 3
+        assertEquals(List.of("1", "2", "3"), column(table, 0));
+        assertEquals(List.of("4", "4", "3"), column(table, 2));
+        assertEquals(List.of("59", "56", "48"), column(table, 3));
+        assertEquals(List.of("5", "24", "96"), column(table, 4));
+        // AG(2,3) minus a point: rank 3 on 8 elements with C(8,3) - 8 = 48 bases (its 8 three-point lines)
+        Document.Math ag = (Document.Math) table.rows().get(2).get(5);
+        String md = ReportFormat.MD.render(doc, "enumeration").text();
+        String tex = ReportFormat.TEX.render(doc, "enumeration").text();
+        String html = ReportFormat.HTML.render(doc, "enumeration").text();
+        assertAll(() -> assertEquals("AG(2,3)\\e", ag.text()),
+                () -> assertTrue(md.contains("The enumeration is complete"), md),
+                () -> assertTrue(md.contains("## class 3: class-3.cert.json"), md),
+                () -> assertTrue(md.contains("0010 0100 0110 0111 1000 1011 1100 1101"), "example labels"),
+                () -> assertEquals("", Structure.latexProblem(tex)),
+                () -> assertTrue(tex.contains("$AG(2,3)\\setminus e$"), "class named in math mode"),
+                () -> assertEquals("", Structure.htmlProblem(html)),
+                () -> assertEquals(1, count(html, "<svg "), "the rank-3 core drawn"),
+                () -> assertTrue(html.contains("java -jar chirocore.jar verify docs/enumerations/corner-n4/class-*.cert.json"),
+                        "relative command"));
+        List<Path> written = RunReport.writeAll(enumeration, ReportFormat.HTML, dir, true);
+        assertEquals(1 + 1 + 3, written.size());
+        assertTrue(Files.readString(dir.resolve("index.html")).contains("<a href=\"class-3.html\">"));
+    }
+
+    @Test
+    void anIncompleteEnumerationIsNeverCalledComplete(@TempDir Path dir) throws IOException {
+        Path stored = Path.of("docs/enumerations/corner-n4");
+        for (String f : List.of("class-1.cert.json", "class-2.cert.json", "class-3.cert.json")) {
+            Files.copy(stored.resolve(f), dir.resolve(f));
+        }
+        Files.writeString(dir.resolve("summary.json"), Files.readString(stored.resolve("summary.json"))
+                .replace("\"incomplete\": null", "\"incomplete\": \"the total time ran out\""));
+        String md = ReportFormat.MD.render(RunReport.of(dir), "enumeration").text();
+        assertTrue(md.contains("INCOMPLETE (the total time ran out)"), md);
+        assertFalse(md.contains("is complete"), md);
     }
 
     @Test

@@ -138,11 +138,12 @@ class StoredCertificateReportsTest {
     }
 
     static Stream<Path> latexSubjects() throws IOException {
-        return Stream.concat(certificates().stream(), Stream.of(Path.of("families/corner"), Path.of("certificates/sweep")));
+        return Stream.concat(certificates().stream(), Stream.of(Path.of("families/corner"), Path.of("certificates/sweep"),
+                Path.of("docs/enumerations/corner-n4")));
     }
 
     /**
-     * Compiles the LaTeX report of every stored certificate, of the corner family and of the stored sweep inside a
+     * Compiles the LaTeX report of every stored certificate, of the corner family, of the stored sweep and enumeration inside a
      * plain article with tikz, when pdflatex is installed (texlive-latex-base and
      * texlive-pictures); the log must show no overfull box. Skipped, saying so, without pdflatex;
      * the structural test above runs always.
