@@ -72,7 +72,8 @@ final class ReportCommand implements Callable<Integer> {
         private Path certificate;
 
         @Option(names = {"--run", "--family"}, paramLabel = "DIR", description = "A run directory: a family run "
-                + "(table.json), an exploration (explore.json) or a checked prediction (n=K.predicted.cert.json).")
+                + "(table.json), an exploration (explore.json), a checked prediction (n=K.predicted.cert.json), "
+                + "a sweep (sweep.json) or an enumeration (summary.json).")
         private Path family;
     }
 
