@@ -29,8 +29,12 @@ final class Limits {
     static final long MAX_WITNESS_RELATIONS = 100_000_000L;
     /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
     static final int MAX_CUBE = 16;
-    /** Most r-subsets of the core's ground set whose rank is computed when rebuilding the core. */
-    static final long MAX_CANDIDATES = 2_000_000;
+    /**
+     * Most r-subsets of the core's ground set whose rank is computed when rebuilding the core:
+     * 2^21, the most r-subsets of any matroid the producer holds as a list of bases, so every core
+     * it certifies can be rebuilt.
+     */
+    static final long MAX_CANDIDATES = 1L << 21;
     /** Most span-membership tests (one dot product each) when testing general position. */
     static final long MAX_VECTOR_TESTS = 200_000_000L;
 
