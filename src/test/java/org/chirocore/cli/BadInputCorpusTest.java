@@ -86,6 +86,8 @@ class BadInputCorpusTest {
                 bad(2, "colour.json: unknown field \"colour\"", "orient @colour.json"),
                 bad(2, "--conflicts", "orient " + FANO + " --conflicts lots"),
                 bad(2, "Missing required parameter: 'FILE'", "orient"),
+                bad(2, "--witness-signs chooses the form of the witness file: it needs --witness-out",
+                        "orient " + FANO + " --witness-signs"),
                 bad(2, "fano.json: is also an input", "orient @fano.json --witness-out @fano.json"),
                 bad(2, "fano.json: is also an input", "orient " + FANO + " --start @fano.json --witness-out @fano.json"),
                 bad(2, "existing.json: the file already exists; give --force", "orient " + FANO
