@@ -117,7 +117,7 @@ class BadInputCorpusTest {
                 bad(2, "same file", "explain " + FANO_CERT + " --out @e.txt --certificate-out @e.txt"),
                 bad(1, "notjson.json: REJECTED", "explain @notjson.json"),
                 // export
-                bad(2, "nodir: not an existing directory", "export " + FANO_CERT + " --out-dir @nodir"),
+                bad(2, "existing.json/out: cannot be created", "export " + FANO_CERT + " --out-dir @existing.json/out"),
                 bad(2, "fano.cert.cnf: the file already exists; give --force", "export " + FANO_CERT + " --out-dir @exported"),
                 bad(2, "notjson.json", "export @notjson.json --out-dir @noshard"),
                 // cube
