@@ -50,7 +50,7 @@ public final class HyperplaneOrbits {
     private static final long PRIME = 2_147_483_647L;
 
     /**
-     * Search prefixes between two progress reports inside one m-cube: 212 reports over the
+     * Search prefixes between two progress reports inside one m-cube: 211 reports over the
      * 8-cube's 55.5 million prefixes (several seconds apart), which otherwise pass in silence for
      * minutes; the 7-cube (377 thousand prefixes, seconds) gets one.
      */
