@@ -11,7 +11,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
-/** The options describing a cube construction, shared by {@code reduce} and {@code cube}. */
+/** The options describing a cube construction, shared by {@code cube} and {@link InputOptions}. */
 final class ConstructionOptions {
     @Spec(Spec.Target.MIXEE)
     private CommandSpec mixee;

@@ -31,7 +31,6 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -55,18 +54,8 @@ final class EnumerateCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(paramLabel = "FILE", arity = "0..1", description = "A matroid file (instead of --cube).")
-    private Path file;
-
-    @Option(names = "--cube", paramLabel = "N", description = "Start from the affine N-cube (instead of FILE).")
-    private Integer cube;
-
     @Mixin
-    private ConstructionOptions construction;
-
-    @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
-            description = "Contract the pulled vertex first (default: yes).")
-    private boolean contractPulled;
+    private InputOptions inputs;
 
     @Option(names = "--rank", paramLabel = "R", description = "Only cores of rank R (default: every rank from "
             + "rank(M) down to 3).")
@@ -94,8 +83,8 @@ final class EnumerateCommand implements Callable<Integer> {
         if (!symmetry.equals("auto") && !symmetry.equals("none")) {
             throw new ParameterException(spec.commandLine(), "--symmetry is auto or none, not \"" + symmetry + "\".");
         }
-        output.checkDirectory(out, Arrays.asList(file), List.of(SUMMARY_JSON, SUMMARY_MD));
-        Subject input = input();
+        output.checkDirectory(out, Arrays.asList(inputs.file()), List.of(SUMMARY_JSON, SUMMARY_MD));
+        Subject input = inputs.choose();
         if (!SteeredSearch.explorable(input.matroid())) {
             throw new BadInputException("the matroid (rank " + input.matroid().rank() + " on " + input.matroid().size()
                     + " elements) is too large to enumerate: at most 64 elements and " + SteeredSearch.EXPLORED_SUBSETS
@@ -133,10 +122,6 @@ final class EnumerateCommand implements Callable<Integer> {
         return result.complete() ? ExitCodes.OK : ExitCodes.UNKNOWN;
     }
 
-    /** The input chosen by exactly one of FILE and --cube. */
-    private Subject input() {
-        return Inputs.choose(spec, file, cube, construction, contractPulled);
-    }
 
     private Symmetry group(Subject input, ExplicitMatroid m) {
         if (symmetry.equals("none")) {
@@ -148,7 +133,7 @@ final class EnumerateCommand implements Callable<Integer> {
         try {
             return Symmetry.automorphisms(m);
         } catch (IllegalArgumentException e) {
-            throw new BadInputException(file + ": " + e.getMessage(), e);
+            throw new BadInputException(inputs.file() + ": " + e.getMessage(), e);
         }
     }
 

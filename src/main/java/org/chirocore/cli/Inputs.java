@@ -11,8 +11,6 @@ import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.pipeline.Subject;
 
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.ParameterException;
 
 /**
  * Reading and building inputs, and writing outputs, for the commands: each turns the library's
@@ -43,28 +41,6 @@ final class Inputs {
             throw new BadInputException("cannot build the " + construction.n() + "-cube construction: " + e.getMessage(),
                     e);
         }
-    }
-
-    /**
-     * The input of a command taking FILE or --cube N with the construction options: exactly one
-     * of the two, and the construction options only with --cube.
-     *
-     * @throws ParameterException when both or neither are given, or construction options go with FILE
-     */
-    static Subject choose(CommandSpec spec, Path file, Integer cube, ConstructionOptions construction,
-            boolean contractPulled) {
-        if ((file == null) == (cube == null)) {
-            throw new ParameterException(spec.commandLine(), "Give exactly one of FILE or --cube N; "
-                    + (file == null ? "neither was given." : "both were given."));
-        }
-        if (file == null) {
-            return build(construction.construction(cube, contractPulled));
-        }
-        if (construction.anyGiven() || spec.commandLine().getParseResult().hasMatchedOption("--contract-pulled")) {
-            throw new ParameterException(spec.commandLine(),
-                    "--field, --hyperplane, --pull and --[no-]contract-pulled only go with --cube, not with FILE.");
-        }
-        return read(file);
     }
 
     /** Writes {@code json} to {@code file} atomically. */

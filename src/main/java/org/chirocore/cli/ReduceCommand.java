@@ -28,7 +28,6 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -47,18 +46,8 @@ final class ReduceCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(paramLabel = "FILE", arity = "0..1", description = "A matroid file (instead of --cube).")
-    private Path file;
-
-    @Option(names = "--cube", paramLabel = "N", description = "Start from the affine N-cube (instead of FILE).")
-    private Integer cube;
-
     @Mixin
-    private ConstructionOptions construction;
-
-    @Option(names = "--contract-pulled", negatable = true, defaultValue = "true", fallbackValue = "true",
-            description = "Contract the pulled vertex before reducing (default: yes).")
-    private boolean contractPulled;
+    private InputOptions inputs;
 
     @Mixin
     private SeedOption seed;
@@ -110,8 +99,8 @@ final class ReduceCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         // A large proof goes beside the certificate, so its name is an output too.
-        output.checkFiles(Arrays.asList(file), out, CertificateWriter.dratFile(out), witnessOut);
-        Subject input = input();
+        output.checkFiles(Arrays.asList(inputs.file()), out, CertificateWriter.dratFile(out), witnessOut);
+        Subject input = inputs.choose();
         CoreConstraints constraints = constraints(input);
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CertifiedReduction.Outcome outcome;
@@ -172,10 +161,6 @@ final class ReduceCommand implements Callable<Integer> {
         }
     }
 
-    /** The input chosen by exactly one of FILE and --cube. */
-    private Subject input() {
-        return Inputs.choose(spec, file, cube, construction, contractPulled);
-    }
 
     private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {
         Certificate certificate = v.certificate();

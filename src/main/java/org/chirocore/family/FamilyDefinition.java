@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.function.BiFunction;
 import java.util.function.Supplier;
 
 import org.chirocore.cert.Source;
@@ -73,9 +74,19 @@ public record FamilyDefinition(String source, String name, String description, F
      * @throws FamilyException naming the file and the offending field
      */
     public static FamilyDefinition read(Path file) {
+        return readJson(file, FamilyDefinition::parse);
+    }
+
+    /**
+     * Reads the JSON in {@code file} and parses it with {@code parse}, given the file name as the
+     * prefix of every message.
+     *
+     * @throws FamilyException naming the file: it cannot be read, is not JSON, or a field is wrong
+     */
+    static <T> T readJson(Path file, BiFunction<String, Json, T> parse) {
         String source = file.toString();
         try {
-            return parse(source, Json.parseUtf8(InputFiles.read(file)));
+            return parse.apply(source, Json.parseUtf8(InputFiles.read(file)));
         } catch (IOException e) {
             throw new FamilyException(source + ": cannot read the file: " + IoMessages.plain(e), e);
         } catch (FamilyException e) {

@@ -14,8 +14,6 @@ import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
 import org.chirocore.cert.Provenance;
 import org.chirocore.cert.Source;
-import org.chirocore.io.InputFiles;
-import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -72,51 +70,46 @@ public final class FamilyPrediction {
          * @throws FamilyException naming the file and the offending member
          */
         public static Prediction read(Path file) {
-            String source = file.toString();
-            try {
-                Json.Obj o = Json.parseUtf8(InputFiles.read(file)).asObject("the prediction");
-                o.requireOnly(FIELDS);
-                if (o.has("members") == o.has("rule")) {
-                    throw new FamilyException(source + ": give either \"members\" (a core per n) or \"rule\" "
-                            + "(one core rule for a range of n), not " + (o.has("rule") ? "both." : "neither."));
+            return FamilyDefinition.readJson(file, Prediction::parse);
+        }
+
+        private static Prediction parse(String source, Json json) {
+            Json.Obj o = json.asObject("the prediction");
+            o.requireOnly(FIELDS);
+            if (o.has("members") == o.has("rule")) {
+                throw new FamilyException(source + ": give either \"members\" (a core per n) or \"rule\" "
+                        + "(one core rule for a range of n), not " + (o.has("rule") ? "both." : "neither."));
+            }
+            Map<Integer, Candidate> candidates = new TreeMap<>();
+            if (o.has("rule")) {
+                Json.Obj r = o.require("rule").asObject("rule");
+                r.requireOnly(RULE_FIELDS);
+                Json.Arr range = r.requireArray("range");
+                int from = range.size() == 2 ? range.get(0).asInt("rule.range[0]") : 0;
+                int to = range.size() == 2 ? range.get(1).asInt("rule.range[1]") : 0;
+                if (range.size() != 2 || from < 1 || from > to || to > MAX_N) {
+                    throw new FamilyException(source + ": rule.range must be [a, b] with 1 <= a <= b <= "
+                            + MAX_N + ".");
                 }
-                Map<Integer, Candidate> candidates = new TreeMap<>();
-                if (o.has("rule")) {
-                    Json.Obj r = o.require("rule").asObject("rule");
-                    r.requireOnly(RULE_FIELDS);
-                    Json.Arr range = r.requireArray("range");
-                    int from = range.size() == 2 ? range.get(0).asInt("rule.range[0]") : 0;
-                    int to = range.size() == 2 ? range.get(1).asInt("rule.range[1]") : 0;
-                    if (range.size() != 2 || from < 1 || from > to || to > MAX_N) {
-                        throw new FamilyException(source + ": rule.range must be [a, b] with 1 <= a <= b <= "
-                                + MAX_N + ".");
-                    }
-                    Candidate c = new Candidate(rules(r.requireArray("core"), "rule.core"),
-                            rules(r.requireArray("contract"), "rule.contract"));
-                    for (int n = from; n <= to; n++) {
-                        candidates.put(n, c);
-                    }
-                    return new Prediction(source, o.requireString("family"), candidates);
-                }
-                Json.Arr members = o.requireArray("members");
-                for (int k = 0; k < members.size(); k++) {
-                    Json.Obj m = members.get(k).asObject("members[" + k + "]");
-                    m.requireOnly(MEMBER_FIELDS);
-                    int n = m.requireInt("n");
-                    Candidate c = new Candidate(rules(m.requireArray("core"), "members[" + k + "].core"),
-                            rules(m.requireArray("contract"), "members[" + k + "].contract"));
-                    if (candidates.put(n, c) != null) {
-                        throw new FamilyException(source + ": members[" + k + "]: n = " + n + " is predicted twice.");
-                    }
+                Candidate c = new Candidate(rules(r.requireArray("core"), "rule.core"),
+                        rules(r.requireArray("contract"), "rule.contract"));
+                for (int n = from; n <= to; n++) {
+                    candidates.put(n, c);
                 }
                 return new Prediction(source, o.requireString("family"), candidates);
-            } catch (IOException e) {
-                throw new FamilyException(source + ": cannot read the file: " + IoMessages.plain(e), e);
-            } catch (FamilyException e) {
-                throw e;
-            } catch (IllegalArgumentException e) {
-                throw new FamilyException(source + ": " + e.getMessage(), e);
             }
+            Json.Arr members = o.requireArray("members");
+            for (int k = 0; k < members.size(); k++) {
+                Json.Obj m = members.get(k).asObject("members[" + k + "]");
+                m.requireOnly(MEMBER_FIELDS);
+                int n = m.requireInt("n");
+                Candidate c = new Candidate(rules(m.requireArray("core"), "members[" + k + "].core"),
+                        rules(m.requireArray("contract"), "members[" + k + "].contract"));
+                if (candidates.put(n, c) != null) {
+                    throw new FamilyException(source + ": members[" + k + "]: n = " + n + " is predicted twice.");
+                }
+            }
+            return new Prediction(source, o.requireString("family"), candidates);
         }
 
         private static List<SetRule> rules(Json.Arr items, String where) {

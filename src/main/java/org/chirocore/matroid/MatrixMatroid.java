@@ -105,13 +105,7 @@ public final class MatrixMatroid implements Matroid {
             throw new IllegalArgumentException("A determinant sign needs " + rows + " columns over Q; got "
                     + set.length + " over " + field + ".");
         }
-        BigInteger[][] a = new BigInteger[rows][rows];
-        for (int j = 0; j < rows; j++) {
-            for (int i = 0; i < rows; i++) {
-                a[i][j] = BigInteger.valueOf(columns[set[j]][i]);
-            }
-        }
-        return bareissDeterminant(a).signum();
+        return bareissDeterminant(bigColumns(set)).signum();
     }
 
     private static int rankBareiss(long[][] a) {
@@ -120,16 +114,9 @@ public final class MatrixMatroid implements Matroid {
         long prev = 1;
         int r = 0;
         for (int col = 0; col < n && r < m; col++) {
-            int pivot = r;
-            while (pivot < m && a[pivot][col] == 0) {
-                pivot++;
-            }
-            if (pivot == m) {
+            if (!raisePivot(a, r, col)) {
                 continue;
             }
-            long[] t = a[pivot];
-            a[pivot] = a[r];
-            a[r] = t;
             for (int i = r + 1; i < m; i++) {
                 for (int j = col + 1; j < n; j++) {
                     long v = Math.subtractExact(Math.multiplyExact(a[r][col], a[i][j]),
@@ -145,27 +132,15 @@ public final class MatrixMatroid implements Matroid {
     }
 
     private int rankBig(int[] set) {
-        BigInteger[][] a = new BigInteger[rows][set.length];
-        for (int j = 0; j < set.length; j++) {
-            for (int i = 0; i < rows; i++) {
-                a[i][j] = BigInteger.valueOf(columns[set[j]][i]);
-            }
-        }
+        BigInteger[][] a = bigColumns(set);
         int m = rows;
         int n = set.length;
         BigInteger prev = BigInteger.ONE;
         int r = 0;
         for (int col = 0; col < n && r < m; col++) {
-            int pivot = r;
-            while (pivot < m && a[pivot][col].signum() == 0) {
-                pivot++;
-            }
-            if (pivot == m) {
+            if (raisePivot(a, r, col) < 0) {
                 continue;
             }
-            BigInteger[] t = a[pivot];
-            a[pivot] = a[r];
-            a[r] = t;
             for (int i = r + 1; i < m; i++) {
                 for (int j = col + 1; j < n; j++) {
                     a[i][j] = a[r][col].multiply(a[i][j]).subtract(a[i][col].multiply(a[r][j])).divide(prev);
@@ -178,23 +153,68 @@ public final class MatrixMatroid implements Matroid {
         return r;
     }
 
+    /** The columns {@code set} as a matrix of big integers. */
+    private BigInteger[][] bigColumns(int[] set) {
+        BigInteger[][] a = new BigInteger[rows][set.length];
+        for (int j = 0; j < set.length; j++) {
+            for (int i = 0; i < rows; i++) {
+                a[i][j] = BigInteger.valueOf(columns[set[j]][i]);
+            }
+        }
+        return a;
+    }
+
+    /**
+     * Swaps the first row at or below {@code r} with a non-zero entry in column {@code col} into
+     * row {@code r}.
+     *
+     * @return whether there was such a row
+     */
+    private static boolean raisePivot(long[][] a, int r, int col) {
+        int pivot = r;
+        while (pivot < a.length && a[pivot][col] == 0) {
+            pivot++;
+        }
+        if (pivot == a.length) {
+            return false;
+        }
+        long[] t = a[pivot];
+        a[pivot] = a[r];
+        a[r] = t;
+        return true;
+    }
+
+    /**
+     * Swaps the first row at or below {@code r} with a non-zero entry in column {@code col} into
+     * row {@code r}.
+     *
+     * @return the row it came from, or -1 when there was none
+     */
+    private static int raisePivot(BigInteger[][] a, int r, int col) {
+        int pivot = r;
+        while (pivot < a.length && a[pivot][col].signum() == 0) {
+            pivot++;
+        }
+        if (pivot == a.length) {
+            return -1;
+        }
+        BigInteger[] t = a[pivot];
+        a[pivot] = a[r];
+        a[r] = t;
+        return pivot;
+    }
+
     /** Bareiss determinant with row swaps tracked; exact division at every step. */
     static BigInteger bareissDeterminant(BigInteger[][] a) {
         int n = a.length;
         BigInteger prev = BigInteger.ONE;
         int sign = 1;
         for (int k = 0; k < n; k++) {
-            int pivot = k;
-            while (pivot < n && a[pivot][k].signum() == 0) {
-                pivot++;
-            }
-            if (pivot == n) {
+            int pivot = raisePivot(a, k, k);
+            if (pivot < 0) {
                 return BigInteger.ZERO;
             }
             if (pivot != k) {
-                BigInteger[] t = a[pivot];
-                a[pivot] = a[k];
-                a[k] = t;
                 sign = -sign;
             }
             for (int i = k + 1; i < n; i++) {
@@ -212,16 +232,9 @@ public final class MatrixMatroid implements Matroid {
         int n = a[0].length;
         int r = 0;
         for (int col = 0; col < n && r < m; col++) {
-            int pivot = r;
-            while (pivot < m && a[pivot][col] == 0) {
-                pivot++;
-            }
-            if (pivot == m) {
+            if (!raisePivot(a, r, col)) {
                 continue;
             }
-            long[] t = a[pivot];
-            a[pivot] = a[r];
-            a[r] = t;
             long inv = inverse(a[r][col], p);
             for (int i = r + 1; i < m; i++) {
                 long f = a[i][col] * inv % p;

@@ -6,16 +6,14 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
 
+import org.chirocore.cert.CertificateReader;
 import org.chirocore.io.Json;
+import org.chirocore.io.Sha256;
 import org.chirocore.matroid.ExplicitMatroid;
-import org.chirocore.matroid.InvalidMatroidException;
 
 /**
  * What a report says about a certificate, read from its JSON (docs/certificate-format.md). It
@@ -54,39 +52,11 @@ public record CertificateSummary(String file, String contentSha256, String fileS
             byte[] bytes = Files.readAllBytes(file);
             Json.Obj cert = Json.parseUtf8(bytes).asObject("certificate");
             Json.Obj content = cert.requireObject("content");
-            return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), sha256(bytes),
-                    core(content.requireObject("core")), origin(content.requireObject("provenance")),
+            return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), Sha256.hex(bytes),
+                    CertificateReader.core(content.requireObject("core")), origin(content.requireObject("provenance")),
                     proof(content.requireObject("nonOrientability"), file.toAbsolutePath().getParent()));
         } catch (IOException | IllegalArgumentException e) {
             throw new ReportException(file + ": cannot be read as a certificate: " + e.getMessage(), e);
-        }
-    }
-
-    /** The SHA-256 of {@code bytes}, 64 lower-case hex digits. */
-    static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("Every Java platform has SHA-256.", e);
-        }
-    }
-
-    private static ExplicitMatroid core(Json.Obj core) {
-        List<String> labels = strings(core.requireArray("labels"), "core.labels");
-        Json.Arr bases = core.requireArray("bases");
-        List<int[]> sets = new ArrayList<>();
-        for (int i = 0; i < bases.size(); i++) {
-            List<Json> elements = bases.get(i).asArray("core.bases[" + i + "]").elements();
-            int[] set = new int[elements.size()];
-            for (int j = 0; j < set.length; j++) {
-                set[j] = elements.get(j).asInt("an element of core.bases[" + i + "]");
-            }
-            sets.add(set);
-        }
-        try {
-            return ExplicitMatroid.fromBases(labels, core.requireInt("rank"), sets);
-        } catch (InvalidMatroidException e) {
-            throw new IllegalArgumentException("core: " + e.getMessage(), e);
         }
     }
 
