@@ -45,6 +45,7 @@ public final class CertificateExport {
      * {@code <name>} being its file name without {@code .json}; with {@code lrat}, also
      * {@code outDir/<name>.lrat}, the proof with the unit-propagation hints the independent
      * checker finds for each step (so that formally verified LRAT checkers can consume it).
+     * {@code outDir} is created when missing, once the certificate has been read and checked.
      *
      * @throws IOException when a file cannot be read or written
      * @throws JsonValueException when the certificate is not of this format, its digest does not
@@ -70,13 +71,17 @@ public final class CertificateExport {
         Path cnfFile = outDir.resolve(name + ".cnf");
         Path dratFile = outDir.resolve(name + ".drat");
         byte[] dratBytes = drat(proof, certificate);
+        // Everything that can fail is done before the directory or any file is created.
+        Optional<String> hinted = lrat
+                ? Optional.of(LratConversion.convert(index.basisCount(), cnf, new String(dratBytes, StandardCharsets.UTF_8)))
+                : Optional.empty();
+        Files.createDirectories(outDir);
         AtomicFiles.writeString(cnfFile, dimacs.toString());
         AtomicFiles.write(dratFile, dratBytes);
         Optional<Path> lratFile = Optional.empty();
-        if (lrat) {
-            String hinted = LratConversion.convert(index.basisCount(), cnf, new String(dratBytes, StandardCharsets.UTF_8));
+        if (hinted.isPresent()) {
             lratFile = Optional.of(outDir.resolve(name + ".lrat"));
-            AtomicFiles.writeString(lratFile.get(), hinted);
+            AtomicFiles.writeString(lratFile.get(), hinted.get());
         }
         return new Exported(cnfFile, dratFile, index.basisCount(), cnf.size(), lratFile);
     }

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 
 import org.chirocore.matroid.Limits;
+import org.chirocore.orient.Orientability;
 import org.chirocore.search.Benchmark;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.SearchResult;
@@ -67,18 +68,33 @@ final class BenchCommand implements Callable<Integer> {
                 "decisions");
         for (int n = 3; n <= maxN; n++) {
             Benchmark.Row r = Benchmark.corner(n, settings);
-            String decide = r.decision().map(d -> d.verdict().equals("unknown") ? "unknown"
-                    : String.valueOf(d.stats().millis())).orElse("-");
+            String decide = r.decision().map(BenchCommand::decideColumn).orElse("-");
             if (r.reduction() instanceof SearchResult.Found f) {
                 MinimalCore c = f.core();
                 out.printf(ROW, n, r.elements(), r.rank(), decide, r.reduceMillis(), c.core().size(), c.core().rank(),
                         c.core().basisCount(), c.stats().decisions());
             } else {
-                String verdict = r.reduction() instanceof SearchResult.Orientable ? "orientable" : "unknown";
-                out.printf(ROW, n, r.elements(), r.rank(), decide, r.reduceMillis(), verdict, "-", "-", "-");
+                out.printf(ROW, n, r.elements(), r.rank(), decide, r.reduceMillis(), reductionColumn(r.reduction()),
+                        "-", "-", "-");
             }
             out.flush();
         }
         return ExitCodes.OK;
+    }
+
+    /** The "decide ms" cell: the decision's time, or "unknown" when its budget ran out (no time is a verdict's). */
+    static String decideColumn(Orientability decision) {
+        return decision instanceof Orientability.Unknown ? "unknown" : String.valueOf(decision.stats().millis());
+    }
+
+    /** The "core elements" cell of a reduction that found no core: orientable, or unknown when the budget ran out. */
+    static String reductionColumn(SearchResult reduction) {
+        if (reduction instanceof SearchResult.Orientable) {
+            return "orientable";
+        }
+        if (reduction instanceof SearchResult.Unknown) {
+            return "unknown";
+        }
+        throw new IllegalArgumentException("a found core has its own columns");
     }
 }

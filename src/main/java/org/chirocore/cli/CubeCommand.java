@@ -133,7 +133,21 @@ final class CubeCommand implements Callable<Integer> {
 
     private void printOrbits(PrintWriter out, Shard split) {
         long[] candidates = {0};
-        List<HyperplaneOrbit> found = HyperplaneOrbits.part(n, split.index(), split.count(), v -> candidates[0] += v);
+        PrintWriter err = spec.commandLine().getErr();
+        boolean progress = System.console() != null;
+        long started = System.nanoTime();
+        List<HyperplaneOrbit> found = HyperplaneOrbits.part(n, split.index(), split.count(),
+                (m, done, total, orbitsSoFar, normals) -> {
+                    if (done == total) {
+                        candidates[0] += normals;
+                    }
+                    if (progress) {
+                        // whole lines on a terminal, like a family run's progress
+                        err.println(String.format("%7.1f s  %d-cube: %d of %d search prefixes, %d orbits so far",
+                                (System.nanoTime() - started) / 1e9, m, done, total, orbitsSoFar));
+                        err.flush();
+                    }
+                });
         out.println("hyperplane orbits" + (part == null ? "" : " in part " + split.index() + "/" + split.count()) + ": "
                 + found.size() + " (" + found.stream().mapToLong(HyperplaneOrbit::orbitSize).sum() + " hyperplanes; "
                 + candidates[0] + " candidate normals searched)");

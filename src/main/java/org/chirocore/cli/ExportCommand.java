@@ -1,7 +1,6 @@
 package org.chirocore.cli;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -32,7 +31,7 @@ final class ExportCommand implements Callable<Integer> {
     @Parameters(paramLabel = "CERT", description = "A certificate written by reduce.")
     private Path certificate;
 
-    @Option(names = "--out-dir", paramLabel = "DIR", required = true, description = "An existing directory.")
+    @Option(names = "--out-dir", paramLabel = "DIR", required = true, description = "The output directory, created when missing.")
     private Path outDir;
 
     @Mixin
@@ -44,9 +43,6 @@ final class ExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (!Files.isDirectory(outDir)) {
-            throw new BadInputException(outDir + ": not an existing directory", null);
-        }
         String name = CertificateWriter.baseName(certificate);
         output.checkDirectory(outDir, List.of(certificate),
                 lrat ? List.of(name + ".cnf", name + ".drat", name + ".lrat") : List.of(name + ".cnf", name + ".drat"));

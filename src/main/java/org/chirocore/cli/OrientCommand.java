@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
@@ -71,6 +72,10 @@ final class OrientCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (witnessSigns && witnessOut == null) {
+            throw new ParameterException(spec.commandLine(),
+                    "--witness-signs chooses the form of the witness file: it needs --witness-out.");
+        }
         output.checkFiles(Arrays.asList(file, start), witnessOut);
         Matroid m = Inputs.read(file).matroid();
         OrientabilityDecider search = new LazySatDecider(budget.budget());

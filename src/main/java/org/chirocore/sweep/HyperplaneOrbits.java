@@ -3,7 +3,6 @@ package org.chirocore.sweep;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.function.LongConsumer;
 
 /**
  * The hyperplanes spanned by vertices of the real n-cube up to the cube's symmetry group B_n
@@ -50,6 +49,32 @@ public final class HyperplaneOrbits {
 
     private static final long PRIME = 2_147_483_647L;
 
+    /**
+     * Search prefixes between two progress reports inside one m-cube: 211 reports over the
+     * 8-cube's 55.5 million prefixes (several seconds apart), which otherwise pass in silence for
+     * minutes; the 7-cube (377 thousand prefixes, seconds) gets one.
+     */
+    static final long REPORT_PREFIXES = 1L << 18;
+
+    /** Receives the progress of an enumeration. */
+    @FunctionalInterface
+    public interface Listener {
+        /** A listener that ignores everything. */
+        Listener SILENT = (m, done, total, orbits, candidates) -> { };
+
+        /**
+         * Progress inside the m-cube's search, every {@value #REPORT_PREFIXES} search prefixes
+         * and once when the m-cube is done ({@code done == total}).
+         *
+         * @param m the dimension of the m-cube being searched
+         * @param done search prefixes (a_1, …, a_{m−2}) passed so far, counting those a part skips
+         * @param total the m-cube's number of search prefixes
+         * @param orbits orbits found so far, in this and the smaller m-cubes
+         * @param candidates normals visited so far in this m-cube
+         */
+        void searched(int m, long done, long total, int orbits, long candidates);
+    }
+
     private HyperplaneOrbits() {
     }
 
@@ -57,17 +82,16 @@ public final class HyperplaneOrbits {
      * The orbits of hyperplanes of the real n-cube, in order of the number of nonzero entries of
      * the normal and then lexicographically by (a, b).
      *
-     * @param candidates receives, after each m-cube, the number of normals a visited there
-     *     (progress for long runs)
+     * @param listener receives the progress (for long runs)
      * @throws IllegalArgumentException when n is not between 1 and {@link #MAX_DIMENSION}
      */
-    public static List<HyperplaneOrbit> of(int n, LongConsumer candidates) {
-        return part(n, 0, 1, candidates);
+    public static List<HyperplaneOrbit> of(int n, Listener listener) {
+        return part(n, 0, 1, listener);
     }
 
-    /** The orbits of hyperplanes of the real n-cube (see {@link #of(int, LongConsumer)}). */
+    /** The orbits of hyperplanes of the real n-cube (see {@link #of(int, Listener)}). */
     public static List<HyperplaneOrbit> of(int n) {
-        return of(n, visited -> { });
+        return of(n, Listener.SILENT);
     }
 
     /**
@@ -79,7 +103,12 @@ public final class HyperplaneOrbits {
      *
      * @throws IllegalArgumentException when n is out of range or not 0 ≤ index &lt; count
      */
-    public static List<HyperplaneOrbit> part(int n, int index, int count, LongConsumer candidates) {
+    public static List<HyperplaneOrbit> part(int n, int index, int count, Listener listener) {
+        return part(n, index, count, listener, REPORT_PREFIXES);
+    }
+
+    /** As {@link #part(int, int, int, Listener)}, reporting every {@code every} search prefixes. */
+    static List<HyperplaneOrbit> part(int n, int index, int count, Listener listener, long every) {
         checkDimension(n);
         if (count < 1 || index < 0 || index >= count) {
             throw new IllegalArgumentException("A part i of k needs k >= 1 and 0 <= i < k, not " + index + " of "
@@ -87,11 +116,26 @@ public final class HyperplaneOrbits {
         }
         List<HyperplaneOrbit> out = new ArrayList<>();
         for (int m = 1; m <= n; m++) {
-            Search s = new Search(n, m, out, index, count);
+            Search s = new Search(n, m, out, index, count, listener, every);
             s.extend(0, 0);
-            candidates.accept(s.visited);
+            listener.searched(m, s.prefixes, s.totalPrefixes, out.size(), s.visited);
         }
         return List.copyOf(out);
+    }
+
+    /**
+     * The number of search prefixes of the m-cube: the ascending (a_1, …, a_{m−2}) with entries in
+     * 1..D, D = {@link #MAX_ENTRY}[m], that is the multisets of size m − 2 of D values, C(D + m − 3, m − 2)
+     * (common practice); one (empty) prefix for m ≤ 2.
+     */
+    static long prefixCount(int m) {
+        long k = Math.max(m - 2, 0);
+        long top = MAX_ENTRY[m] + k - 1;
+        long c = 1;
+        for (long i = 0; i < k; i++) {
+            c = c * (top - i) / (i + 1); // exact: a product of i + 1 consecutive integers is divisible by (i + 1)!
+        }
+        return c;
     }
 
     /**
@@ -182,16 +226,22 @@ public final class HyperplaneOrbits {
         private final long[][] echelon;
         private final int part;
         private final int parts;
+        private final Listener listener;
+        private final long every;
+        private final long totalPrefixes;
         /** The number of prefixes of length m − 2 met so far, which decides their part. */
         private long prefixes;
         private long visited;
 
-        Search(int n, int m, List<HyperplaneOrbit> out, int part, int parts) {
+        Search(int n, int m, List<HyperplaneOrbit> out, int part, int parts, Listener listener, long every) {
             this.n = n;
             this.m = m;
             this.out = out;
             this.part = part;
             this.parts = parts;
+            this.listener = listener;
+            this.every = every;
+            this.totalPrefixes = prefixCount(m);
             this.a = new int[m];
             this.values = new int[m + 1][];
             for (int p = 0; p <= m; p++) {
@@ -206,8 +256,15 @@ public final class HyperplaneOrbits {
 
         /** Chooses a_{p+1} ≥ a_p given the first p entries with sum {@code sum}. */
         void extend(int p, int sum) {
-            if (p == Math.max(m - 2, 0) && prefixes++ % parts != part) {
-                return;
+            if (p == Math.max(m - 2, 0)) {
+                long index = prefixes++;
+                if (index > 0 && index % every == 0) {
+                    // the prefixes before this one are done
+                    listener.searched(m, index, totalPrefixes, out.size(), visited);
+                }
+                if (index % parts != part) {
+                    return;
+                }
             }
             if (p == m) {
                 visited++;

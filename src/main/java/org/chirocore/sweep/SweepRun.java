@@ -148,7 +148,9 @@ public final class SweepRun {
     private SweepLevel level(int n) throws IOException {
         long start = System.nanoTime();
         listener.line("n = " + n + ": enumerating hyperplane orbits");
-        List<HyperplaneOrbit> orbits = HyperplaneOrbits.of(n);
+        List<HyperplaneOrbit> orbits = HyperplaneOrbits.of(n, (m, done, total, found, normals) -> listener.line("n = "
+                + n + ": hyperplane orbits, " + m + "-cube: " + done + " of " + total + " search prefixes, " + found
+                + " orbits so far (" + millis(start) + " ms)"));
         long hyperplanes = orbits.stream().mapToLong(HyperplaneOrbit::orbitSize).sum();
         listener.line("n = " + n + ": " + orbits.size() + " hyperplane orbits, " + hyperplanes + " hyperplanes ("
                 + millis(start) + " ms); testing general position");

@@ -86,6 +86,8 @@ class BadInputCorpusTest {
                 bad(2, "colour.json: unknown field \"colour\"", "orient @colour.json"),
                 bad(2, "--conflicts", "orient " + FANO + " --conflicts lots"),
                 bad(2, "Missing required parameter: 'FILE'", "orient"),
+                bad(2, "--witness-signs chooses the form of the witness file: it needs --witness-out",
+                        "orient " + FANO + " --witness-signs"),
                 bad(2, "fano.json: is also an input", "orient @fano.json --witness-out @fano.json"),
                 bad(2, "fano.json: is also an input", "orient " + FANO + " --start @fano.json --witness-out @fano.json"),
                 bad(2, "existing.json: the file already exists; give --force", "orient " + FANO
@@ -115,7 +117,7 @@ class BadInputCorpusTest {
                 bad(2, "same file", "explain " + FANO_CERT + " --out @e.txt --certificate-out @e.txt"),
                 bad(1, "notjson.json: REJECTED", "explain @notjson.json"),
                 // export
-                bad(2, "nodir: not an existing directory", "export " + FANO_CERT + " --out-dir @nodir"),
+                bad(2, "existing.json/out: cannot be created", "export " + FANO_CERT + " --out-dir @existing.json/out"),
                 bad(2, "fano.cert.cnf: the file already exists; give --force", "export " + FANO_CERT + " --out-dir @exported"),
                 bad(2, "notjson.json", "export @notjson.json --out-dir @noshard"),
                 // cube

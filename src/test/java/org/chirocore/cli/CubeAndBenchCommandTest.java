@@ -5,6 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
 
+import org.chirocore.orient.Orientability;
+import org.chirocore.orient.SolveStats;
+import org.chirocore.search.SearchResult;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -75,6 +78,18 @@ class CubeAndBenchCommandTest {
         assertTrue(lines[0].trim().startsWith("n  elements  rank  decide ms  reduce ms  core elements"), lines[0]);
         // n = 3: 7 elements of rank 3 reduce to the Fano plane itself (7 elements, rank 3, 28 bases).
         assertTrue(lines[1].matches(" 3\\s+7\\s+3\\s+\\d+\\s+\\d+\\s+7\\s+3\\s+28\\s+\\d+"), lines[1]);
+    }
+
+    /**
+     * An unknown decision or reduction is shown as "unknown", never as a time or a verdict
+     * (common practice: a run out of budget decides nothing); the cells follow the result's type.
+     */
+    @Test
+    void benchCellsFollowTheResultType() {
+        SolveStats stats = new SolveStats(1, 2, 3, 4, 5, 42);
+        assertEquals("unknown", BenchCommand.decideColumn(new Orientability.Unknown("time limit", stats)));
+        assertEquals("42", BenchCommand.decideColumn(new Orientability.NonOrientable(stats)));
+        assertEquals("unknown", BenchCommand.reductionColumn(new SearchResult.Unknown("time limit")));
     }
 
     /**

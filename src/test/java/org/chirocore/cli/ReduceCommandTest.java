@@ -123,15 +123,32 @@ class ReduceCommandTest {
                 .requireString("drat"), Files.readString(exported.resolve("f.drat")));
     }
 
+    /** Like the other writers, export creates a missing output directory, and still never replaces a file unasked. */
+    @Test
+    void exportCreatesAMissingDirectoryButReplacesNothingWithoutForce() throws IOException {
+        assertEquals(0, CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out",
+                out("f.json")).exit());
+        Path exported = dir.resolve("new").resolve("export");
+        CliRun run = CliRun.of("export", out("f.json"), "--out-dir", exported.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(Files.isRegularFile(exported.resolve("f.cnf")));
+        assertTrue(Files.isRegularFile(exported.resolve("f.drat")));
+        CliRun again = CliRun.of("export", out("f.json"), "--out-dir", exported.toString());
+        assertEquals(2, again.exit(), again.err());
+        assertTrue(again.err().contains("f.cnf: the file already exists; give --force"), again.err());
+        assertEquals(0, CliRun.of("export", out("f.json"), "--out-dir", exported.toString(), "--force").exit());
+    }
+
     @Test
     void exportRefusesATamperedCertificate() throws IOException {
         assertEquals(0, CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out",
                 out("f.json")).exit());
         Path f = dir.resolve("f.json");
         Files.writeString(f, Files.readString(f).replace("\"minor-minimal non-orientable\"", "\"orientable\""));
-        CliRun run = CliRun.of("export", f.toString(), "--out-dir", dir.toString());
+        CliRun run = CliRun.of("export", f.toString(), "--out-dir", dir.resolve("missing").toString());
         assertEquals(2, run.exit(), run.err());
         assertTrue(run.err().contains("digest"), run.err());
+        assertFalse(Files.exists(dir.resolve("missing")), "nothing is created for a refused certificate");
     }
 
     @ParameterizedTest

@@ -21,6 +21,9 @@ class SweepCommandTest {
         assertEquals(0, run.exit(), run.err());
         assertTrue(run.out().contains("n = 3: 3 hyperplane orbits, 20 hyperplanes, 1 general-position pairs"), run.out());
         // progress: whole lines on standard error, even when it is not a terminal
+        // progress inside the hyperplane-orbit enumeration: the 3-cube's two search prefixes (a_1 = 1, 2)
+        assertTrue(run.err().contains("n = 3: hyperplane orbits, 3-cube: 2 of 2 search prefixes, 3 orbits so far"),
+                run.err());
         assertTrue(run.err().contains("n = 3: pair 1 of 1 n3_a1-1-1_b1_o111: pulled non-orientable, contracted "
                 + "non-orientable, core 7 elements rank 3 (F7)"), run.err());
         assertTrue(Files.exists(out.resolve("sweep.json")) && Files.exists(out.resolve("sweep.md")));

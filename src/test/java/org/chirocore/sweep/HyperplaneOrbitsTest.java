@@ -63,13 +63,40 @@ class HyperplaneOrbitsTest {
         assertEquals(listed, stated);
     }
 
+    /**
+     * Progress inside each m-cube: with a report after every prefix, the reports count the prefixes
+     * 1, 2, … up to the total, which is the number of multisets of size m − 2 of the A003432(m)
+     * possible entries (stars and bars, common practice), and the search, which counts for itself,
+     * ends each m-cube on exactly that total; the orbits found grow to the whole list, in every part.
+     */
+    @ParameterizedTest(name = "part {0} of 3")
+    @ValueSource(ints = {0, 1, 2})
+    void progressCountsThePrefixesOfEachCube(int part) {
+        List<long[]> reports = new java.util.ArrayList<>();
+        List<HyperplaneOrbit> found = HyperplaneOrbits.part(6, part, 3,
+                (m, done, total, orbits, candidates) -> reports.add(new long[] {m, done, total, orbits, candidates}), 1);
+        long[] multisets = {0, 1, 1, 2, 6, 35, 495}; // C(D + m - 3, m - 2) for D = 1, 1, 2, 3, 5, 9
+        int i = 0;
+        long orbits = 0;
+        for (int m = 1; m <= 6; m++) {
+            for (long done = 1; done <= multisets[m]; done++) {
+                long[] r = reports.get(i++);
+                assertEquals(List.of((long) m, done, multisets[m]), List.of(r[0], r[1], r[2]));
+                assertTrue(r[3] >= orbits, "orbits found never decrease");
+                orbits = r[3];
+            }
+        }
+        assertEquals(i, reports.size());
+        assertEquals(found.size(), orbits);
+    }
+
     /** The parts of a split enumeration are disjoint and together give the whole, in order. */
     @ParameterizedTest(name = "n = {0}")
     @ValueSource(ints = {2, 5, 6})
     void partsMakeTheWhole(int n) {
         List<HyperplaneOrbit> joined = new java.util.ArrayList<>();
         for (int i = 0; i < 3; i++) {
-            joined.addAll(HyperplaneOrbits.part(n, i, 3, visited -> { }));
+            joined.addAll(HyperplaneOrbits.part(n, i, 3, HyperplaneOrbits.Listener.SILENT));
         }
         java.util.Comparator<HyperplaneOrbit> order = java.util.Comparator.comparing(o -> o.canonicalForm().toString());
         List<HyperplaneOrbit> whole = new java.util.ArrayList<>(HyperplaneOrbits.of(n));
