@@ -159,14 +159,12 @@ public final class OrientationSession {
             if (budget.rounds() > 0 && round > budget.rounds()) {
                 return new OutOfBudget("the limit of " + budget.rounds() + " solve-and-check rounds was reached");
             }
-            long remaining = budget.millis() == 0 ? 0 : budget.millis() - (System.currentTimeMillis() - started);
-            if (budget.millis() > 0) {
-                if (remaining <= 0) {
-                    return new OutOfBudget("the time limit of " + budget.millis() + " ms ran out");
-                }
-                if (budget.conflictsPerCall() == 0) {
-                    solver.setTimeoutMs(remaining);
-                }
+            long remaining = budget.remaining(started);
+            if (remaining < 0) {
+                return new OutOfBudget(budget.timeReason());
+            }
+            if (remaining > 0 && budget.conflictsPerCall() == 0) {
+                solver.setTimeoutMs(remaining);
             }
             rounds++;
             boolean sat;
@@ -175,7 +173,7 @@ public final class OrientationSession {
             } catch (TimeoutException e) {
                 return new OutOfBudget(budget.conflictsPerCall() > 0
                         ? "a solver call exceeded " + budget.conflictsPerCall() + " conflicts"
-                        : "the time limit of " + budget.millis() + " ms ran out");
+                        : budget.timeReason());
             } finally {
                 // sat4j's statistics accumulate over the solver's calls, which are all this session's.
                 conflicts = conflictCount();

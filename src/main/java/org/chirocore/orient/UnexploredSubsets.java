@@ -116,10 +116,14 @@ public final class UnexploredSubsets {
         if (contradiction) {
             return new Exhausted();
         }
+        long remaining = budget.remaining(System.currentTimeMillis());
+        if (remaining < 0) {
+            return new OutOfBudget(budget.timeReason());
+        }
         if (budget.conflictsPerCall() > 0) {
             solver.setTimeoutOnConflicts(budget.conflictsPerCall());
-        } else if (budget.millis() > 0) {
-            solver.setTimeoutMs(budget.millis());
+        } else if (remaining > 0) {
+            solver.setTimeoutMs(remaining);
         }
         calls++;
         try {

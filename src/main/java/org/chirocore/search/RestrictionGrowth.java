@@ -25,7 +25,8 @@ import org.chirocore.orient.OrientationSession;
 final class RestrictionGrowth {
     /**
      * The grown restriction: non-orientable, or the whole ground set when growth reached it
-     * without a quick proof; null when the restriction outgrew what can be enumerated.
+     * without a quick proof; null when the restriction outgrew what can be enumerated or the
+     * deadline of the settings' budget passed.
      */
     record Grown(int[] elements, int decisions) {
     }
@@ -67,12 +68,13 @@ final class RestrictionGrowth {
             }
         }
         int decisions = 0;
-        while (s.length <= ExplicitMatroid.MAX_ELEMENTS
+        Budget budget = GROWTH_BUDGET.until(settings.budget().deadline());
+        while (budget.remaining(System.currentTimeMillis()) >= 0 && s.length <= ExplicitMatroid.MAX_ELEMENTS
                 && ElementSets.binomial(s.length, m.rank()) <= BasisIndex.MAX_SUBSETS) {
             progress.report("growing a non-orientable restriction", s.length, m.rank(), decisions);
             Minor restriction = Minor.restriction(m, s);
             BasisIndex index = BasisIndex.of(restriction);
-            OrientationSession.Outcome outcome = new OrientationSession(index, true, GROWTH_BUDGET)
+            OrientationSession.Outcome outcome = new OrientationSession(index, true, budget)
                     .solve(ElementSets.allMask(s.length));
             decisions++;
             if (outcome instanceof OrientationSession.Unsatisfiable u) {

@@ -88,11 +88,17 @@ public final class SteeredSearch {
     /** Mutable figures of one search. */
     private static final class Tally {
         final long started = System.currentTimeMillis();
+        /** When the total time limit ends (epoch ms), 0 for none; every solver call's budget carries it. */
+        final long deadline;
         int decisions;
         int contractionSets;
         int restrictions;
         int deadEnds;
         String incomplete;
+
+        Tally(long totalMillis) {
+            deadline = totalMillis == 0 ? 0 : started + totalMillis;
+        }
     }
 
     /**
@@ -103,7 +109,7 @@ public final class SteeredSearch {
      */
     public Result search(Matroid input) {
         constraints.validate(input);
-        Tally tally = new Tally();
+        Tally tally = new Tally(totalMillis);
         int[] keep = indices(input, constraints.keep());
         int[] avoid = indices(input, constraints.avoid());
         List<Integer> candidates = contractionCandidates(input, keep, avoid);
@@ -193,8 +199,8 @@ public final class SteeredSearch {
             }
         }
         long required = ElementSets.mask(indices(space, constraints.keep()));
-        RestrictionExplorer explorer = new RestrictionExplorer(space, required, settings.budget(),
-                Optional.of(SEED_BUDGET), false, settings.seed() + round);
+        RestrictionExplorer explorer = new RestrictionExplorer(space, required, settings.budget().until(tally.deadline),
+                Optional.of(SEED_BUDGET.until(tally.deadline)), false, settings.seed() + round);
         try {
             while (!outOfTime(tally)) {
                 RestrictionExplorer.Step step = explorer.next();
@@ -230,8 +236,8 @@ public final class SteeredSearch {
         tally.incomplete = "a minor was too large to enumerate, so only grown restrictions of it were searched";
         Set<String> start = new LinkedHashSet<>(constraints.keep());
         start.addAll(settings.focus());
-        SearchSettings growth = new SearchSettings(settings.seed() + round, settings.strategy(), settings.budget(),
-                new ArrayList<>(start));
+        SearchSettings growth = new SearchSettings(settings.seed() + round, settings.strategy(),
+                settings.budget().until(tally.deadline), new ArrayList<>(start));
         RestrictionGrowth.Grown grown = new RestrictionGrowth(n0, growth, progress).grow();
         tally.decisions += grown.decisions();
         if (grown.elements() == null) {
@@ -251,10 +257,11 @@ public final class SteeredSearch {
             RestrictionExplorer explorer, Tally tally) {
         ExplicitMatroid core = ExplicitMatroid.of(Minor.restriction(space, ElementSets.elements(set)));
         progress.report("checking a minimal non-orientable restriction", core.size(), core.rank(), tally.decisions);
-        MinimalityDecider proof = new MinimalityDecider(new LazySatDecider(settings.budget()), Strategy.CONTRACT_FIRST,
+        Budget budget = settings.budget().until(tally.deadline);
+        MinimalityDecider proof = new MinimalityDecider(new LazySatDecider(budget), Strategy.CONTRACT_FIRST,
                 Progress.SILENT);
         MinimalityDecider.Result result = proof.decide(core, new OrientationSession(BasisIndex.of(core), true,
-                settings.budget()), range(core.size()));
+                budget), range(core.size()));
         tally.decisions += proof.decisions();
         if (result instanceof MinimalityDecider.Minimal minimal) {
             List<String> deleted = new ArrayList<>();
@@ -279,7 +286,7 @@ public final class SteeredSearch {
         } else {
             tally.deadEnds++;
             MinimalityDecider.NonOrientableContraction c = (MinimalityDecider.NonOrientableContraction) result;
-            OrientationSession.Outcome o = new OrientationSession(BasisIndex.of(c.minor()), true, settings.budget())
+            OrientationSession.Outcome o = new OrientationSession(BasisIndex.of(c.minor()), true, budget)
                     .solve(ElementSets.allMask(c.minor().size()));
             tally.decisions++;
             if (o instanceof OrientationSession.Unsatisfiable u) {
@@ -301,7 +308,7 @@ public final class SteeredSearch {
     }
 
     private boolean outOfTime(Tally tally) {
-        return totalMillis > 0 && System.currentTimeMillis() - tally.started > totalMillis;
+        return tally.deadline > 0 && System.currentTimeMillis() >= tally.deadline;
     }
 
     private static String summary(Tally tally) {

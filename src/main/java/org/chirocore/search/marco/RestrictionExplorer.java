@@ -163,6 +163,12 @@ public final class RestrictionExplorer {
             return session.solve(set);
         }
         int[] elements = ElementSets.elements(set);
+        if (m.rank(elements) < m.rank()) {
+            // N|set contains no basis of N, hence no relation: every sign vector satisfies it.
+            byte[] signs = new byte[session.index().basisCount()];
+            Arrays.fill(signs, (byte) 1);
+            return new OrientationSession.Satisfiable(signs);
+        }
         OrientationSession local = new OrientationSession(BasisIndex.of(Minor.restriction(m, elements)), true,
                 seedBudget.get());
         OrientationSession.Outcome o = local.solve(ElementSets.allMask(elements.length));
