@@ -6,8 +6,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
-import org.chirocore.check.Escaping;
 import org.chirocore.check.CompletenessCheck;
+import org.chirocore.check.Escaping;
 import org.chirocore.check.VerifierMain;
 import org.chirocore.matroid.Catalogue;
 import org.chirocore.report.CertificateSummary;

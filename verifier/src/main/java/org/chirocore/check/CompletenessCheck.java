@@ -26,8 +26,9 @@ import org.chirocore.check.VerificationReport.Status;
  * contains a listed S. With the symmetries checked to be automorphisms of M and every
  * independent set of size r − R mapped by one of them onto a listed C, every minor-minimal
  * non-orientable minor of rank R of M is, up to an automorphism, (M/C)|S for a listed C and a
- * listed S, provided each listed S is non-orientable: that is checked for the images of the
- * certified class cores under the symmetries and reported as not run for the others.
+ * listed S, provided each listed S is non-orientable. That, and that S is a core of a listed
+ * class, is checked for the images of the certified class cores under the symmetries; for the
+ * other listed S it is the producer's word and reported as not run.
  *
  * <p>Nothing here is shared with the producer: M is rebuilt with {@link ProvenanceCheck}'s own
  * arithmetic, witnesses go through {@link ChirotopeCheck}, certificates through
@@ -47,9 +48,9 @@ public final class CompletenessCheck {
     static final String WITNESSES = "witnesses";
     static final String DUALITY = "transversal duality";
     static final String CERTIFICATES = "certificates";
-    static final String NON_ORIENTABLE = "minimal sets non-orientable";
+    static final String ACCOUNTED = "minimal sets accounted for";
     static final List<String> CHECKS = List.of(FORMAT, INPUT, SYMMETRY, COVERAGE, WITNESSES, DUALITY, CERTIFICATES,
-            NON_ORIENTABLE);
+            ACCOUNTED);
 
     private CompletenessCheck() {
     }
@@ -117,7 +118,7 @@ public final class CompletenessCheck {
                 case WITNESSES -> this::witnesses;
                 case DUALITY -> this::duality;
                 case CERTIFICATES -> this::certificates;
-                default -> this::nonOrientable;
+                default -> this::accounted;
             };
         }
 
@@ -456,7 +457,7 @@ public final class CompletenessCheck {
                     + "are listed minimal sets";
         }
 
-        String nonOrientable() throws Skipped {
+        String accounted() throws Skipped {
             int total = 0;
             int shown = 0;
             for (Entry e : entries) {
@@ -468,10 +469,11 @@ public final class CompletenessCheck {
                 }
             }
             if (shown < total) {
-                throw new Skipped(shown + " of the " + total + " listed minimal sets are images of certified cores under "
-                        + "the automorphisms; the non-orientability of the other " + (total - shown) + " is not checked");
+                throw new Skipped(shown + " of the " + total + " listed minimal sets are images of certified class cores "
+                        + "under a listed automorphism; for the other " + (total - shown) + ", that they are non-orientable "
+                        + "and either in a listed class or with a non-orientable single-element contraction is not checked");
             }
-            return "every listed minimal set is the image of a certified (non-orientable) core under a listed automorphism";
+            return "every listed minimal set is the image of a certified class core under a listed automorphism";
         }
 
         private boolean isImageOfCertified(long c, long s) {
