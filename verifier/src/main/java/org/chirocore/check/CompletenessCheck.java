@@ -35,7 +35,7 @@ import org.chirocore.check.VerificationReport.Status;
  * {@link CertificateVerifier}. Cost: C(n, r) rank evaluations, |group| · |bases| lookups,
  * |group| · C(n, r − R) set maps, the witnesses' relations, and one minimal-transversal
  * computation per contraction set (Berge's incremental method, bounded by
- * {@link Limits#MAX_TRANSVERSALS}).
+ * {@link VerifierLimits#MAX_TRANSVERSALS}).
  */
 public final class CompletenessCheck {
     /** The evidence's format name. */
@@ -123,15 +123,15 @@ public final class CompletenessCheck {
         }
 
         String format() throws IOException, Failure {
-            doc = JsonTree.parse(CertificateVerifier.readRegularFile(file, Limits.MAX_CERTIFICATE_BYTES)).asObject("the file");
+            doc = JsonTree.parse(CertificateVerifier.readRegularFile(file, VerifierLimits.MAX_CERTIFICATE_BYTES)).asObject("the file");
             doc.requireOnly(List.of("format", "version", "input", "labels", "ranks", "symmetry", "certificates",
                     "contractionSets"));
             if (!doc.requireString("format").equals(FORMAT_NAME) || doc.requireInt("version") != 1) {
                 throw new Failure("format must be \"" + FORMAT_NAME + "\" version 1");
             }
             JsonTree.Arr names = doc.requireArray("labels");
-            if (names.size() > Limits.MAX_ELEMENTS) {
-                throw new Failure("at most " + Limits.MAX_ELEMENTS + " elements, not " + names.size());
+            if (names.size() > VerifierLimits.MAX_ELEMENTS) {
+                throw new Failure("at most " + VerifierLimits.MAX_ELEMENTS + " elements, not " + names.size());
             }
             labels = new ArrayList<>();
             for (int i = 0; i < names.size(); i++) {
@@ -215,8 +215,8 @@ public final class CompletenessCheck {
                 throw new Failure("the labels are not those of the rebuilt input, in its order");
             }
             int n = labels.size();
-            if (ProvenanceCheck.binomial(n, rank) > Limits.MAX_CANDIDATES) {
-                throw new Failure("C(" + n + ", " + rank + ") subsets exceed the verifier's limit of " + Limits.MAX_CANDIDATES);
+            if (ProvenanceCheck.binomial(n, rank) > VerifierLimits.MAX_CANDIDATES) {
+                throw new Failure("C(" + n + ", " + rank + ") subsets exceed the verifier's limit of " + VerifierLimits.MAX_CANDIDATES);
             }
             int base = source.rank().applyAsInt(source.contractedFirst());
             bases = new HashSet<>();
@@ -240,7 +240,7 @@ public final class CompletenessCheck {
             s.requireOnly(List.of("kind", "permutations"));
             JsonTree.Arr ps = s.requireArray("permutations");
             int n = labels.size();
-            if ((long) ps.size() * bases.size() > Limits.MAX_VECTOR_TESTS) {
+            if ((long) ps.size() * bases.size() > VerifierLimits.MAX_VECTOR_TESTS) {
                 throw new Failure(ps.size() + " permutations of " + bases.size() + " bases exceed the verifier's limit");
             }
             for (int i = 0; i < ps.size(); i++) {
@@ -284,7 +284,7 @@ public final class CompletenessCheck {
             long covered = 0;
             for (int r : ranks) {
                 int k = rank - r;
-                if (ProvenanceCheck.binomial(n, k) * group.size() > Limits.MAX_VECTOR_TESTS) {
+                if (ProvenanceCheck.binomial(n, k) * group.size() > VerifierLimits.MAX_VECTOR_TESTS) {
                     throw new Failure("C(" + n + ", " + k + ") sets times " + group.size()
                             + " permutations exceed the verifier's limit");
                 }
@@ -320,7 +320,7 @@ public final class CompletenessCheck {
                     long t = e.orientable().get(i);
                     int[] elements = elements(t);
                     List<Long> local = new ArrayList<>();
-                    if (ProvenanceCheck.binomial(elements.length, r) > Limits.MAX_CANDIDATES) {
+                    if (ProvenanceCheck.binomial(elements.length, r) > VerifierLimits.MAX_CANDIDATES) {
                         throw new Failure("a restriction on " + elements.length + " elements exceeds the verifier's limit");
                     }
                     if (elements.length >= r) {
@@ -395,8 +395,8 @@ public final class CompletenessCheck {
                         next.add(x | Long.lowestOneBit(s));
                     }
                 }
-                if (next.size() > Limits.MAX_TRANSVERSALS) {
-                    throw new Failure("more than " + Limits.MAX_TRANSVERSALS + " candidate transversals, the verifier's limit");
+                if (next.size() > VerifierLimits.MAX_TRANSVERSALS) {
+                    throw new Failure("more than " + VerifierLimits.MAX_TRANSVERSALS + " candidate transversals, the verifier's limit");
                 }
             }
             List<Long> sorted = new ArrayList<>(next);
@@ -430,7 +430,7 @@ public final class CompletenessCheck {
                 JsonTree.Obj content;
                 try {
                     content = JsonTree.parse(CertificateVerifier.readRegularFile(dir.resolve(name),
-                            Limits.MAX_CERTIFICATE_BYTES)).asObject(name).requireObject("content");
+                            VerifierLimits.MAX_CERTIFICATE_BYTES)).asObject(name).requireObject("content");
                 } catch (IOException ex) {
                     throw new Failure(name + ": cannot read: " + ex.getMessage());
                 }

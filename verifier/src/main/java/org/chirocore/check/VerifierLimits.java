@@ -6,7 +6,7 @@ package org.chirocore.check;
  * beyond a limit is rejected with a FAIL line naming the limit, never accepted unchecked.
  * Stored certificates are far inside every limit (the largest has 64 KB and 1 400 bases).
  */
-final class Limits {
+final class VerifierLimits {
     /** Largest certificate file read, in bytes; the size is checked before reading. */
     static final long MAX_CERTIFICATE_BYTES = 64L << 20;
     /** Largest proof read from a separate file, in bytes after decompression; the proof is streamed. */
@@ -44,6 +44,6 @@ final class Limits {
      */
     static final int MAX_TRANSVERSALS = 20_000;
 
-    private Limits() {
+    private VerifierLimits() {
     }
 }
