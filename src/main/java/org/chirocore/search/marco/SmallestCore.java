@@ -108,13 +108,7 @@ public final class SmallestCore {
         int cap = m.size();
         int calls = 0;
         for (int rank : CoreConstraints.none().ranks(m.rank())) {
-            int k = m.rank() - rank;
-            int[] c = ElementSets.range(k);
-            do {
-                long mask = ElementSets.mask(c);
-                if (m.rank(c) < k || !symmetry.isRepresentative(mask)) {
-                    continue;
-                }
+            for (int[] c : symmetry.independentRepresentatives(m, m.rank() - rank)) {
                 ExplicitMatroid n = ExplicitMatroid.of(new Minor(m, c, new int[0]));
                 List<String> contracted = Arrays.stream(c).mapToObj(m.labels()::get).toList();
                 progress.report("at most " + cap + " elements, contracting "
@@ -137,15 +131,15 @@ public final class SmallestCore {
                     } else {
                         long set = ((RestrictionExplorer.MinimalNonOrientable) step).set();
                         found++;
-                        best = new Best(c.clone(), n, set);
+                        best = new Best(c, n, set);
                         cap = Long.bitCount(set) - 1;
                         explorer.limitSize(cap);
                     }
                 }
                 calls += explorer.solverCalls();
-                searched.add(new Exhausted(contracted, cap + 1, orbitSize(mask), orientable, found,
-                        explorer.solverCalls()));
-            } while (ElementSets.nextCombination(c, m.size()));
+                searched.add(new Exhausted(contracted, cap + 1, symmetry.orbitSize(ElementSets.mask(c)), orientable,
+                        found, explorer.solverCalls()));
+            }
         }
         if (best == null) {
             return new NoneExists(searched);
@@ -172,9 +166,5 @@ public final class SmallestCore {
         MinimalCore found = new MinimalCore(core, contracted, deleted, minimal.witnesses(), settings,
                 new SearchStats(calls + 2 * core.size(), best.n().size(), millis));
         return new Found(found, searched, millis);
-    }
-
-    private int orbitSize(long set) {
-        return (int) symmetry.permutations().stream().map(p -> symmetry.apply(p, set)).distinct().count();
     }
 }
