@@ -102,7 +102,7 @@ final class ReduceCommand implements Callable<Integer> {
     private boolean smallest;
 
     @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
-            description = "With --rank, --keep or --avoid: wall-clock limit of the whole search, after which it "
+            description = "With --rank, --keep, --avoid or --smallest: wall-clock limit of the whole search, after which it "
                     + "answers unknown; 0 (default) for none.")
     private double totalTime;
 
@@ -174,7 +174,7 @@ final class ReduceCommand implements Callable<Integer> {
             throws IOException {
         ExplicitMatroid m = ExplicitMatroid.of(subject.matroid());
         Symmetry group = EnumerateCommand.group(subject, m, false);
-        SmallestCore.Result r = new SmallestCore(settings.search(subject), group, progress).search(m);
+        SmallestCore.Result r = new SmallestCore(settings.search(subject), group, Math.round(totalTime * 1000), progress).search(m);
         progress.finish();
         PrintWriter w = spec.commandLine().getOut();
         String from = Format.shape(m.rank(), m.size());

@@ -74,6 +74,9 @@ class ReduceSmallestCommandTest {
         assertTrue(r.out().startsWith("unknown:"), r.out());
         assertFalse(Files.exists(out));
         assertFalse(Files.exists(ReduceCommand.smallestRecord(out)));
+        CliRun late = run(CORNER4, "--smallest", "--total-time", "0.001", "--out", out.toString());
+        assertEquals(ExitCodes.UNKNOWN, late.exit(), late.err() + late.out());
+        assertFalse(Files.exists(out));
     }
 
     @Test

@@ -88,11 +88,18 @@ public final class SmallestCore {
     private final SearchSettings settings;
     private final Symmetry symmetry;
     private final Progress progress;
+    private final long totalMillis;
 
-    /** A search with these settings (seed, budget) and symmetry group. */
-    public SmallestCore(SearchSettings settings, Symmetry symmetry, Progress progress) {
+    /**
+     * A search with these settings (seed, budget per solver call) and symmetry group.
+     *
+     * @param totalMillis wall-clock limit of the whole search, checked between explorer steps,
+     *     after which it answers unknown; 0 for none
+     */
+    public SmallestCore(SearchSettings settings, Symmetry symmetry, long totalMillis, Progress progress) {
         this.settings = settings;
         this.symmetry = symmetry;
+        this.totalMillis = totalMillis;
         this.progress = progress;
     }
 
@@ -118,6 +125,9 @@ public final class SmallestCore {
                 int orientable = 0;
                 int found = 0;
                 while (true) {
+                    if (totalMillis > 0 && System.currentTimeMillis() - started > totalMillis) {
+                        return new Unknown("the total time of " + totalMillis + " ms ran out");
+                    }
                     RestrictionExplorer.Step step = explorer.next();
                     if (step instanceof RestrictionExplorer.OutOfBudget o) {
                         return new Unknown("the search after contracting " + contracted + " ran out of budget: "

@@ -24,7 +24,7 @@ import org.junit.jupiter.api.Test;
  */
 class SmallestCoreTest {
     private static SmallestCore.Result search(ExplicitMatroid m, Symmetry g) {
-        return new SmallestCore(new SearchSettings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED), g, Progress.SILENT)
+        return new SmallestCore(new SearchSettings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED), g, 0, Progress.SILENT)
                 .search(m);
     }
 
