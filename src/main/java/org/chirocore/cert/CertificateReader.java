@@ -1,7 +1,6 @@
 package org.chirocore.cert;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -47,7 +46,16 @@ public final class CertificateReader {
      * @throws JsonValueException when it is not of this format or its digest does not match
      */
     public static Json.Obj readChecked(Path certificate) throws IOException {
-        Json.Obj doc = Json.parse(Files.readString(certificate, StandardCharsets.UTF_8)).asObject("the certificate");
+        return parseChecked(Files.readAllBytes(certificate));
+    }
+
+    /**
+     * The certificate document in {@code bytes} (UTF-8), after checking its format, version and digest.
+     *
+     * @throws JsonValueException when it is not of this format or its digest does not match
+     */
+    public static Json.Obj parseChecked(byte[] bytes) {
+        Json.Obj doc = Json.parseUtf8(bytes).asObject("the certificate");
         if (!CertificateWriter.FORMAT.equals(doc.requireString("format"))
                 || doc.requireInt("version") != CertificateWriter.VERSION) {
             throw new JsonValueException("the file is not a " + CertificateWriter.FORMAT + " of version "

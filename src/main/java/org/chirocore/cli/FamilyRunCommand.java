@@ -44,9 +44,8 @@ final class FamilyRunCommand implements Callable<Integer> {
     @Mixin
     private OutputOptions output;
 
-    @Option(names = "--threads", paramLabel = "T", defaultValue = "1",
-            description = "How many members run at once (default: ${DEFAULT-VALUE}); the certificates do not depend on it.")
-    private int threads;
+    @Mixin
+    private ThreadsOption threads;
 
     @Option(names = "--shard", paramLabel = "i/k",
             description = "Run only the n of A..B with n mod k = i (0 <= i < k); join the shards' directories with "
@@ -57,13 +56,11 @@ final class FamilyRunCommand implements Callable<Integer> {
     public Integer call() {
         int[] bounds = family.bounds();
         family.checkOut();
-        if (threads < 1) {
-            throw new ParameterException(spec.commandLine(), "--threads must be at least 1, not " + threads + ".");
-        }
+        int threadCount = threads.threads();
         FamilyTable table;
         try {
             FamilyRun.Settings settings = new FamilyRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(),
-                    threads);
+                    threadCount);
             FamilyRun run = new FamilyRun(family.definition(), family.out(), settings, family.console());
             output.checkReplacing(run.otherRun());
             table = run.run(bounds[0], bounds[1], shard());

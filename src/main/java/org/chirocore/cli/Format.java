@@ -37,13 +37,22 @@ final class Format {
                 + Catalogue.identify(core).map(n -> " (" + n.symbol() + ")").orElse("");
     }
 
-    /** The labels separated by spaces, or "none". */
     /** "the Fano plane F7 (source)", or says that the catalogue has no such matroid. */
     static String named(Optional<NamedMatroid> name) {
         return name.map(n -> n.title() + " (" + n.source() + ")").orElse("not in the catalogue of named matroids");
     }
 
+    /** The labels in sorted order separated by spaces, or "none". */
     static String labels(List<String> labels) {
-        return labels.isEmpty() ? "none" : String.join(" ", labels);
+        return labels.isEmpty() ? "none" : String.join(" ", labels.stream().sorted().toList());
+    }
+
+    /**
+     * The deleted set D of a path M/C\D to a core: "all other elements (|D|)" when D is everything
+     * of M outside the core and C (as it is after a search), otherwise its sorted labels.
+     */
+    static String deleted(List<String> deleted, int coreSize, int contractedSize, int inputSize) {
+        return !deleted.isEmpty() && coreSize + contractedSize + deleted.size() == inputSize
+                ? "all other elements (" + deleted.size() + ")" : labels(deleted);
     }
 }

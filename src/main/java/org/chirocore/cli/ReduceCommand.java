@@ -149,7 +149,7 @@ final class ReduceCommand implements Callable<Integer> {
         PrintWriter w = spec.commandLine().getOut();
         String from = Format.shape(input.matroid().rank(), input.matroid().size());
         if (outcome instanceof CertifiedReduction.Verified v) {
-            summarise(w, from, v);
+            summarise(w, from, input.matroid().size(), v);
             return ExitCodes.OK;
         }
         if (outcome instanceof CertifiedReduction.Orientable o) {
@@ -242,14 +242,15 @@ final class ReduceCommand implements Callable<Integer> {
     }
 
 
-    private static void summarise(PrintWriter w, String from, CertifiedReduction.Verified v) {
+    private static void summarise(PrintWriter w, String from, int inputSize, CertifiedReduction.Verified v) {
         Certificate certificate = v.certificate();
         ExplicitMatroid core = certificate.core();
         w.println("non-orientable core: " + Format.shape(core.rank(), core.size(), core.basisCount()) + " (from "
                 + from + ")");
         w.println("isomorphism class: " + Format.named(Catalogue.identify(core)));
         w.println("contracted: " + Format.labels(certificate.provenance().contracted()));
-        w.println("deleted: " + Format.labels(certificate.provenance().deleted()));
+        w.println("deleted: " + Format.deleted(certificate.provenance().deleted(), core.size(),
+                certificate.provenance().contracted().size(), inputSize));
         w.println("witnesses: " + 2 * certificate.minimality().size()
                 + " (every single-element deletion and contraction is orientable)");
         if (certificate.discovery() instanceof Discovery.Searched s) {

@@ -44,13 +44,11 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "The output directory (created if missing).")
     private Path out;
 
-    @Option(names = "--threads", paramLabel = "T", defaultValue = "1",
-            description = "How many pairs run at once (default: ${DEFAULT-VALUE}); the certificates do not depend on it.")
-    private int threads;
+    @Mixin
+    private ThreadsOption threads;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "0",
-            description = "Seed of every search (default: ${DEFAULT-VALUE}).")
-    private long seed;
+    @Mixin
+    private SeedOption seed;
 
     @Option(names = "--shard", paramLabel = "i/k", defaultValue = "0/1",
             description = "Decide only the pairs whose index is i mod k (0 <= i < k); join the shards with sweep-merge.")
@@ -62,9 +60,7 @@ final class SweepCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         int[] bounds = Converters.range(spec, "--n", range);
-        if (threads < 1) {
-            throw new ParameterException(spec.commandLine(), "--threads must be at least 1, not " + threads + ".");
-        }
+        int threadCount = threads.threads();
         Shard part;
         try {
             part = Shard.parse(shard);
@@ -87,7 +83,7 @@ final class SweepCommand implements Callable<Integer> {
         };
         SweepResult result;
         try {
-            result = new SweepRun(out, new SweepRun.Settings(seed, Strategy.CONTRACT_FIRST, budget.budget(), threads,
+            result = new SweepRun(out, new SweepRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(), threadCount,
                     part), progress).run(bounds[0], bounds[1]);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot write the sweep's files: " + IoMessages.plain(e), e);

@@ -6,7 +6,6 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
 
@@ -50,7 +49,7 @@ public record CertificateSummary(String file, String contentSha256, String fileS
     public static CertificateSummary read(Path file) {
         try {
             byte[] bytes = Files.readAllBytes(file);
-            Json.Obj cert = Json.parseUtf8(bytes).asObject("certificate");
+            Json.Obj cert = CertificateReader.parseChecked(bytes);
             Json.Obj content = cert.requireObject("content");
             return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), Sha256.hex(bytes),
                     CertificateReader.core(content.requireObject("core")), origin(content.requireObject("provenance")),

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 
 /**
- * The producer's limits ({@code matroid.Limits}) and the verifier's ({@code check.Limits}) are
+ * The producer's limits ({@code matroid.Limits}) and the verifier's ({@code check.VerifierLimits}) are
  * declared apart, so that the verifier shares no code with the producer; this test keeps them in
  * agreement: whatever the producer accepts to build and certify, the verifier can rebuild and check.
  */
@@ -14,21 +14,21 @@ class LimitsAgreementTest {
 
     @Test
     void theVerifierRebuildsEveryCubeTheProducerBuilds() {
-        assertEquals(org.chirocore.matroid.Limits.CUBE_DIMENSION, Limits.MAX_CUBE);
+        assertEquals(org.chirocore.matroid.Limits.CUBE_DIMENSION, VerifierLimits.MAX_CUBE);
     }
 
     @Test
     void theVerifierHoldsEveryCoreTheProducerCertifies() {
-        assertEquals(org.chirocore.matroid.Limits.ELEMENTS, Limits.MAX_ELEMENTS);
-        assertTrue(Limits.MAX_CANDIDATES >= org.chirocore.matroid.Limits.EXPLICIT_SUBSETS,
+        assertEquals(org.chirocore.matroid.Limits.ELEMENTS, VerifierLimits.MAX_ELEMENTS);
+        assertTrue(VerifierLimits.MAX_CANDIDATES >= org.chirocore.matroid.Limits.EXPLICIT_SUBSETS,
                 "a core the producer holds as its bases must be rebuildable by the verifier");
-        assertTrue(Limits.MAX_BASES >= org.chirocore.matroid.Limits.EXPLICIT_SUBSETS,
+        assertTrue(VerifierLimits.MAX_BASES >= org.chirocore.matroid.Limits.EXPLICIT_SUBSETS,
                 "a core has at most as many bases as r-subsets");
     }
 
     @Test
     void theVerifierReadsEveryMatroidFileTheProducerReads() {
-        assertTrue(Limits.MAX_CERTIFICATE_BYTES >= org.chirocore.matroid.Limits.INPUT_BYTES,
+        assertTrue(VerifierLimits.MAX_CERTIFICATE_BYTES >= org.chirocore.matroid.Limits.INPUT_BYTES,
                 "verify --input reads the same files as the producer");
     }
 }

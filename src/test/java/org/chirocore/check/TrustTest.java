@@ -138,7 +138,9 @@ class TrustTest {
         String text = verify(fano, Path.of("certificates"), Optional.empty()).toText();
         assertTrue(text.contains("a\\u001b[2K\\u000dPASS     everything: verified\\u202e\\u0085"), text);
         assertTrue(text.chars().noneMatch(c -> c < 0x20 && c != '\n' || c == 0x7f || c >= 0x80 && c < 0xa0 || c == 0x202e), text);
-        assertEquals("tab\\u0009back\\\\slash", Escaping.printable("tab\tback\\slash"));
+        assertEquals("tab\\u0009back\\slash", Escaping.printable("tab\tback\\slash"));
+        assertEquals("tab\\u0009back\\slash", Escaping.printable(Escaping.printable("tab\tback\\slash")),
+                "escaping twice changes nothing");
     }
 
     @Test

@@ -162,6 +162,7 @@ class BadInputCorpusTest {
                 bad(2, "--conflicts", "bench --conflicts x"),
                 // sweep
                 bad(2, "--n", "sweep --n 3..99 --out @sweep"),
+                bad(2, "--threads must be between 1 and 64", "sweep --n 3 --threads 1000 --out @sweep"),
                 bad(2, "existing.json: is a file, not a directory", "sweep --n 3 --out @existing.json"),
                 bad(2, "noshard", "sweep-merge @noshard --out @sweepmerged"),
                 // no such command

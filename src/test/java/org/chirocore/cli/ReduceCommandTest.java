@@ -45,6 +45,8 @@ class ReduceCommandTest {
         assertTrue(run.out().startsWith("non-orientable core: rank 3 on 7 elements, 28 bases"), run.out());
         assertTrue(run.out().contains("witnesses: 14"), run.out());
         assertTrue(run.out().contains("isomorphism class: the Fano plane F7 ("), run.out());
+        // The 3-cube pulled and contracted has 7 elements and its core is all of them: nothing deleted.
+        assertTrue(run.out().contains("deleted: none"), run.out());
 
         Json.Obj r = read(dir.resolve("x.json"));
         assertEquals(List.of("format", "version", "tool", "sha256", "content", "run"),
@@ -63,6 +65,18 @@ class ReduceCommandTest {
         assertTrue(construction.requireBoolean("contractPulled"));
         assertTrue(content.requireObject("nonOrientability").requireString("drat").endsWith("\n0\n"));
         assertEquals("contract-first", r.requireObject("run").requireObject("search").requireString("strategy"));
+    }
+
+    @Test
+    void aDeletedSetThatIsEverythingElseIsNamedSo() throws IOException {
+        CliRun run = CliRun.of("reduce", "--cube", "4", "--hyperplane", "1000,0100,0010,0001", "--pull", "1111",
+                "--out", out("n4.json"));
+        assertEquals(0, run.exit(), run.err());
+        String contracted = run.out().lines().filter(l -> l.startsWith("contracted: ")).findFirst().orElseThrow();
+        List<String> labels = List.of(contracted.substring("contracted: ".length()).split(" "));
+        assertEquals(labels.stream().sorted().toList(), labels, "labels are printed sorted");
+        // 15 elements = 8 in the core + |C| + |D|: D is everything else.
+        assertTrue(run.out().contains("deleted: all other elements (" + (15 - 8 - labels.size()) + ")"), run.out());
     }
 
     @Test

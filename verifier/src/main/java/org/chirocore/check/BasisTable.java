@@ -75,9 +75,9 @@ final class BasisTable {
             return Optional.of("there are no bases; a matroid has at least one");
         }
         long pairs = (long) canonical.length * Math.max(rank, rank * (rank - 1) / 2);
-        if (pairs > Limits.MAX_EXCHANGE_PAIRS) {
+        if (pairs > VerifierLimits.MAX_EXCHANGE_PAIRS) {
             return Optional.of(canonical.length + " bases of rank " + rank + " need " + pairs
-                    + " entries for the exchange check, more than the verifier's limit of " + Limits.MAX_EXCHANGE_PAIRS);
+                    + " entries for the exchange check, more than the verifier's limit of " + VerifierLimits.MAX_EXCHANGE_PAIRS);
         }
         Optional<String> disconnected = disconnection();
         return disconnected.isPresent() ? disconnected : nonMultipartite();

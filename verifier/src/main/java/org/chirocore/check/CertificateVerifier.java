@@ -60,7 +60,7 @@ public final class CertificateVerifier {
     public static VerificationReport verify(Path file, Optional<Path> input) {
         Path dir = file.toAbsolutePath().getParent();
         try {
-            return verify(readRegularFile(file, Limits.MAX_CERTIFICATE_BYTES), dir, input, file.toString());
+            return verify(readRegularFile(file, VerifierLimits.MAX_CERTIFICATE_BYTES), dir, input, file.toString());
         } catch (IOException e) {
             return new VerificationReport(file.toString(), notRun(List.of(new Check(FORMAT, Status.FAIL, "cannot read the file: " + e.getMessage())),
                     "the file could not be read"), 0);
@@ -396,15 +396,15 @@ public final class CertificateVerifier {
                         ? " is a symbolic link; it must be a regular file beside the certificate"
                         : Files.exists(file) ? " is not a regular file" : " does not exist"));
             }
-            if (Files.size(file) > Limits.MAX_PROOF_BYTES) {
+            if (Files.size(file) > VerifierLimits.MAX_PROOF_BYTES) {
                 throw new Failure("the proof file " + Escaping.printable(name) + " has " + Files.size(file)
-                        + " bytes, more than the verifier's limit of " + Limits.MAX_PROOF_BYTES);
+                        + " bytes, more than the verifier's limit of " + VerifierLimits.MAX_PROOF_BYTES);
             }
             MessageDigest sha = sha256();
             DratChecker.Outcome outcome;
             try (InputStream raw = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS);
                     InputStream in = new DigestInputStream(new CappedInputStream(name.endsWith(".gz") ? new GZIPInputStream(raw) : raw,
-                            Limits.MAX_PROOF_BYTES, "the uncompressed " + Escaping.printable(name)), sha)) {
+                            VerifierLimits.MAX_PROOF_BYTES, "the uncompressed " + Escaping.printable(name)), sha)) {
                 outcome = DratChecker.check(cnf, new InputStreamReader(in,
                         StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)));
                 if (!outcome.valid()) {
@@ -426,9 +426,9 @@ public final class CertificateVerifier {
             for (int e = 0; e < n; e++) {
                 work = Math.addExact(work, Relations.evaluations(core, e));
             }
-            if (work > Limits.MAX_WITNESS_RELATIONS) {
+            if (work > VerifierLimits.MAX_WITNESS_RELATIONS) {
                 throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
-                        + Limits.MAX_WITNESS_RELATIONS + "; not checked");
+                        + VerifierLimits.MAX_WITNESS_RELATIONS + "; not checked");
             }
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);

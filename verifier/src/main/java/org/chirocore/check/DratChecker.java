@@ -104,16 +104,16 @@ public final class DratChecker {
             if (lits.length != line.numbers().length - 1) {
                 throw new ProofError(line.number(), "text after the closing 0");
             }
-            if (steps > Limits.MAX_PROPAGATION_STEPS) {
-                throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
+            if (steps > VerifierLimits.MAX_PROPAGATION_STEPS) {
+                throw new ProofError(line.number(), "checking the proof needs more than " + VerifierLimits.MAX_PROPAGATION_STEPS
                         + " propagation steps, the verifier's limit; not checked further");
             }
             if (line.deletion()) {
                 delete(ProofLines.distinct(line, lits, scratch));
             } else {
                 literals += lits.length;
-                if (literals > Limits.MAX_PROOF_LITERALS) {
-                    throw new ProofError(line.number(), "the lemmas hold more than " + Limits.MAX_PROOF_LITERALS
+                if (literals > VerifierLimits.MAX_PROOF_LITERALS) {
+                    throw new ProofError(line.number(), "the lemmas hold more than " + VerifierLimits.MAX_PROOF_LITERALS
                             + " literals, the verifier's limit; not checked further");
                 }
                 lemma(line, ProofLines.distinct(line, lits, scratch));

@@ -12,8 +12,10 @@ public final class Escaping {
     /**
      * {@code s} with every character that is not printable (C0 and C1 controls, DEL, line and
      * paragraph separators, bidirectional and other format characters, unpaired surrogates)
-     * replaced by a {@code \}{@code uXXXX} escape, and every backslash doubled, so that the result
-     * is one line that shows exactly which characters were there.
+     * replaced by a {@code \}{@code uXXXX} escape, so that the result is one line of characters
+     * that only print. Backslashes are kept as they are, so that the trade's notation ({@code M/C\D},
+     * {@code AG(2,3)\e}) reads as written; a label that spells out an escape can look like one but
+     * never acts on the terminal, and escaping twice changes nothing.
      */
     public static String printable(String s) {
         StringBuilder out = new StringBuilder(s.length());
@@ -25,9 +27,7 @@ public final class Escaping {
             boolean unsafe = type == Character.CONTROL || type == Character.FORMAT || type == Character.LINE_SEPARATOR
                     || type == Character.PARAGRAPH_SEPARATOR || type == Character.UNASSIGNED || type == Character.PRIVATE_USE
                     || (type == Character.SURROGATE && !pairedSurrogate);
-            if (c == '\\') {
-                out.append("\\\\");
-            } else if (unsafe) {
+            if (unsafe) {
                 out.append(String.format("\\u%04x", (int) c));
             } else {
                 out.append(c);

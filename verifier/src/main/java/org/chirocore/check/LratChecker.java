@@ -73,8 +73,8 @@ public final class LratChecker {
     private void run(Reader text) throws ProofError, IOException {
         ProofLines lines = new ProofLines(text, 1);
         for (Line line = lines.next(); line != null; line = lines.next()) {
-            if (steps > Limits.MAX_PROPAGATION_STEPS) {
-                throw new ProofError(line.number(), "checking the proof needs more than " + Limits.MAX_PROPAGATION_STEPS
+            if (steps > VerifierLimits.MAX_PROPAGATION_STEPS) {
+                throw new ProofError(line.number(), "checking the proof needs more than " + VerifierLimits.MAX_PROPAGATION_STEPS
                         + " propagation steps, the verifier's limit; not checked further");
             }
             long[] n = line.numbers();
@@ -107,8 +107,8 @@ public final class LratChecker {
                 throw new ProofError(line.number(), "text after the closing 0 of the hints");
             }
             literals += lits.length;
-            if (literals > Limits.MAX_PROOF_LITERALS) {
-                throw new ProofError(line.number(), "the lemmas hold more than " + Limits.MAX_PROOF_LITERALS
+            if (literals > VerifierLimits.MAX_PROOF_LITERALS) {
+                throw new ProofError(line.number(), "the lemmas hold more than " + VerifierLimits.MAX_PROOF_LITERALS
                         + " literals, the verifier's limit; not checked further");
             }
             lemma(line.number(), lits, Arrays.copyOfRange(rest.numbers(), litsEnd + 1, hintsEnd));

@@ -59,10 +59,10 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         if (rank < 0 || rank > labels.size()) {
             throw new JsonTree.Mistyped("core.rank must be between 0 and the number of labels " + labels.size() + ", found " + rank);
         }
-        List<int[]> bases = sets(core.requireArray("bases"), "core.bases", Limits.MAX_BASES);
+        List<int[]> bases = sets(core.requireArray("bases"), "core.bases", VerifierLimits.MAX_BASES);
         JsonTree.Obj non = content.requireObject("nonOrientability");
         non.requireOnly(List.of("normalised", "relations", "drat", "dratFile", "dratSha256", "lrat"));
-        List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", Limits.MAX_ELEMENTS + 1);
+        List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", VerifierLimits.MAX_ELEMENTS + 1);
         List<Relation> relations = relations(non.requireArray("relations"));
         Optional<String> drat = non.find("drat").map(d -> d.asString("nonOrientability.drat"));
         Optional<String> lrat = non.find("lrat").map(d -> d.asString("nonOrientability.lrat"));
@@ -78,14 +78,14 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
     }
 
     private static List<String> labels(JsonTree.Arr array) {
-        if (array.size() > Limits.MAX_ELEMENTS) {
-            throw new JsonTree.Mistyped("core.labels has " + array.size() + " elements; at most " + Limits.MAX_ELEMENTS + " are allowed");
+        if (array.size() > VerifierLimits.MAX_ELEMENTS) {
+            throw new JsonTree.Mistyped("core.labels has " + array.size() + " elements; at most " + VerifierLimits.MAX_ELEMENTS + " are allowed");
         }
         List<String> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {
             String label = array.get(i).asString("core.labels[" + i + "]");
-            if (label.isEmpty() || label.length() > Limits.MAX_LABEL) {
-                throw new JsonTree.Mistyped("core.labels[" + i + "] must have 1 to " + Limits.MAX_LABEL + " characters");
+            if (label.isEmpty() || label.length() > VerifierLimits.MAX_LABEL) {
+                throw new JsonTree.Mistyped("core.labels[" + i + "] must have 1 to " + VerifierLimits.MAX_LABEL + " characters");
             }
             out.add(label);
         }
@@ -108,8 +108,8 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
     }
 
     private static int[] ints(JsonTree.Arr array, String what) {
-        if (array.size() > Limits.MAX_ELEMENTS) {
-            throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + Limits.MAX_ELEMENTS + " are allowed");
+        if (array.size() > VerifierLimits.MAX_ELEMENTS) {
+            throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + VerifierLimits.MAX_ELEMENTS + " are allowed");
         }
         int[] out = new int[array.size()];
         for (int i = 0; i < out.length; i++) {
@@ -119,8 +119,8 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
     }
 
     private static List<Relation> relations(JsonTree.Arr array) {
-        if (array.size() > Limits.MAX_RELATIONS) {
-            throw new JsonTree.Mistyped("nonOrientability.relations has " + array.size() + " entries; at most " + Limits.MAX_RELATIONS + " are allowed");
+        if (array.size() > VerifierLimits.MAX_RELATIONS) {
+            throw new JsonTree.Mistyped("nonOrientability.relations has " + array.size() + " entries; at most " + VerifierLimits.MAX_RELATIONS + " are allowed");
         }
         List<Relation> out = new ArrayList<>();
         for (int i = 0; i < array.size(); i++) {

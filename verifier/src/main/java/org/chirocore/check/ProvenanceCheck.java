@@ -116,8 +116,8 @@ final class ProvenanceCheck {
     private static Source cube(JsonTree.Obj c) throws Mismatch {
         c.requireOnly(List.of("cube", "field", "hyperplane", "pulled", "contractPulled"));
         int n = c.requireInt("cube");
-        if (n < 1 || n > Limits.MAX_CUBE) {
-            throw new Mismatch("construction.cube must be between 1 and " + Limits.MAX_CUBE + " (at most " + (1 << Limits.MAX_CUBE)
+        if (n < 1 || n > VerifierLimits.MAX_CUBE) {
+            throw new Mismatch("construction.cube must be between 1 and " + VerifierLimits.MAX_CUBE + " (at most " + (1 << VerifierLimits.MAX_CUBE)
                     + " vertices), found " + n);
         }
         long p = field(c.requireString("field"));
@@ -186,10 +186,10 @@ final class ProvenanceCheck {
             throws Mismatch {
         int[] hs = elements(h);
         long candidates = binomial(hs.length, n - 1);
-        if (candidates > Limits.MAX_VECTOR_TESTS / labels.size()) {
+        if (candidates > VerifierLimits.MAX_VECTOR_TESTS / labels.size()) {
             throw new Mismatch("the hyperplane has " + (candidates == Long.MAX_VALUE ? "too many" : candidates)
                     + " hyperline candidates; testing general position would exceed the verifier's limit of "
-                    + Limits.MAX_VECTOR_TESTS + " vector tests");
+                    + VerifierLimits.MAX_VECTOR_TESTS + " vector tests");
         }
         Set<BitSet> seen = new HashSet<>();
         int[] pick = firstCombination(n - 1);
@@ -236,7 +236,7 @@ final class ProvenanceCheck {
     /** A given matroid read from a matroid file (docs/matroid-format.md), after checking its hash, size and rank. */
     private static Source given(JsonTree.Obj given, Path input) throws Mismatch, IOException {
         given.requireOnly(List.of("sha256", "elements", "rank"));
-        byte[] bytes = CertificateVerifier.readRegularFile(input, Limits.MAX_CERTIFICATE_BYTES);
+        byte[] bytes = CertificateVerifier.readRegularFile(input, VerifierLimits.MAX_CERTIFICATE_BYTES);
         if (!CertificateVerifier.sha256(bytes).equals(given.requireString("sha256"))) {
             throw new Mismatch("the SHA-256 of " + input.getFileName() + " is " + CertificateVerifier.sha256(bytes)
                     + ", not the recorded " + given.requireString("sha256"));
@@ -271,8 +271,8 @@ final class ProvenanceCheck {
             if (n < 0) {
                 throw new Mismatch("the input needs \"labels\" or \"elements\" to give its number of elements");
             }
-            if (n > Limits.MAX_ELEMENTS || (m.has("labels") && m.has("elements") && m.requireInt("elements") != n)) {
-                throw new Mismatch("the input must have at most " + Limits.MAX_ELEMENTS + " elements, and labels and elements must agree");
+            if (n > VerifierLimits.MAX_ELEMENTS || (m.has("labels") && m.has("elements") && m.requireInt("elements") != n)) {
+                throw new Mismatch("the input must have at most " + VerifierLimits.MAX_ELEMENTS + " elements, and labels and elements must agree");
             }
             List<String> labels = new ArrayList<>();
             for (int i = 0; i < n; i++) {
@@ -291,12 +291,12 @@ final class ProvenanceCheck {
             }
             String listed = m.has("bases") ? "bases" : "nonbases";
             Set<Long> sets = new HashSet<>();
-            for (int[] b : ParsedCertificate.sets(m.requireArray(listed), listed, Limits.MAX_BASES)) {
+            for (int[] b : ParsedCertificate.sets(m.requireArray(listed), listed, VerifierLimits.MAX_BASES)) {
                 if (!sets.add(mask(b, n, r))) {
                     throw new Mismatch(listed + " lists " + java.util.Arrays.toString(b) + " twice");
                 }
             }
-            if (listed.equals("nonbases") && binomial(n, r) > Limits.MAX_BASES) {
+            if (listed.equals("nonbases") && binomial(n, r) > VerifierLimits.MAX_BASES) {
                 throw new Mismatch("the input has too many " + r + "-subsets to list its bases");
             }
             List<Long> bases = new ArrayList<>();
@@ -396,8 +396,8 @@ final class ProvenanceCheck {
         if (r != core.rank) {
             throw new Mismatch("the rebuilt minor has rank " + r + ", the core " + core.rank);
         }
-        if (binomial(kept.length, r) > Limits.MAX_CANDIDATES) {
-            throw new Mismatch("the minor has more than " + Limits.MAX_CANDIDATES + " candidate bases to rebuild");
+        if (binomial(kept.length, r) > VerifierLimits.MAX_CANDIDATES) {
+            throw new Mismatch("the minor has more than " + VerifierLimits.MAX_CANDIDATES + " candidate bases to rebuild");
         }
         int next = 0;
         int[] pick = firstCombination(r);

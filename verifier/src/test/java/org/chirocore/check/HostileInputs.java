@@ -164,7 +164,7 @@ public final class HostileInputs {
                 "\"dratFile\": \"bomb.drat.gz\", \"dratSha256\": \"" + "0".repeat(64) + "\""));
         byte[] newlines = "\n".repeat(1 << 20).getBytes(StandardCharsets.US_ASCII);
         try (OutputStream out = new GZIPOutputStream(Files.newOutputStream(dir.resolve("bomb.drat.gz")), 1 << 16)) {
-            for (int i = 0; i <= Limits.MAX_PROOF_BYTES >> 20; i++) {
+            for (int i = 0; i <= VerifierLimits.MAX_PROOF_BYTES >> 20; i++) {
                 out.write(newlines);
             }
         }

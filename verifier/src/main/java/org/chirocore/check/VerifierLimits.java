@@ -6,7 +6,7 @@ package org.chirocore.check;
  * beyond a limit is rejected with a FAIL line naming the limit, never accepted unchecked.
  * Stored certificates are far inside every limit (the largest has 64 KB and 1 400 bases).
  */
-final class Limits {
+final class VerifierLimits {
     /** Largest certificate file read, in bytes; the size is checked before reading. */
     static final long MAX_CERTIFICATE_BYTES = 64L << 20;
     /** Largest proof read from a separate file, in bytes after decompression; the proof is streamed. */
@@ -38,6 +38,6 @@ final class Limits {
     /** Most span-membership tests (one dot product each) when testing general position. */
     static final long MAX_VECTOR_TESTS = 200_000_000L;
 
-    private Limits() {
+    private VerifierLimits() {
     }
 }
