@@ -194,7 +194,7 @@ final class ReduceCommand implements Callable<Integer> {
             w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
             return ExitCodes.UNKNOWN;
         }
-        summarise(w, from, v);
+        summarise(w, from, m.size(), v);
         int size = found.core().core().size();
         Inputs.write(smallestRecord(out), smallestJson(group, found));
         w.println("smallest: no non-orientable minor has fewer than " + size + " elements: "
