@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPInputStream;
 
+import org.chirocore.io.InputFiles;
+import org.chirocore.matroid.Limits;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonValueException;
@@ -99,7 +101,7 @@ public final class CertificateExport {
         byte[] bytes;
         try (InputStream in = fileName.endsWith(".gz") ? new GZIPInputStream(Files.newInputStream(file))
                 : Files.newInputStream(file)) {
-            bytes = in.readAllBytes();
+            bytes = InputFiles.readUpTo(in, Limits.PROOF_BYTES, "the proof file " + fileName);
         }
         String digest = Sha256.hex(bytes);
         if (!digest.equals(proof.requireString("dratSha256"))) {

@@ -1,11 +1,11 @@
 package org.chirocore.cert;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.chirocore.io.InputFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonValueException;
 import org.chirocore.matroid.ElementSets;
@@ -46,7 +46,7 @@ public final class CertificateReader {
      * @throws JsonValueException when it is not of this format or its digest does not match
      */
     public static Json.Obj readChecked(Path certificate) throws IOException {
-        return parseChecked(Files.readAllBytes(certificate));
+        return parseChecked(InputFiles.read(certificate));
     }
 
     /**

@@ -47,6 +47,20 @@ public final class InputFiles {
         }
     }
 
+    /**
+     * The bytes of {@code in} (for example a decompressing stream), at most {@code limit} of them.
+     *
+     * @param what the data, as named in the message (e.g. "the proof file p.drat.gz")
+     * @throws IOException when there are more than {@code limit} bytes, or reading fails
+     */
+    public static byte[] readUpTo(InputStream in, long limit, String what) throws IOException {
+        byte[] bytes = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, limit + 1));
+        if (bytes.length > limit) {
+            throw new IOException(what + " is too large: more than " + limit + " bytes");
+        }
+        return bytes;
+    }
+
     private static String tooLarge(long size) {
         return "too large: " + size + " bytes; input files are read up to " + Limits.INPUT_BYTES + " bytes";
     }

@@ -40,6 +40,12 @@ public final class Limits {
      */
     public static final long INPUT_BYTES = 64L << 20;
 
+    /**
+     * Largest proof read from a file beside a certificate, in bytes after decompression (a gzip
+     * proof can inflate a thousandfold); the verifier's own bound is the same.
+     */
+    public static final long PROOF_BYTES = 256L << 20;
+
     private Limits() {
     }
 

@@ -1,6 +1,5 @@
 package org.chirocore.report;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -9,10 +8,12 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
 
+import org.chirocore.io.InputFiles;
 import org.chirocore.cert.CertificateReader;
 import org.chirocore.io.Json;
 import org.chirocore.io.Sha256;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Limits;
 
 /**
  * What a report says about a certificate, read from its JSON (docs/certificate-format.md). It
@@ -48,7 +49,7 @@ public record CertificateSummary(String file, String contentSha256, String fileS
      */
     public static CertificateSummary read(Path file) {
         try {
-            byte[] bytes = Files.readAllBytes(file);
+            byte[] bytes = InputFiles.read(file);
             Json.Obj cert = CertificateReader.parseChecked(bytes);
             Json.Obj content = cert.requireObject("content");
             return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), Sha256.hex(bytes),
@@ -84,9 +85,8 @@ public record CertificateSummary(String file, String contentSha256, String fileS
         String name = proof.requireString("dratFile");
         try (InputStream raw = Files.newInputStream(dir.resolve(name));
                 InputStream in = name.endsWith(".gz") ? new GZIPInputStream(raw) : raw) {
-            ByteArrayOutputStream text = new ByteArrayOutputStream();
-            in.transferTo(text);
-            return size(relations, "DRAT", text.toString(StandardCharsets.UTF_8));
+            byte[] text = InputFiles.readUpTo(in, Limits.PROOF_BYTES, "the proof file " + name);
+            return size(relations, "DRAT", new String(text, StandardCharsets.UTF_8));
         }
     }
 

@@ -7,6 +7,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.stream.Stream;
 
+import org.chirocore.io.InputFiles;
 import org.chirocore.io.Json;
 
 /** Reading a run directory's record and listing its certificates, for the {@link RunKind}s. */
@@ -21,7 +22,7 @@ final class RunFiles {
      */
     static Json.Obj object(Path file, String what) {
         try {
-            return Json.parseUtf8(Files.readAllBytes(file)).asObject(what);
+            return Json.parseUtf8(InputFiles.read(file)).asObject(what);
         } catch (IOException | IllegalArgumentException e) {
             throw new ReportException(file + ": cannot be read as " + what + ": " + e.getMessage(), e);
         }

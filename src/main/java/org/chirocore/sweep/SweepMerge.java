@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 
+import org.chirocore.io.InputFiles;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.family.Shard;
@@ -89,7 +90,7 @@ public final class SweepMerge {
             throw new SweepException(file + ": is missing; a shard directory holds the sweep.json its run wrote.");
         }
         try {
-            return SweepResult.fromJson(Json.parseUtf8(Files.readAllBytes(file)).asObject("sweep.json"));
+            return SweepResult.fromJson(Json.parseUtf8(InputFiles.read(file)).asObject("sweep.json"));
         } catch (IllegalArgumentException e) {
             throw new SweepException(file + ": " + e.getMessage(), e);
         }

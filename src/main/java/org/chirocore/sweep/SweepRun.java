@@ -13,6 +13,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 
+import org.chirocore.io.InputFiles;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Provenance;
@@ -311,7 +312,7 @@ public final class SweepRun {
             CubeConstruction pulled) throws IOException {
         PairResult earlier;
         try {
-            earlier = PairResult.fromJson(Json.parseUtf8(Files.readAllBytes(record)).asObject("the pair"));
+            earlier = PairResult.fromJson(Json.parseUtf8(InputFiles.read(record)).asObject("the pair"));
         } catch (IllegalArgumentException unreadable) {
             return Optional.empty();
         }
