@@ -101,7 +101,7 @@ final class EnumerateCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new ParameterException(spec.commandLine(), e.getMessage());
         }
-        Symmetry group = group(input, m);
+        Symmetry group = group(input, m, symmetry.equals("none"));
         try {
             Files.createDirectories(out);
         } catch (IOException e) {
@@ -129,8 +129,12 @@ final class EnumerateCommand implements Callable<Integer> {
     }
 
 
-    private Symmetry group(Subject input, ExplicitMatroid m) {
-        if (symmetry.equals("none")) {
+    /**
+     * The group of {@code input}: none when asked, the cube's subgroup fixing H and O for a cube
+     * construction, else the automorphism group of m.
+     */
+    static Symmetry group(Subject input, ExplicitMatroid m, boolean none) {
+        if (none) {
             return Symmetry.none(m.size());
         }
         if (input.source() instanceof Source.Constructed c) {
@@ -139,7 +143,7 @@ final class EnumerateCommand implements Callable<Integer> {
         try {
             return Symmetry.automorphisms(m);
         } catch (IllegalArgumentException e) {
-            throw new BadInputException(inputs.file() + ": " + e.getMessage(), e);
+            throw new BadInputException(input.file().map(Path::toString).orElse("the input") + ": " + e.getMessage(), e);
         }
     }
 

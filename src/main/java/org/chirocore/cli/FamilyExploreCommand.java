@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 
 import org.chirocore.family.FamilyException;
@@ -23,13 +22,14 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code chirocore family explore}: K seeded reductions per n, the cores grouped up to
- * isomorphism, one verified certificate per class.
+ * {@code chirocore family explore}: K seeded reductions per n (steered searches when a rank, kept
+ * or avoided vertices are given), the cores grouped up to isomorphism, one verified certificate
+ * per class.
  */
 @Command(name = "explore", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Run K seeded reductions per n = A..B (seeds S, S+1, ...; strategies alternating contract-first, "
-                + "delete-first), group the cores up to isomorphism and certify one per class: DIR/n=K.core-J.cert.json, "
-                + "DIR/explore.md, DIR/explore.json.")
+                + "delete-first), steered by --rank, --keep and --avoid when given, group the cores up to isomorphism "
+                + "and certify one per class: DIR/n=K.core-J.cert.json, DIR/explore.md, DIR/explore.json.")
 final class FamilyExploreCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
@@ -47,17 +47,26 @@ final class FamilyExploreCommand implements Callable<Integer> {
     private int runs;
 
     @Option(names = "--keep", paramLabel = "V1,V2,...", split = ",",
-            description = "Accept only cores containing these vertices (0/1 labels or vertex rules without commas, "
-                    + "e.g. \"all zeros\", \"weight 2\"); other cores are counted as filtered.")
+            description = "Steer: the core contains these vertices (0/1 labels or vertex rules without commas, "
+                    + "e.g. \"all zeros\", \"weight 2\"); they are neither deleted nor contracted.")
     private List<String> keep = List.of();
 
-    @Option(names = "--target-rank", paramLabel = "R",
-            description = "Accept only cores of rank R; other cores are counted as filtered.")
-    private Integer targetRank;
+    @Option(names = "--avoid", paramLabel = "V1,V2,...", split = ",",
+            description = "Steer: these vertices (labels or vertex rules, as for --keep) are deleted.")
+    private List<String> avoid = List.of();
+
+    @Option(names = "--rank", paramLabel = "EXPR",
+            description = "Steer: the core has rank EXPR, an expression in n (e.g. n, n-1, 4); exactly "
+                    + "rank(M) - EXPR elements are contracted. With --follow and no --rank, the shape's rank steers.")
+    private String rank;
+
+    @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
+            description = "Wall-clock limit of each steered run, after which it answers unknown; 0 (default) for none.")
+    private double totalTime;
 
     @Option(names = "--follow", paramLabel = "SHAPE",
-            description = "Follow one core shape across n, e.g. elements=n+4,rank=3 (expressions in n); writes "
-                    + "DIR/follow.md and DIR/follow.json.")
+            description = "Follow one core shape across n, e.g. elements=2*n,rank=n (expressions in n): found, none "
+                    + "exists or unknown at each n; writes DIR/follow.md and DIR/follow.json.")
     private String follow;
 
     @Override
@@ -68,27 +77,26 @@ final class FamilyExploreCommand implements Callable<Integer> {
         if (runs < 1) {
             throw new ParameterException(spec.commandLine(), "--runs must be at least 1, not " + runs + ".");
         }
-        if (targetRank != null && targetRank < 1) {
-            throw new ParameterException(spec.commandLine(), "--target-rank must be at least 1, not " + targetRank + ".");
+        if (totalTime < 0 || Double.isNaN(totalTime)) {
+            throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
         }
-        List<VertexRule> rules = new ArrayList<>();
-        for (String text : keep) {
-            try {
-                rules.add(VertexRule.parse(text.trim()));
-            } catch (IllegalArgumentException e) {
-                throw new ParameterException(spec.commandLine(), "--keep: " + e.getMessage());
-            }
-        }
+        List<VertexRule> kept = rules("--keep", keep);
+        List<VertexRule> avoided = rules("--avoid", avoid);
         FamilyExploration.Findings report;
         Optional<ShapeFollow.Shape> shape;
+        List<ShapeFollow.Row> rows = List.of();
         try {
             shape = follow == null ? Optional.empty() : Optional.of(ShapeFollow.Shape.parse(follow));
+            Optional<FamilyExploration.RankRule> steer = rank != null
+                    ? Optional.of(FamilyExploration.RankRule.parse(rank))
+                    : shape.map(s -> new FamilyExploration.RankRule(s.rankText(), s.rank()));
             FamilyExploration.Settings settings = new FamilyExploration.Settings(seed.seed(), runs, budget.budget(),
-                    rules, targetRank == null ? OptionalInt.empty() : OptionalInt.of(targetRank));
+                    kept, avoided, steer, Math.round(totalTime * 1000));
             report = new FamilyExploration(family.definition(), out, settings, family.console())
                     .run(bounds[0], bounds[1]);
             if (shape.isPresent()) {
-                ShapeFollow.write(out, shape.get(), ShapeFollow.follow(report, shape.get()));
+                rows = ShapeFollow.follow(report, shape.get());
+                ShapeFollow.write(out, shape.get(), rows);
             }
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);
@@ -98,7 +106,8 @@ final class FamilyExploreCommand implements Callable<Integer> {
         PrintWriter w = spec.commandLine().getOut();
         for (FamilyExploration.MemberFindings m : report.members()) {
             w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
-                    + " of cores, " + m.rejected().size() + " of " + runs + " runs filtered or without a core");
+                    + " of cores" + m.noneExists().map(x -> "; " + x.reason()).orElse(", " + m.rejected().size()
+                            + " of " + runs + " runs without a core"));
             for (FamilyExploration.CoreClass c : m.classes()) {
                 w.println("  " + Format.core(c.core()) + " x "
                         + c.attempts().size() + "; " + c.status()
@@ -109,9 +118,24 @@ final class FamilyExploreCommand implements Callable<Integer> {
                 + out.resolve(FamilyExploration.EXPLORE_JSON)
                 + shape.map(x -> ", " + out.resolve(ShapeFollow.FOLLOW_MD) + " and " + out.resolve(ShapeFollow.FOLLOW_JSON))
                         .orElse(""));
+        for (ShapeFollow.Row r : rows) {
+            w.println("shape " + shape.orElseThrow().text() + " at n = " + r.n() + ": " + r.status().text());
+        }
         boolean unknown = report.members().stream().anyMatch(m -> m.classes().stream()
                 .anyMatch(c -> c.certification() instanceof FamilyExploration.ClassCertificate.Unknown) || m.rejected().stream()
                 .anyMatch(r -> r instanceof FamilyExploration.Rejected.Unknown));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
+    }
+
+    private List<VertexRule> rules(String option, List<String> texts) {
+        List<VertexRule> rules = new ArrayList<>();
+        for (String text : texts) {
+            try {
+                rules.add(VertexRule.parse(text.trim()));
+            } catch (IllegalArgumentException e) {
+                throw new ParameterException(spec.commandLine(), option + ": " + e.getMessage());
+            }
+        }
+        return rules;
     }
 }

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
+import java.util.Set;
 
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Source;
@@ -16,22 +17,28 @@ import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.MatroidShape;
 import org.chirocore.orient.Budget;
 import org.chirocore.pipeline.CertifiedReduction;
+import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
 import org.chirocore.search.SearchSettings;
+import org.chirocore.search.SteeredSearch;
 import org.chirocore.search.Strategy;
 import org.chirocore.search.UnsatCoreSearch;
 
 /**
  * Explores the minimal cores of each member of a family: K seeded reductions per n (seeds
- * seed, seed + 1, …, strategies alternating contract-first, delete-first), each an ordinary
- * reduction to a fully minor-minimal core. Constraints are a <em>filter</em>, not a change of the
- * search: a core is accepted only when it contains every kept vertex (so none was deleted or
- * contracted) and has the target rank; the others are counted as filtered. The accepted cores are
+ * seed, seed + 1, …, strategies alternating contract-first, delete-first), each to a fully
+ * minor-minimal core. Without constraints each run is an ordinary reduction. With constraints
+ * (a rank given as an expression in n, kept and avoided vertices) each run is a
+ * {@link SteeredSearch}: the search itself contracts exactly rank(M) − R elements, keeps and
+ * deletes what it is told and backtracks past dead ends, so it answers a core meeting the
+ * constraints, "none exists" (the space was enumerated completely; the member's remaining runs
+ * would only repeat it, so they are skipped) or unknown. The cores are
  * grouped up to isomorphism ({@link MatroidShape} first, then {@link HyperplaneIsomorphismInspector});
  * one representative per class, from the class's first run, is certified into
  * {@code n=K.core-J.cert.json} and verified. Writes {@link #EXPLORE_MD} and {@link #EXPLORE_JSON}.
@@ -51,18 +58,57 @@ public final class FamilyExploration {
      * @param seed the seed of the first run; run j uses seed + j
      * @param runs K, the number of reductions per n, at least 1
      * @param budget the budget of each orientability decision and of each refutation
-     * @param keep vertex rules for the vertices an accepted core must contain
-     * @param targetRank the rank an accepted core must have, if any
+     * @param keep vertex rules for the vertices a core must contain (steering)
+     * @param avoid vertex rules for the vertices a core must not contain (steering: they are deleted)
+     * @param rank the rank a core must have, as an expression in n, if any (steering)
+     * @param totalMillis wall-clock limit of each steered run, 0 for none
      */
-    public record Settings(long seed, int runs, Budget budget, List<VertexRule> keep, OptionalInt targetRank) {
+    public record Settings(long seed, int runs, Budget budget, List<VertexRule> keep, List<VertexRule> avoid,
+            Optional<RankRule> rank, long totalMillis) {
         public Settings {
             if (runs < 1) {
                 throw new IllegalArgumentException("An exploration needs at least 1 run per n, not " + runs + ".");
             }
-            if (budget == null || targetRank == null) {
-                throw new IllegalArgumentException("Exploration settings need a budget and a target rank (or none).");
+            if (budget == null || rank == null) {
+                throw new IllegalArgumentException("Exploration settings need a budget and a rank (or none).");
+            }
+            if (totalMillis < 0) {
+                throw new IllegalArgumentException("The time limit of a run must not be negative, not " + totalMillis
+                        + ".");
             }
             keep = List.copyOf(keep);
+            avoid = List.copyOf(avoid);
+        }
+
+        /** Unconstrained settings: every run is an ordinary reduction. */
+        public static Settings unconstrained(long seed, int runs, Budget budget) {
+            return new Settings(seed, runs, budget, List.of(), List.of(), Optional.empty(), 0);
+        }
+
+        /** Whether the runs are steered (some constraint is set). */
+        public boolean steered() {
+            return rank.isPresent() || !keep.isEmpty() || !avoid.isEmpty();
+        }
+
+        /**
+         * The steered rank at n, if a rank is set.
+         *
+         * @throws FamilyException when the expression cannot be evaluated at n
+         */
+        public OptionalInt rank(int n) {
+            if (rank.isEmpty()) {
+                return OptionalInt.empty();
+            }
+            long r;
+            try {
+                r = rank.get().rank().value(n, 0);
+            } catch (ArithmeticException | IllegalArgumentException e) {
+                throw new FamilyException("--rank at n = " + n + ": " + e.getMessage(), e);
+            }
+            if (r < 0 || r > Integer.MAX_VALUE) {
+                throw new FamilyException("--rank at n = " + n + " is " + r + ", not a rank.");
+            }
+            return OptionalInt.of((int) r);
         }
 
         /** The seed of run j (0-based): seed + j. */
@@ -73,6 +119,27 @@ public final class FamilyExploration {
         /** The strategy of run j (0-based): contract-first for even j, delete-first for odd j. */
         public static Strategy strategy(int j) {
             return j % 2 == 0 ? Strategy.CONTRACT_FIRST : Strategy.DELETE_FIRST;
+        }
+    }
+
+    /**
+     * The wanted rank of a core as an expression in n.
+     *
+     * @param text the expression as written, e.g. {@code n} or {@code n-1}
+     * @param rank the parsed expression
+     */
+    public record RankRule(String text, Expression rank) {
+        /**
+         * Parses an expression in n.
+         *
+         * @throws FamilyException naming the text and what was expected
+         */
+        public static RankRule parse(String text) {
+            try {
+                return new RankRule(text, Expression.parse(text, Set.of('n')));
+            } catch (IllegalArgumentException e) {
+                throw new FamilyException("--rank: " + e.getMessage(), e);
+            }
         }
     }
 
@@ -93,18 +160,18 @@ public final class FamilyExploration {
         /** The run. */
         Attempt attempt();
 
-        /** Why, as the report states it: "filtered: …", "orientable" or "unknown: …". */
+        /** Why, as the report states it: "none exists: …", "orientable" or "unknown: …". */
         String reason();
 
         /**
-         * The run's core failed a constraint.
+         * The steered search proved that no core meets the constraints at this n.
          *
-         * @param why which constraint, in words
+         * @param enumerated what was enumerated (or why the constraint cannot be met), in words
          */
-        record Filtered(Attempt attempt, String why) implements Rejected {
+        record NoneExists(Attempt attempt, String enumerated) implements Rejected {
             @Override
             public String reason() {
-                return "filtered: " + why;
+                return "none exists: " + enumerated;
             }
         }
 
@@ -179,12 +246,18 @@ public final class FamilyExploration {
      * @param elements the member matroid's size
      * @param rank its rank
      * @param classes the isomorphism classes, in order of first appearance
-     * @param rejected the runs that were filtered out or found no core
+     * @param rejected the runs that found no core (a run proving that none exists ends the member's runs)
      */
     public record MemberFindings(int n, int elements, int rank, List<CoreClass> classes, List<Rejected> rejected) {
         public MemberFindings {
             classes = List.copyOf(classes);
             rejected = List.copyOf(rejected);
+        }
+
+        /** The proof that no core meets the constraints at this n, if a run gave one. */
+        public Optional<Rejected.NoneExists> noneExists() {
+            return rejected.stream().filter(r -> r instanceof Rejected.NoneExists).map(r -> (Rejected.NoneExists) r)
+                    .findFirst();
         }
     }
 
@@ -210,11 +283,18 @@ public final class FamilyExploration {
                     .append(settings.seed(settings.runs() - 1))
                     .append(", strategies alternating contract-first, delete-first");
             if (!settings.keep().isEmpty()) {
-                b.append("; accepted cores keep ").append(String.join(", ",
+                b.append("; cores keep ").append(String.join(", ",
                         settings.keep().stream().map(VertexRule::text).toList()));
             }
-            settings.targetRank().ifPresent(r -> b.append("; accepted cores have rank ").append(r));
-            b.append(".\n\nEvery core is fully minor-minimal; constraints only filter the runs' cores.\n");
+            if (!settings.avoid().isEmpty()) {
+                b.append("; cores avoid ").append(String.join(", ",
+                        settings.avoid().stream().map(VertexRule::text).toList()));
+            }
+            settings.rank().ifPresent(r -> b.append("; cores have rank ").append(r.text()));
+            b.append(".\n\nEvery core is fully minor-minimal").append(settings.steered()
+                    ? "; the constraints steer each run's search, which answers a core meeting them, \"none exists\" "
+                            + "(enumerated completely) or unknown.\n"
+                    : ".\n");
             for (MemberFindings m : members) {
                 b.append("\n## n = ").append(m.n()).append(" (").append(m.elements()).append(" elements, rank ")
                         .append(m.rank()).append(")\n\n");
@@ -271,8 +351,8 @@ public final class FamilyExploration {
                     .put("seed", settings.seed())
                     .put("runs", settings.runs())
                     .put("keep", Json.Arr.ofStrings(settings.keep().stream().map(VertexRule::text).toList()))
-                    .put("targetRank", settings.targetRank().isPresent()
-                            ? Json.Num.of(settings.targetRank().getAsInt()) : Json.NULL)
+                    .put("avoid", Json.Arr.ofStrings(settings.avoid().stream().map(VertexRule::text).toList()))
+                    .put("rank", settings.rank().<Json>map(r -> new Json.Str(r.text())).orElse(Json.NULL))
                     .put("members", new Json.Arr(ms))
                     .build();
         }
@@ -300,7 +380,8 @@ public final class FamilyExploration {
      * Explores the members {@code from..to} and writes the report.
      *
      * @throws FamilyException when the range is empty or outside the family's, a member cannot be
-     *     built, or a kept vertex is not an element of a member
+     *     built, a kept or avoided vertex is not an element of a member, or the rank expression
+     *     cannot be evaluated
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException when the verifier rejects a certificate just written (a bug)
      */
@@ -309,17 +390,18 @@ public final class FamilyExploration {
             throw new FamilyException(family.source() + ": the range " + from + ".." + to + " is empty.");
         }
         List<FamilyDefinition.Member> built = new ArrayList<>();
-        List<List<String>> kept = new ArrayList<>();
+        List<CoreConstraints> constraints = new ArrayList<>();
         for (int n = from; n <= to; n++) {
             listener.stage(n, "building");
             FamilyDefinition.Member m = family.build(n);
             built.add(m);
-            kept.add(keptLabels(m, n));
+            constraints.add(new CoreConstraints(settings.rank(n), labels(m, n, "--keep", settings.keep()),
+                    labels(m, n, "--avoid", settings.avoid())));
         }
         Files.createDirectories(dir);
         List<MemberFindings> members = new ArrayList<>();
         for (int k = 0; k < built.size(); k++) {
-            members.add(explore(built.get(k), kept.get(k)));
+            members.add(explore(built.get(k), constraints.get(k)));
         }
         Findings report = new Findings(family, settings, members);
         AtomicFiles.writeString(dir.resolve(EXPLORE_MD), report.toMarkdown());
@@ -327,18 +409,19 @@ public final class FamilyExploration {
         return report;
     }
 
-    private List<String> keptLabels(FamilyDefinition.Member m, int n) {
+    /** The labels of {@code rules} at n, each an element of the member; {@code option} names them in messages. */
+    private List<String> labels(FamilyDefinition.Member m, int n, String option, List<VertexRule> rules) {
         List<String> labels = new ArrayList<>();
-        for (VertexRule rule : settings.keep()) {
+        for (VertexRule rule : rules) {
             String label;
             try {
                 label = rule.label(n);
             } catch (IllegalArgumentException | ArithmeticException e) {
-                throw new FamilyException(family.source() + ": --keep \"" + rule.text() + "\" at n = " + n + ": "
-                        + e.getMessage(), e);
+                throw new FamilyException(family.source() + ": " + option + " \"" + rule.text() + "\" at n = " + n
+                        + ": " + e.getMessage(), e);
             }
             if (!m.matroid().labels().contains(label)) {
-                throw new FamilyException(family.source() + ": --keep \"" + rule.text() + "\" at n = " + n
+                throw new FamilyException(family.source() + ": " + option + " \"" + rule.text() + "\" at n = " + n
                         + " is the vertex " + label + ", which is not an element of the member (contracted?).");
             }
             labels.add(label);
@@ -346,7 +429,7 @@ public final class FamilyExploration {
         return labels;
     }
 
-    private MemberFindings explore(FamilyDefinition.Member m, List<String> kept) throws IOException {
+    private MemberFindings explore(FamilyDefinition.Member m, CoreConstraints constraints) throws IOException {
         int n = m.construction().n();
         List<MinimalCore> representatives = new ArrayList<>();
         List<MatroidShape> shapes = new ArrayList<>();
@@ -355,21 +438,38 @@ public final class FamilyExploration {
         for (int j = 0; j < settings.runs(); j++) {
             Attempt attempt = new Attempt(settings.seed(j), Settings.strategy(j));
             listener.stage(n, "run " + (j + 1) + " of " + settings.runs() + " (seed " + attempt + ")");
-            SearchResult result = new UnsatCoreSearch(new SearchSettings(attempt.seed(), attempt.strategy(),
-                    settings.budget(), m.construction().focus()), Progress.SILENT).reduce(m.matroid());
-            if (result instanceof SearchResult.Orientable) {
-                rejected.add(new Rejected.Orientable(attempt));
-                continue;
+            SearchSettings search = new SearchSettings(attempt.seed(), attempt.strategy(), settings.budget(),
+                    m.construction().focus());
+            Rejected none = settings.steered() ? impossible(m.matroid(), constraints, attempt) : null;
+            if (none != null) {
+                rejected.add(none);
+                break;
             }
-            if (result instanceof SearchResult.Unknown u) {
-                rejected.add(new Rejected.Unknown(attempt, u.reason()));
-                continue;
-            }
-            MinimalCore core = ((SearchResult.Found) result).core();
-            String filter = filter(core.core(), kept);
-            if (filter != null) {
-                rejected.add(new Rejected.Filtered(attempt, filter));
-                continue;
+            MinimalCore core;
+            if (settings.steered()) {
+                SteeredSearch.Result result = new SteeredSearch(search, constraints, settings.totalMillis(),
+                        Progress.SILENT).search(m.matroid());
+                if (result instanceof SteeredSearch.NoneExists e) {
+                    // the enumeration does not depend on the seed: further runs would repeat it
+                    rejected.add(new Rejected.NoneExists(attempt, e.enumerated()));
+                    break;
+                }
+                if (result instanceof SteeredSearch.Unknown u) {
+                    rejected.add(new Rejected.Unknown(attempt, u.reason()));
+                    continue;
+                }
+                core = ((SteeredSearch.Found) result).core();
+            } else {
+                SearchResult result = new UnsatCoreSearch(search, Progress.SILENT).reduce(m.matroid());
+                if (result instanceof SearchResult.Orientable) {
+                    rejected.add(new Rejected.Orientable(attempt));
+                    continue;
+                }
+                if (result instanceof SearchResult.Unknown u) {
+                    rejected.add(new Rejected.Unknown(attempt, u.reason()));
+                    continue;
+                }
+                core = ((SearchResult.Found) result).core();
             }
             int cls = classOf(core.core(), representatives, shapes);
             if (cls < 0) {
@@ -394,14 +494,21 @@ public final class FamilyExploration {
         return new MemberFindings(n, m.matroid().size(), m.matroid().rank(), classes, rejected);
     }
 
-    /** Why {@code core} is not accepted, or null when it is. */
-    private String filter(ExplicitMatroid core, List<String> kept) {
-        List<String> missing = kept.stream().filter(l -> !core.labels().contains(l)).toList();
-        if (!missing.isEmpty()) {
-            return "the core lacks the kept vertices " + String.join(" ", missing);
+    /**
+     * "None exists" without a search when the wanted rank is out of reach: a minor's rank is at
+     * most the member's, and every matroid of rank at most 2 is orientable; else null.
+     */
+    private static Rejected impossible(Matroid member, CoreConstraints constraints, Attempt attempt) {
+        if (constraints.rank().isEmpty()) {
+            return null;
         }
-        if (settings.targetRank().isPresent() && core.rank() != settings.targetRank().getAsInt()) {
-            return "the core has rank " + core.rank() + ", not " + settings.targetRank().getAsInt();
+        int r = constraints.rank().getAsInt();
+        if (r > member.rank()) {
+            return new Rejected.NoneExists(attempt, "the member has rank " + member.rank() + " < " + r
+                    + ", and no minor has a larger rank than its matroid");
+        }
+        if (r < CoreConstraints.SMALLEST_CORE_RANK) {
+            return new Rejected.NoneExists(attempt, "every matroid of rank " + r + " is orientable");
         }
         return null;
     }

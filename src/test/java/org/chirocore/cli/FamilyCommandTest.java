@@ -1,6 +1,7 @@
 package org.chirocore.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -59,6 +60,28 @@ class FamilyCommandTest {
                 "--keep", "000", "--out", out.toString()).exit());
         CliRun bare = CliRun.of("family", "families/corner.json", "--n", "3", "--out", out.toString());
         assertEquals(2, bare.exit());
+    }
+
+    @Test
+    void exploresSteeredToRankNAndFollowsAShape() {
+        Path out = dir.resolve("steered");
+        CliRun run = CliRun.of("family", "explore", "families/corner.json", "--n", "3..4", "--runs", "1",
+                "--rank", "n", "--avoid", "all ones", "--follow", "elements=2*n,rank=n", "--out", out.toString());
+        // the corner family contracts the all-ones vertex, so it cannot be avoided
+        assertEquals(2, run.exit(), run.out());
+        assertTrue(run.err().contains("--avoid \"all ones\" at n = 3 is the vertex 111"), run.err());
+        run = CliRun.of("family", "explore", "families/corner.json", "--n", "3..4", "--runs", "1", "--rank", "n",
+                "--follow", "elements=2*n,rank=n", "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        // n = 4: both rank-4 classes of the corner member have 8 elements (docs/enumerations/corner-n4/summary.md)
+        assertTrue(run.out().contains("shape elements=2*n,rank=n at n = 4: found"), run.out());
+        assertTrue(run.out().contains("shape elements=2*n,rank=n at n = 3: unknown"), run.out());
+        assertTrue(Files.exists(out.resolve("follow.md")) && Files.exists(out.resolve("n=4.core-1.cert.json")));
+        CliRun bad = CliRun.of("family", "explore", "families/corner.json", "--n", "3", "--runs", "1", "--rank", "n+",
+                "--out", dir.resolve("bad").toString());
+        assertEquals(2, bad.exit());
+        assertTrue(bad.err().contains("--rank: "), bad.err());
+        assertFalse(Files.exists(dir.resolve("bad").resolve("explore.json")));
     }
 
     @Test

@@ -9,7 +9,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.OptionalInt;
+import java.util.Optional;
 
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.fixtures.NamedMatroids;
@@ -26,16 +26,17 @@ class FamilyExplorationTest {
     @TempDir
     Path dir;
 
-    private FamilyExploration.Findings explore(int from, int to, int runs, List<String> keep, OptionalInt rank)
-            throws IOException {
+    private FamilyExploration.Findings explore(int from, int to, int runs, List<String> keep, List<String> avoid,
+            String rank) throws IOException {
         FamilyExploration.Settings settings = new FamilyExploration.Settings(0, runs, Budget.UNLIMITED,
-                keep.stream().map(VertexRule::parse).toList(), rank);
+                keep.stream().map(VertexRule::parse).toList(), avoid.stream().map(VertexRule::parse).toList(),
+                Optional.ofNullable(rank).map(FamilyExploration.RankRule::parse), 0);
         return new FamilyExploration(CORNER, dir, settings, FamilyRun.Listener.SILENT).run(from, to);
     }
 
     @Test
     void fourRunsAtThreeAndFourGiveVerifiedClassesWhoseFrequenciesAddUp() throws IOException {
-        FamilyExploration.Findings report = explore(3, 4, 4, List.of(), OptionalInt.empty());
+        FamilyExploration.Findings report = explore(3, 4, 4, List.of(), List.of(), null);
         assertEquals(2, report.members().size());
         for (FamilyExploration.MemberFindings m : report.members()) {
             assertFalse(m.classes().isEmpty(), "n = " + m.n());
@@ -65,7 +66,7 @@ class FamilyExplorationTest {
     void everyCoreAtThreeIsTheFanoPlane() throws IOException {
         // F7, the Fano plane PG(2, 2): Oxley, Matroid Theory, 2nd ed., Example 1.5.7 and Appendix.
         // The corner member at n = 3 is the Fano plane itself (7 elements, rank 3), so every run ends there.
-        FamilyExploration.MemberFindings m = explore(3, 3, 4, List.of(), OptionalInt.empty()).members().get(0);
+        FamilyExploration.MemberFindings m = explore(3, 3, 4, List.of(), List.of(), null).members().get(0);
         assertEquals(1, m.classes().size());
         assertEquals(4, m.classes().get(0).attempts().size());
         assertTrue(new HyperplaneIsomorphismInspector(m.classes().get(0).core(), NamedMatroids.fano()).find()
@@ -73,24 +74,57 @@ class FamilyExplorationTest {
     }
 
     @Test
-    void constraintsFilterRunsAndAreCounted() throws IOException {
-        // no core of the corner family has rank 4 at n = 4 (every core found so far has rank 3)
-        FamilyExploration.MemberFindings m = explore(4, 4, 2, List.of(), OptionalInt.of(4)).members().get(0);
-        assertTrue(m.classes().isEmpty());
-        assertEquals(2, m.rejected().size());
-        assertTrue(m.rejected().get(0).reason().startsWith("filtered: the core has rank 3, not 4"),
-                m.rejected().get(0).reason());
-        // the zero vertex is in every accepted core when it is kept
-        FamilyExploration.MemberFindings kept = explore(4, 4, 4, List.of("all zeros"), OptionalInt.empty()).members().get(0);
-        assertEquals(4, kept.rejected().size() + kept.classes().stream().mapToInt(c -> c.attempts().size()).sum());
-        kept.classes().forEach(c -> assertTrue(c.core().labels().contains("0000")));
+    void rankNSteersToTheFanoPlaneAtThreeAndAnEightElementRankFourCoreAtFour() throws IOException {
+        FamilyExploration.Findings report = explore(3, 4, 1, List.of(), List.of(), "n");
+        // n = 3: the member is the Fano plane (rank 3 = n); Oxley, Matroid Theory, 2nd ed., Example 1.5.7
+        FamilyExploration.MemberFindings three = report.members().get(0);
+        assertEquals(1, three.classes().size());
+        assertTrue(new HyperplaneIsomorphismInspector(three.classes().get(0).core(), NamedMatroids.fano()).find()
+                .isPresent());
+        // n = 4: every rank-4 core of the corner member has 8 elements (the complete enumeration in
+        // docs/enumerations/corner-n4/summary.md, classes 1 and 2), so the steered run finds one of them
+        FamilyExploration.MemberFindings four = report.members().get(1);
+        assertEquals(1, four.classes().size(), four.rejected().toString());
+        FamilyExploration.CoreClass c = four.classes().get(0);
+        assertEquals(4, c.core().rank());
+        assertEquals(8, c.core().size());
+        assertTrue(c.core().basisCount() == 59 || c.core().basisCount() == 56, "bases " + c.core().basisCount());
+        String name = c.certificate().orElseThrow().file();
+        assertTrue(CertificateVerifier.verify(dir.resolve(name)).passed(), name);
+        String json = Files.readString(dir.resolve(FamilyExploration.EXPLORE_JSON));
+        assertTrue(json.contains("\"rank\": \"n\""), json);
+    }
+
+    @Test
+    void aRankOutOfReachOrAnAvoidedFanoPointIsProvedAbsent() throws IOException {
+        // the corner member at n has rank n (docs/families.md), so no minor has rank n + 1
+        FamilyExploration.MemberFindings high = explore(3, 3, 3, List.of(), List.of(), "n+1").members().get(0);
+        assertTrue(high.classes().isEmpty());
+        assertTrue(high.noneExists().isPresent());
+        assertEquals(1, high.rejected().size(), "the remaining runs are skipped");
+        // every single-element deletion of F7 is M(K4), graphic hence orientable (Oxley, Matroid Theory,
+        // 2nd ed., Proposition 6.4.8 and Section 5.1), so with one vertex avoided nothing is left to find:
+        // the steered search enumerates and answers "none exists", not a core
+        FamilyExploration.MemberFindings avoided = explore(3, 3, 2, List.of(), List.of("all zeros"), "3").members()
+                .get(0);
+        assertTrue(avoided.classes().isEmpty());
+        assertTrue(avoided.noneExists().orElseThrow().reason().startsWith("none exists: "),
+                avoided.rejected().toString());
+    }
+
+    @Test
+    void aKeptVertexIsInEverySteeredCore() throws IOException {
+        FamilyExploration.MemberFindings kept = explore(4, 4, 2, List.of("all zeros"), List.of(), null).members()
+                .get(0);
+        assertFalse(kept.classes().isEmpty());
+        kept.classes().forEach(c -> assertTrue(c.core().labels().contains("0000"), c.core().labels().toString()));
     }
 
     @Test
     void aKeptVertexThatIsContractedIsRejected() {
         // the corner family contracts the all-ones vertex
         FamilyException e = assertThrows(FamilyException.class,
-                () -> explore(3, 3, 1, List.of("all ones"), OptionalInt.empty()));
+                () -> explore(3, 3, 1, List.of("all ones"), List.of(), null));
         assertTrue(e.getMessage().contains("--keep \"all ones\" at n = 3 is the vertex 111"), e.getMessage());
     }
 }

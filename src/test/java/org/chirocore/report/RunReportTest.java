@@ -10,7 +10,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.OptionalInt;
 import java.util.regex.Pattern;
 
 import org.chirocore.family.FamilyDefinition;
@@ -89,8 +88,8 @@ class RunReportTest {
 
     @Test
     void explorationIsReported(@TempDir Path dir) throws IOException {
-        new FamilyExploration(CORNER_DEFINITION, dir, new FamilyExploration.Settings(0, 2, Budget.UNLIMITED, List.of(),
-                OptionalInt.empty()), FamilyRun.Listener.SILENT).run(3, 3);
+        new FamilyExploration(CORNER_DEFINITION, dir, FamilyExploration.Settings.unconstrained(0, 2, Budget.UNLIMITED),
+                FamilyRun.Listener.SILENT).run(3, 3);
         assertTrue(RunReport.kindOf(dir) instanceof ExploreRunKind);
         String md = ReportFormat.MD.render(RunReport.of(dir), "explore").text();
         assertTrue(md.contains("Exploration of the family corner"), md);

@@ -144,29 +144,15 @@ public final class CoreEnumeration {
         Run run = new Run();
         List<Integer> ranks = constraints.ranks(m.rank());
         for (int rank : ranks) {
-            int k = m.rank() - rank;
-            int[] c = ElementSets.range(k);
-            do {
-                long mask = ElementSets.mask(c);
-                if (m.rank(c) < k || !symmetry.isRepresentative(mask)) {
-                    continue;
-                }
+            for (int[] c : symmetry.independentRepresentatives(m, m.rank() - rank)) {
                 run.representatives++;
-                run.contractionSets += orbit(mask).size();
-                explore(m, c.clone(), run);
-            } while (ElementSets.nextCombination(c, m.size()));
+                run.contractionSets += symmetry.orbitSize(ElementSets.mask(c));
+                explore(m, c, run);
+            }
         }
         return new Result(Optional.ofNullable(run.incomplete), ranks, run.representatives, run.contractionSets,
                 run.classes, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started,
                 run.evidence);
-    }
-
-    private Set<Long> orbit(long set) {
-        Set<Long> images = new HashSet<>();
-        for (int[] p : symmetry.permutations()) {
-            images.add(symmetry.apply(p, set));
-        }
-        return images;
     }
 
     /** Enumerates the minimal non-orientable restrictions of M/C and records the cores among them. */
