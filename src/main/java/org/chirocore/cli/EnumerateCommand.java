@@ -17,6 +17,7 @@ import org.chirocore.cert.Source;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.orient.Chirotope;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.pipeline.Subject;
 import org.chirocore.search.CoreConstraints;
@@ -50,6 +51,8 @@ final class EnumerateCommand implements Callable<Integer> {
     /** The summary's file names in the output directory. */
     static final String SUMMARY_JSON = "summary.json";
     static final String SUMMARY_MD = "summary.md";
+    /** The completeness evidence, written when the enumeration is complete (docs/enumeration.md). */
+    static final String COMPLETENESS_JSON = "completeness.json";
 
     @Spec
     private CommandSpec spec;
@@ -83,7 +86,7 @@ final class EnumerateCommand implements Callable<Integer> {
         if (!symmetry.equals("auto") && !symmetry.equals("none")) {
             throw new ParameterException(spec.commandLine(), "--symmetry is auto or none, not \"" + symmetry + "\".");
         }
-        output.checkDirectory(out, Arrays.asList(inputs.file()), List.of(SUMMARY_JSON, SUMMARY_MD));
+        output.checkDirectory(out, Arrays.asList(inputs.file()), List.of(SUMMARY_JSON, SUMMARY_MD, COMPLETENESS_JSON));
         Subject input = inputs.choose();
         if (!SteeredSearch.explorable(input.matroid())) {
             throw new BadInputException("the matroid (rank " + input.matroid().rank() + " on " + input.matroid().size()
@@ -98,7 +101,7 @@ final class EnumerateCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new ParameterException(spec.commandLine(), e.getMessage());
         }
-        Symmetry group = group(input, m);
+        Symmetry group = group(input, m, symmetry.equals("none"));
         try {
             Files.createDirectories(out);
         } catch (IOException e) {
@@ -113,6 +116,9 @@ final class EnumerateCommand implements Callable<Integer> {
             certificates.add(certify(result.classes().get(k), input, k + 1));
         }
         Inputs.write(out.resolve(SUMMARY_JSON), summaryJson(input, m, group, result, certificates));
+        if (result.complete()) {
+            Inputs.write(out.resolve(COMPLETENESS_JSON), completenessJson(input, m, group, result, certificates));
+        }
         String markdown = summaryMarkdown(m, group, result, certificates);
         Inputs.writeText(out.resolve(SUMMARY_MD), markdown);
         PrintWriter w = spec.commandLine().getOut();
@@ -123,8 +129,12 @@ final class EnumerateCommand implements Callable<Integer> {
     }
 
 
-    private Symmetry group(Subject input, ExplicitMatroid m) {
-        if (symmetry.equals("none")) {
+    /**
+     * The group of {@code input}: none when asked, the cube's subgroup fixing H and O for a cube
+     * construction, else the automorphism group of m.
+     */
+    static Symmetry group(Subject input, ExplicitMatroid m, boolean none) {
+        if (none) {
             return Symmetry.none(m.size());
         }
         if (input.source() instanceof Source.Constructed c) {
@@ -133,7 +143,7 @@ final class EnumerateCommand implements Callable<Integer> {
         try {
             return Symmetry.automorphisms(m);
         } catch (IllegalArgumentException e) {
-            throw new BadInputException(inputs.file() + ": " + e.getMessage(), e);
+            throw new BadInputException(input.file().map(Path::toString).orElse("the input") + ": " + e.getMessage(), e);
         }
     }
 
@@ -150,6 +160,64 @@ final class EnumerateCommand implements Callable<Integer> {
 
     static String certificateName(int k) {
         return "class-" + k + ".cert.json";
+    }
+
+    /**
+     * The completeness evidence: the input, the group's permutations (image of each element by
+     * number), each class's certificate, and per representative contraction set its maximal
+     * orientable restrictions with their witnesses' signs and its minimal non-orientable ones.
+     */
+    private static Json completenessJson(Subject input, ExplicitMatroid m, Symmetry group, CoreEnumeration.Result r,
+            List<Optional<CertificateWriter.Written>> certificates) {
+        List<Json> sets = new ArrayList<>();
+        for (CoreEnumeration.ContractionEvidence e : r.evidence()) {
+            List<Json> maximal = new ArrayList<>();
+            for (CoreEnumeration.MaximalOrientable t : e.maximal()) {
+                maximal.add(Json.Obj.builder().put("elements", Json.Arr.ofStrings(t.elements()))
+                        .put("signs", t.witness().<Json>map(w -> new Json.Str(signs(w))).orElse(Json.NULL)).build());
+            }
+            sets.add(Json.Obj.builder().put("contracted", Json.Arr.ofStrings(e.contracted()))
+                    .put("maximalOrientable", new Json.Arr(maximal))
+                    .put("minimalNonOrientable", new Json.Arr(e.minimal().stream().<Json>map(Json.Arr::ofStrings).toList()))
+                    .build());
+        }
+        List<Json> permutations = group.permutations().stream().<Json>map(
+                p -> new Json.Arr(Arrays.stream(p).<Json>mapToObj(Json.Num::of).toList())).toList();
+        List<Json> classes = new ArrayList<>();
+        for (int k = 0; k < certificates.size(); k++) {
+            classes.add(certificates.get(k).isPresent() ? new Json.Str(certificateName(k + 1)) : Json.NULL);
+        }
+        return Json.Obj.builder()
+                .put("format", "chirocore-completeness")
+                .put("version", 1)
+                .put("input", source(input, m))
+                .put("labels", Json.Arr.ofStrings(m.labels()))
+                .put("ranks", new Json.Arr(r.ranks().stream().<Json>map(Json.Num::of).toList()))
+                .put("symmetry", Json.Obj.builder().put("kind", group.kind())
+                        .put("permutations", new Json.Arr(permutations)).build())
+                .put("certificates", new Json.Arr(classes))
+                .put("contractionSets", new Json.Arr(sets))
+                .build();
+    }
+
+    /** A witness's signs as '+' and '-', one per basis in canonical order. */
+    private static String signs(Chirotope w) {
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < w.size(); i++) {
+            b.append(w.sign(i) > 0 ? '+' : '-');
+        }
+        return b.toString();
+    }
+
+    /** The input as the certificates' provenance records it: the construction, or the file's hash; size and rank. */
+    private static Json source(Subject input, ExplicitMatroid m) {
+        Json.Obj.Builder source = Json.Obj.builder();
+        if (input.source() instanceof Source.Constructed c) {
+            source.put("construction", CertificateWriter.construction(c.construction()));
+        } else if (input.source() instanceof Source.Given g) {
+            source.put("sha256", g.sha256());
+        }
+        return source.put("elements", m.size()).put("rank", m.rank()).build();
     }
 
     private static Json summaryJson(Subject input, ExplicitMatroid m, Symmetry group,
@@ -175,16 +243,10 @@ final class EnumerateCommand implements Callable<Integer> {
                     .put("solverCallsAtDiscovery", c.solverCallsAtDiscovery())
                     .build());
         }
-        Json.Obj.Builder source = Json.Obj.builder();
-        if (input.source() instanceof Source.Constructed c) {
-            source.put("construction", CertificateWriter.construction(c.construction()));
-        } else if (input.source() instanceof Source.Given g) {
-            source.put("sha256", g.sha256());
-        }
         return Json.Obj.builder()
                 .put("format", "chirocore-enumeration")
                 .put("version", 1)
-                .put("input", source.put("elements", m.size()).put("rank", m.rank()).build())
+                .put("input", source(input, m))
                 .put("ranks", new Json.Arr(r.ranks().stream().<Json>map(Json.Num::of).toList()))
                 .put("symmetry", Json.Obj.builder().put("kind", group.kind()).put("order", group.order()).build())
                 .put("complete", r.complete())

@@ -13,6 +13,7 @@ import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
 import org.chirocore.io.IoMessages;
+import org.chirocore.io.Json;
 import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.Catalogue;
 import org.chirocore.matroid.ExplicitMatroid;
@@ -22,6 +23,8 @@ import org.chirocore.pipeline.Subject;
 import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.SteeredSearch;
 import org.chirocore.search.Strategy;
+import org.chirocore.search.marco.SmallestCore;
+import org.chirocore.search.marco.Symmetry;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -91,23 +94,38 @@ final class ReduceCommand implements Callable<Integer> {
     @Option(names = "--avoid", paramLabel = "V", split = ",", description = "Elements (labels) that must be deleted.")
     private List<String> avoid = List.of();
 
+    @Option(names = "--smallest",
+            description = "Find a core with the fewest elements: every contraction set (up to the symmetry of the input) is "
+                    + "searched for a non-orientable restriction smaller than the best so far, until none is left. Why "
+                    + "nothing smaller exists goes to FILE.smallest.json beside the certificate. Not with --rank, --keep "
+                    + "or --avoid.")
+    private boolean smallest;
+
     @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
-            description = "With --rank, --keep or --avoid: wall-clock limit of the whole search, after which it "
+            description = "With --rank, --keep, --avoid or --smallest: wall-clock limit of the whole search, after which it "
                     + "answers unknown; 0 (default) for none.")
     private double totalTime;
 
     @Override
     public Integer call() {
         // A large proof goes beside the certificate, so its name is an output too.
-        output.checkFiles(Arrays.asList(inputs.file()), out, CertificateWriter.dratFile(out), witnessOut);
+        output.checkFiles(Arrays.asList(inputs.file()), out, CertificateWriter.dratFile(out), witnessOut,
+                smallest ? smallestRecord(out) : null);
         Subject input = inputs.choose();
         CoreConstraints constraints = constraints(input);
+        if (smallest && constraints.any()) {
+            throw new ParameterException(spec.commandLine(), "--smallest does not combine with --rank, --keep or --avoid: "
+                    + "a smallest minor meeting them need not be minor-minimal.");
+        }
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CertifiedReduction.Outcome outcome;
         try {
             CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
                     budget.budget());
             Subject subject = focus ? input : input.withoutFocus();
+            if (smallest) {
+                return smallest(subject, settings, progress);
+            }
             if (constraints.any()) {
                 SteeredSearch.Result steered = new SteeredSearch(settings.search(subject), constraints,
                         Math.round(totalTime * 1000), progress).search(subject.matroid());
@@ -144,6 +162,68 @@ final class ReduceCommand implements Callable<Integer> {
         }
         w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
         return ExitCodes.UNKNOWN;
+    }
+
+    /** The side file of --smallest: the record of the contraction sets searched. */
+    static Path smallestRecord(Path certificate) {
+        return certificate.resolveSibling(certificate.getFileName() + ".smallest.json");
+    }
+
+    /** --smallest: the search, then the certificate of its answer and the record of why nothing is smaller. */
+    private int smallest(Subject subject, CertifiedReduction.Settings settings, ConsoleProgress progress)
+            throws IOException {
+        ExplicitMatroid m = ExplicitMatroid.of(subject.matroid());
+        Symmetry group = EnumerateCommand.group(subject, m, false);
+        SmallestCore.Result r = new SmallestCore(settings.search(subject), group, Math.round(totalTime * 1000), progress).search(m);
+        progress.finish();
+        PrintWriter w = spec.commandLine().getOut();
+        String from = Format.shape(m.rank(), m.size());
+        if (r instanceof SmallestCore.Unknown u) {
+            w.println("unknown: " + u.reason() + "; no certificate written");
+            return ExitCodes.UNKNOWN;
+        }
+        if (r instanceof SmallestCore.NoneExists none) {
+            w.println("orientable: " + from + "; every minor of at most " + m.size() + " elements was searched ("
+                    + none.searched().size() + " contraction sets up to symmetry); no certificate written");
+            return ExitCodes.OK;
+        }
+        SmallestCore.Found found = (SmallestCore.Found) r;
+        CertifiedReduction.Outcome outcome = CertifiedReduction.certify(
+                CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file());
+        if (!(outcome instanceof CertifiedReduction.Verified v)) {
+            w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
+            return ExitCodes.UNKNOWN;
+        }
+        summarise(w, from, m.size(), v);
+        int size = found.core().core().size();
+        Inputs.write(smallestRecord(out), smallestJson(group, found));
+        w.println("smallest: no non-orientable minor has fewer than " + size + " elements: "
+                + found.searched().size() + " contraction sets up to symmetry ("
+                + found.searched().stream().mapToInt(SmallestCore.Exhausted::orbit).sum() + " in all, symmetry "
+                + group.kind() + " of order " + group.order() + ") each searched to exhaustion below "
+                + size + " elements; wrote " + smallestRecord(out));
+        return ExitCodes.OK;
+    }
+
+    private static Json smallestJson(Symmetry group, SmallestCore.Found found) {
+        List<Json> sets = found.searched().stream().<Json>map(e -> Json.Obj.builder()
+                .put("contracted", Json.Arr.ofStrings(e.contracted()))
+                .put("orbit", e.orbit())
+                .put("noNonOrientableRestrictionBelow", e.exhaustedBelow())
+                .put("orientableRestrictions", e.orientable())
+                .put("minimalNonOrientableRestrictions", e.nonOrientable())
+                .put("solverCalls", e.solverCalls())
+                .build()).toList();
+        return Json.Obj.builder()
+                .put("format", "chirocore-smallest-core")
+                .put("version", 1)
+                .put("elements", found.core().core().size())
+                .put("symmetry", Json.Obj.builder().put("kind", group.kind()).put("order", group.order()).build())
+                .put("trusted", "the producer's SAT answers (orientable restrictions and the exhausted map of "
+                        + "unexplored subsets), not independently checked")
+                .put("contractionSets", new Json.Arr(sets))
+                .put("millis", found.millis())
+                .build();
     }
 
     /** The constraints of --rank, --keep and --avoid, checked against the input. */

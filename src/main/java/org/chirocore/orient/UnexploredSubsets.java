@@ -46,6 +46,8 @@ public final class UnexploredSubsets {
     private final List<Long> supersetsBlocked = new ArrayList<>();
     private boolean contradiction;
     private int calls;
+    /** The largest size a seed may have (the ground set's size until {@link #limitSize} lowers it). */
+    private int cap;
 
     /**
      * A map of the subsets T of {0, …, size − 1} with {@code required} ⊆ T ⊆ {@code allowed}.
@@ -62,6 +64,7 @@ public final class UnexploredSubsets {
         }
         this.size = size;
         this.allowed = allowed & ElementSets.allMask(size);
+        this.cap = size;
         this.solver = SolverFactory.newDefault();
         solver.newVar(Math.max(size, 1));
         for (int e = 0; e < size; e++) {
@@ -97,6 +100,23 @@ public final class UnexploredSubsets {
     public void blockSupersets(long set) {
         supersetsBlocked.add(set);
         add(literals(set, -1));
+    }
+
+    /**
+     * From now on only sets of at most {@code k} elements are unexplored (a cardinality constraint
+     * of sat4j); a search for small sets lowers it as it finds them.
+     */
+    public void limitSize(int k) {
+        if (k >= cap || contradiction) {
+            cap = Math.min(cap, Math.max(k, 0));
+            return;
+        }
+        cap = Math.max(k, 0);
+        try {
+            solver.addAtMost(new VecInt(literals(allowed, 1)), cap);
+        } catch (ContradictionException e) {
+            contradiction = true;
+        }
     }
 
     private static int[] literals(long set, int sign) {
@@ -141,7 +161,7 @@ public final class UnexploredSubsets {
         }
         for (int e : order) {
             long bigger = set | (1L << e);
-            if ((allowed & (1L << e)) != 0 && bigger != set && !containsBlocked(bigger)) {
+            if ((allowed & (1L << e)) != 0 && bigger != set && Long.bitCount(bigger) <= cap && !containsBlocked(bigger)) {
                 set = bigger;
             }
         }

@@ -12,6 +12,7 @@ import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.matroid.MatroidShape;
 import org.chirocore.matroid.Minor;
+import org.chirocore.orient.Chirotope;
 import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.MinimalityDecider;
@@ -48,6 +49,30 @@ public final class CoreEnumeration {
     }
 
     /**
+     * A maximal orientable restriction (M/C)|T: its elements, and when T spans M/C its checked
+     * orientation witness (one sign per basis of (M/C)|T in canonical order); a T that does not
+     * span holds no basis of M/C, so no relation, and has no witness.
+     */
+    public record MaximalOrientable(List<String> elements, Optional<Chirotope> witness) {
+        public MaximalOrientable {
+            elements = List.copyOf(elements);
+        }
+    }
+
+    /**
+     * The completeness evidence of one contraction set C (a representative of its orbit): every
+     * maximal orientable and every minimal non-orientable restriction of M/C, as label lists.
+     */
+    public record ContractionEvidence(List<String> contracted, List<MaximalOrientable> maximal,
+            List<List<String>> minimal) {
+        public ContractionEvidence {
+            contracted = List.copyOf(contracted);
+            maximal = List.copyOf(maximal);
+            minimal = minimal.stream().map(List::copyOf).toList();
+        }
+    }
+
+    /**
      * The enumeration.
      *
      * @param incomplete why it is not complete (a budget ran out), empty when it is complete
@@ -59,12 +84,16 @@ public final class CoreEnumeration {
      * @param deadEnds those with a non-orientable single-element contraction
      * @param solverCalls orientability solves, map calls and minimality decisions
      * @param millis wall-clock time
+     * @param evidence per representative contraction set, its maximal orientable and minimal
+     *     non-orientable restrictions (complete only when the enumeration is)
      */
     public record Result(Optional<String> incomplete, List<Integer> ranks, int representatives, int contractionSets,
-            List<CoreClass> classes, int restrictions, int deadEnds, int solverCalls, long millis) {
+            List<CoreClass> classes, int restrictions, int deadEnds, int solverCalls, long millis,
+            List<ContractionEvidence> evidence) {
         public Result {
             ranks = List.copyOf(ranks);
             classes = List.copyOf(classes);
+            evidence = List.copyOf(evidence);
         }
 
         /** Whether every contraction set's enumeration finished. */
@@ -92,6 +121,7 @@ public final class CoreEnumeration {
         final List<CoreClass> classes = new ArrayList<>();
         final List<MatroidShape> shapes = new ArrayList<>();
         final Set<Key> seen = new HashSet<>();
+        final List<ContractionEvidence> evidence = new ArrayList<>();
         String incomplete;
         int representatives;
         int contractionSets;
@@ -114,28 +144,15 @@ public final class CoreEnumeration {
         Run run = new Run();
         List<Integer> ranks = constraints.ranks(m.rank());
         for (int rank : ranks) {
-            int k = m.rank() - rank;
-            int[] c = ElementSets.range(k);
-            do {
-                long mask = ElementSets.mask(c);
-                if (m.rank(c) < k || !symmetry.isRepresentative(mask)) {
-                    continue;
-                }
+            for (int[] c : symmetry.independentRepresentatives(m, m.rank() - rank)) {
                 run.representatives++;
-                run.contractionSets += orbit(mask).size();
-                explore(m, c.clone(), run);
-            } while (ElementSets.nextCombination(c, m.size()));
+                run.contractionSets += symmetry.orbitSize(ElementSets.mask(c));
+                explore(m, c, run);
+            }
         }
         return new Result(Optional.ofNullable(run.incomplete), ranks, run.representatives, run.contractionSets,
-                run.classes, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started);
-    }
-
-    private Set<Long> orbit(long set) {
-        Set<Long> images = new HashSet<>();
-        for (int[] p : symmetry.permutations()) {
-            images.add(symmetry.apply(p, set));
-        }
-        return images;
+                run.classes, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started,
+                run.evidence);
     }
 
     /** Enumerates the minimal non-orientable restrictions of M/C and records the cores among them. */
@@ -145,11 +162,17 @@ public final class CoreEnumeration {
         progress.report("contracting " + (c.length == 0 ? "nothing" : String.join(" ", contracted)), n0.size(),
                 n0.rank(), run.solverCalls);
         RestrictionExplorer explorer = new RestrictionExplorer(n0, 0, settings.budget(), true, settings.seed());
+        List<MaximalOrientable> maximal = new ArrayList<>();
+        List<List<String>> minimal = new ArrayList<>();
         try {
             while (true) {
                 RestrictionExplorer.Step step = explorer.next();
                 if (step instanceof RestrictionExplorer.Done) {
+                    run.evidence.add(new ContractionEvidence(contracted, maximal, minimal));
                     return;
+                }
+                if (step instanceof RestrictionExplorer.Orientable o) {
+                    maximal.add(new MaximalOrientable(labels(n0, o.set()), o.witness()));
                 }
                 if (step instanceof RestrictionExplorer.OutOfBudget o) {
                     run.incomplete = "the enumeration after contracting " + contracted + " ran out of budget: "
@@ -158,12 +181,17 @@ public final class CoreEnumeration {
                 }
                 if (step instanceof RestrictionExplorer.MinimalNonOrientable mus) {
                     run.restrictions++;
+                    minimal.add(labels(n0, mus.set()));
                     candidate(m, n0, mus.set(), contracted, run);
                 }
             }
         } finally {
             run.solverCalls += explorer.solverCalls();
         }
+    }
+
+    private static List<String> labels(ExplicitMatroid n, long set) {
+        return Arrays.stream(ElementSets.elements(set)).mapToObj(n.labels()::get).toList();
     }
 
     private void candidate(ExplicitMatroid m, ExplicitMatroid n0, long set, List<String> contracted, Run run) {

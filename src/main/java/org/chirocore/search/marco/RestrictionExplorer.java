@@ -316,6 +316,15 @@ public final class RestrictionExplorer {
     }
 
     /**
+     * From now on only restrictions of at most {@code k} elements are explored: a non-orientable
+     * seed is shrunk, so what is reported has at most k elements too; {@link Done} then means
+     * that no restriction of at most k elements is minimal non-orientable.
+     */
+    public void limitSize(int k) {
+        map.limitSize(k);
+    }
+
+    /**
      * Marks every superset of {@code set} explored without reporting it: for a caller that knows
      * such sets hold nothing it wants (e.g. no core: a set containing U + e where (N/e)|U is
      * non-orientable has a non-orientable contraction).

@@ -168,6 +168,27 @@ public record Symmetry(String kind, List<int[]> permutations) {
         return true;
     }
 
+    /**
+     * The independent sets of {@code k} elements of m that are the representatives of their
+     * orbits, in the order of {@link ElementSets#nextCombination}: the contraction sets of the
+     * minors of rank rank(m) − k, one per orbit.
+     */
+    public List<int[]> independentRepresentatives(ExplicitMatroid m, int k) {
+        List<int[]> out = new ArrayList<>();
+        int[] c = ElementSets.range(k);
+        do {
+            if (m.rank(c) == k && isRepresentative(ElementSets.mask(c))) {
+                out.add(c.clone());
+            }
+        } while (ElementSets.nextCombination(c, m.size()));
+        return out;
+    }
+
+    /** How many sets the group maps {@code set} to ({@code set} included). */
+    public int orbitSize(long set) {
+        return (int) permutations.stream().map(p -> apply(p, set)).distinct().count();
+    }
+
     private static int compare(int[] a, int[] b) {
         return Arrays.compare(a, b);
     }

@@ -147,7 +147,7 @@ public final class CertificateVerifier {
     }
 
     /** A failed check; the message names the first offending item. */
-    private static final class Failure extends Exception {
+    static final class Failure extends Exception {
         private static final long serialVersionUID = 1L;
 
         Failure(String message) {
@@ -156,7 +156,7 @@ public final class CertificateVerifier {
     }
 
     /** A check that cannot run without more input. */
-    private static final class Skipped extends Exception {
+    static final class Skipped extends Exception {
         private static final long serialVersionUID = 1L;
 
         Skipped(String message) {
@@ -164,12 +164,13 @@ public final class CertificateVerifier {
         }
     }
 
-    private interface Step {
+    interface Step {
         /** Runs the check; returns what was checked. */
         String run() throws Failure, Skipped, IOException, ProvenanceCheck.Mismatch;
     }
 
-    private static Check run(String name, Step step) {
+    /** Runs one check: PASS with what was checked, FAIL with the first offence, NOT_RUN when skipped; never throws. */
+    static Check run(String name, Step step) {
         try {
             return new Check(name, Status.PASS, step.run());
         } catch (Failure | ProvenanceCheck.Mismatch | JsonTree.Mistyped e) {

@@ -33,8 +33,11 @@ final class ProvenanceCheck {
         }
     }
 
-    /** A matroid to take a minor of: its labels and its rank function on sets of element numbers. */
-    private record Source(List<String> labels, ToIntFunction<BitSet> rank, int fullRank, BitSet contractedFirst) {
+    /**
+     * A matroid to take a minor of: its labels and its rank function on sets of element numbers;
+     * {@code contractedFirst} is contracted before any minor is taken (a construction's pulled vertex).
+     */
+    record Source(List<String> labels, ToIntFunction<BitSet> rank, int fullRank, BitSet contractedFirst) {
     }
 
     private ProvenanceCheck() {
@@ -87,6 +90,29 @@ final class ProvenanceCheck {
         compareMinor(source, allContracted, deleted, coreLabels, core);
         return Optional.of(what + ", /C\\D with |C| = " + contracted.cardinality() + ", |D| = " + deleted.cardinality()
                 + ", gives the core exactly");
+    }
+
+    /**
+     * The matroid an input record names (as an enumeration records it: {@code construction}, or
+     * {@code sha256} of the file {@code input}; with {@code elements} and {@code rank} of the
+     * matroid after {@code contractedFirst} is contracted), rebuilt with our own code.
+     */
+    static Source input(JsonTree.Obj record, Optional<Path> input) throws Mismatch, IOException {
+        if (record.has("construction")) {
+            record.requireOnly(List.of("construction", "elements", "rank"));
+            Source s = cube(record.requireObject("construction"));
+            int elements = s.labels().size() - s.contractedFirst().cardinality();
+            int rank = s.fullRank() - s.rank().applyAsInt(s.contractedFirst());
+            if (elements != record.requireInt("elements") || rank != record.requireInt("rank")) {
+                throw new Mismatch("the construction gives " + elements + " elements of rank " + rank + ", not the recorded "
+                        + record.requireInt("elements") + " and " + record.requireInt("rank"));
+            }
+            return s;
+        }
+        if (input.isEmpty()) {
+            throw new Mismatch("the input is a matroid file: give it with --input");
+        }
+        return given(record, input.get());
     }
 
     /**
@@ -468,7 +494,7 @@ final class ProvenanceCheck {
         return u;
     }
 
-    private static int[] firstCombination(int k) {
+    static int[] firstCombination(int k) {
         int[] c = new int[Math.max(k, 0)];
         for (int i = 0; i < c.length; i++) {
             c[i] = i;
@@ -477,7 +503,7 @@ final class ProvenanceCheck {
     }
 
     /** Advances {@code c} to the next k-subset of {0..n−1} in lexicographic order; false after the last. */
-    private static boolean nextCombination(int[] c, int n) {
+    static boolean nextCombination(int[] c, int n) {
         int k = c.length;
         int i = k - 1;
         while (i >= 0 && c[i] == n - k + i) {

@@ -38,6 +38,12 @@ final class VerifierLimits {
     /** Most span-membership tests (one dot product each) when testing general position. */
     static final long MAX_VECTOR_TESTS = 200_000_000L;
 
+    /**
+     * Most sets held while computing the minimal transversals of one contraction set's complements
+     * (completeness evidence); the minimality pass is quadratic in this number.
+     */
+    static final int MAX_TRANSVERSALS = 20_000;
+
     private VerifierLimits() {
     }
 }

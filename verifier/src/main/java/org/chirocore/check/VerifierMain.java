@@ -25,8 +25,9 @@ public final class VerifierMain {
 
     static final String USAGE_TEXT = """
             Usage: java -jar chirocore-verify.jar [--input FILE] [--json] CERT...
-            Checks certificates of minor-minimal non-orientable matroids (docs/certificate-format.md).
-              --input FILE  the matroid file of a given-matroid provenance
+            Checks certificates of minor-minimal non-orientable matroids (docs/certificate-format.md),
+            and an enumeration's completeness evidence, a file named *completeness.json (docs/enumeration.md).
+              --input FILE  the matroid file of a given-matroid provenance or enumeration input
               --json        print a JSON array of verdicts instead of text
             Exit codes: 0 every check of every file ran and passed, 1 some check failed,
             2 bad usage, 4 no check failed but some part was not checked.""";
@@ -82,7 +83,8 @@ public final class VerifierMain {
         boolean passed = true;
         boolean complete = true;
         for (Path file : files) {
-            VerificationReport verdict = CertificateVerifier.verify(file, input);
+            VerificationReport verdict = CompletenessCheck.isEvidence(file) ? CompletenessCheck.verify(file, input)
+                    : CertificateVerifier.verify(file, input);
             passed &= verdict.passed();
             complete &= verdict.complete();
             if (json) {
