@@ -93,8 +93,8 @@ public final class SmallestCore {
     /**
      * A search with these settings (seed, budget per solver call) and symmetry group.
      *
-     * @param totalMillis wall-clock limit of the whole search, checked between explorer steps,
-     *     after which it answers unknown; 0 for none
+     * @param totalMillis wall-clock limit of the whole search, after which it answers unknown; it
+     *     is checked between explorer steps and is the deadline of every solver call; 0 for none
      */
     public SmallestCore(SearchSettings settings, Symmetry symmetry, long totalMillis, Progress progress) {
         this.settings = settings;
@@ -110,6 +110,7 @@ public final class SmallestCore {
     /** Searches {@code m} for a smallest minor-minimal non-orientable minor. */
     public Result search(ExplicitMatroid m) {
         long started = System.currentTimeMillis();
+        long deadline = totalMillis == 0 ? 0 : started + totalMillis;
         List<Exhausted> searched = new ArrayList<>();
         Best best = null;
         int cap = m.size();
@@ -120,7 +121,8 @@ public final class SmallestCore {
                 List<String> contracted = Arrays.stream(c).mapToObj(m.labels()::get).toList();
                 progress.report("at most " + cap + " elements, contracting "
                         + (c.length == 0 ? "nothing" : String.join(" ", contracted)), n.size(), n.rank(), calls);
-                RestrictionExplorer explorer = new RestrictionExplorer(n, 0, settings.budget(), true, settings.seed());
+                RestrictionExplorer explorer = new RestrictionExplorer(n, 0, settings.budget().until(deadline), true,
+                        settings.seed());
                 explorer.limitSize(cap);
                 int orientable = 0;
                 int found = 0;
