@@ -3,11 +3,12 @@ package org.chirocore.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 
+import org.chirocore.family.FamilyExploration;
 import org.chirocore.family.FamilyRun;
 import org.chirocore.family.MemberResult;
 
 /**
- * The console of a family run. Each member's line goes to standard output, flushed, as soon as
+ * The console of a family run or exploration. Each member's lines go to standard output, flushed, as soon as
  * the member is complete, so that a batch job stopped by its time limit still leaves every
  * finished member in its log. Progress goes to standard error, one line per stage of a member
  * ("  12.3 s  n = 5: certifying") so that members running on several threads do not overwrite
@@ -52,6 +53,19 @@ final class FamilyConsole implements FamilyRun.Listener {
                     + dir.resolve(c.certificate()));
         } else {
             out.println("n = " + m.n() + ": " + m.status());
+        }
+        out.flush();
+    }
+
+    @Override
+    public synchronized void explored(FamilyExploration.MemberFindings m) {
+        int runs = m.rejected().size() + m.classes().stream().mapToInt(c -> c.attempts().size()).sum();
+        out.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
+                + " of cores" + m.noneExists().map(x -> "; " + x.reason()).orElse(", " + m.rejected().size()
+                        + " of " + runs + " runs without a core"));
+        for (FamilyExploration.CoreClass c : m.classes()) {
+            out.println("  " + Format.core(c.core()) + " x " + c.attempts().size() + "; " + c.status()
+                    + c.certificate().map(f -> "; " + dir.resolve(f.file())).orElse(""));
         }
         out.flush();
     }

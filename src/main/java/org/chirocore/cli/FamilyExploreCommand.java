@@ -104,16 +104,6 @@ final class FamilyExploreCommand implements Callable<Integer> {
             throw new BadInputException(out + ": cannot write the exploration's files: " + IoMessages.plain(e), e);
         }
         PrintWriter w = spec.commandLine().getOut();
-        for (FamilyExploration.MemberFindings m : report.members()) {
-            w.println("n = " + m.n() + ": " + m.classes().size() + " class" + (m.classes().size() == 1 ? "" : "es")
-                    + " of cores" + m.noneExists().map(x -> "; " + x.reason()).orElse(", " + m.rejected().size()
-                            + " of " + runs + " runs without a core"));
-            for (FamilyExploration.CoreClass c : m.classes()) {
-                w.println("  " + Format.core(c.core()) + " x "
-                        + c.attempts().size() + "; " + c.status()
-                        + c.certificate().map(f -> "; " + out.resolve(f.file())).orElse(""));
-            }
-        }
         w.println("wrote " + out.resolve(FamilyExploration.EXPLORE_MD) + " and "
                 + out.resolve(FamilyExploration.EXPLORE_JSON)
                 + shape.map(x -> ", " + out.resolve(ShapeFollow.FOLLOW_MD) + " and " + out.resolve(ShapeFollow.FOLLOW_JSON))

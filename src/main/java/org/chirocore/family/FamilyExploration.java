@@ -401,7 +401,9 @@ public final class FamilyExploration {
         Files.createDirectories(dir);
         List<MemberFindings> members = new ArrayList<>();
         for (int k = 0; k < built.size(); k++) {
-            members.add(explore(built.get(k), constraints.get(k)));
+            MemberFindings m = explore(built.get(k), constraints.get(k));
+            members.add(m);
+            listener.explored(m);
         }
         Findings report = new Findings(family, settings, members);
         AtomicFiles.writeString(dir.resolve(EXPLORE_MD), report.toMarkdown());

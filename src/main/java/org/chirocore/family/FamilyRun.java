@@ -78,6 +78,13 @@ public final class FamilyRun {
         /** The member's result, its certificate (if any) written and verified; by default ignored. */
         default void finished(MemberResult member) {
         }
+
+        /**
+         * An explored member's findings (family explore), its class certificates written and
+         * verified, as soon as the member is done; by default ignored.
+         */
+        default void explored(FamilyExploration.MemberFindings member) {
+        }
     }
 
     private final FamilyDefinition family;

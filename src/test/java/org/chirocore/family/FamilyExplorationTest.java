@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -32,6 +33,28 @@ class FamilyExplorationTest {
                 keep.stream().map(VertexRule::parse).toList(), avoid.stream().map(VertexRule::parse).toList(),
                 Optional.ofNullable(rank).map(FamilyExploration.RankRule::parse), 0);
         return new FamilyExploration(CORNER, dir, settings, FamilyRun.Listener.SILENT).run(from, to);
+    }
+
+    @Test
+    void eachMemberIsHandedToTheListenerAsSoonAsItIsExplored() throws IOException {
+        // A batch job's log must hold every finished member even when the job is stopped later.
+        List<Integer> seen = new ArrayList<>();
+        List<Boolean> reportWritten = new ArrayList<>();
+        FamilyRun.Listener listener = new FamilyRun.Listener() {
+            @Override
+            public void stage(int n, String stage) {
+            }
+
+            @Override
+            public void explored(FamilyExploration.MemberFindings member) {
+                seen.add(member.n());
+                reportWritten.add(Files.exists(dir.resolve(FamilyExploration.EXPLORE_JSON)));
+            }
+        };
+        FamilyExploration.Settings settings = FamilyExploration.Settings.unconstrained(0, 1, Budget.UNLIMITED);
+        new FamilyExploration(CORNER, dir, settings, listener).run(3, 4);
+        assertEquals(List.of(3, 4), seen);
+        assertEquals(List.of(false, false), reportWritten, "members are handed over before the report is written");
     }
 
     @Test
