@@ -67,7 +67,8 @@ public sealed interface Verdict {
 
     /**
      * ORIENTABLE: a chirotope whose support is exactly the bases and which satisfies every 3-term
-     * Grassmann–Plücker relation was found and re-checked. For n >= 3 the sweep has found none (n = 3..7); one would be a new orientable cube, so it is reported loudly.
+     * Grassmann–Plücker relation was found and re-checked. The sweep has found none for n = 3..7;
+     * one would be a new orientable cube, so it is reported loudly.
      *
      * @param witness the witness's file name in the n's directory
      */
