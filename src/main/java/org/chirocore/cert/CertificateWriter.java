@@ -15,6 +15,7 @@ import org.chirocore.io.Json;
 import org.chirocore.io.Sha256;
 import org.chirocore.matroid.Construction;
 import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.Matroid;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.GpRelation;
 import org.chirocore.orient.Refutation;
@@ -167,7 +168,29 @@ public final class CertificateWriter {
 
     private static Json.Obj nonOrientability(Certificate c, Optional<String> dratFile) {
         Refutation r = c.refutation();
-        BasisIndex index = BasisIndex.of(c.core());
+        Json.Obj.Builder b = refutationCnf(c.core(), r);
+        if (dratFile.isPresent()) {
+            b.put("dratFile", dratFile.get())
+                    .put("dratSha256", Sha256.hex(r.drat().getBytes(StandardCharsets.US_ASCII)));
+        } else {
+            b.put("drat", r.drat());
+        }
+        return b.build();
+    }
+
+    /**
+     * A refutation of {@code m} in the form of a certificate's {@code nonOrientability}
+     * (docs/certificate-format.md) with the DRAT proof inline: the normalised bases, the relations
+     * and the proof, over m's elements in order. The completeness evidence of {@code enumerate}
+     * carries its dead ends' refutations in this form.
+     */
+    public static Json.Obj nonOrientability(Matroid m, Refutation r) {
+        return refutationCnf(m, r).put("drat", r.drat()).build();
+    }
+
+    /** The normalised bases and the relations of a refutation of {@code m}, the proof not yet added. */
+    private static Json.Obj.Builder refutationCnf(Matroid m, Refutation r) {
+        BasisIndex index = BasisIndex.of(m);
         List<Json> normalised = new ArrayList<>();
         for (int v : r.normalised()) {
             normalised.add(Json.Arr.ofInts(ElementSets.elements(index.basis(v))));
@@ -176,16 +199,9 @@ public final class CertificateWriter {
         for (GpRelation g : r.relations()) {
             relations.add(relation(g));
         }
-        Json.Obj.Builder b = Json.Obj.builder()
+        return Json.Obj.builder()
                 .put("normalised", new Json.Arr(normalised))
                 .put("relations", new Json.Arr(relations));
-        if (dratFile.isPresent()) {
-            b.put("dratFile", dratFile.get())
-                    .put("dratSha256", Sha256.hex(r.drat().getBytes(StandardCharsets.US_ASCII)));
-        } else {
-            b.put("drat", r.drat());
-        }
-        return b.build();
     }
 
     /** A relation as the certificate lists it: {@code [[x1, ...], a, b, c, d]}. */

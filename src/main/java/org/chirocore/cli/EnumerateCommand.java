@@ -178,7 +178,7 @@ final class EnumerateCommand implements Callable<Integer> {
             }
             sets.add(Json.Obj.builder().put("contracted", Json.Arr.ofStrings(e.contracted()))
                     .put("maximalOrientable", new Json.Arr(maximal))
-                    .put("minimalNonOrientable", new Json.Arr(e.minimal().stream().<Json>map(Json.Arr::ofStrings).toList()))
+                    .put("minimalNonOrientable", new Json.Arr(e.minimal().stream().<Json>map(EnumerateCommand::minimal).toList()))
                     .build());
         }
         List<Json> permutations = group.permutations().stream().<Json>map(
@@ -189,7 +189,7 @@ final class EnumerateCommand implements Callable<Integer> {
         }
         return Json.Obj.builder()
                 .put("format", "chirocore-completeness")
-                .put("version", 1)
+                .put("version", 2)
                 .put("input", source(input, m))
                 .put("labels", Json.Arr.ofStrings(m.labels()))
                 .put("ranks", new Json.Arr(r.ranks().stream().<Json>map(Json.Num::of).toList()))
@@ -198,6 +198,22 @@ final class EnumerateCommand implements Callable<Integer> {
                 .put("certificates", new Json.Arr(classes))
                 .put("contractionSets", new Json.Arr(sets))
                 .build();
+    }
+
+    /**
+     * A minimal non-orientable set: its elements, and its proof when it has one: a dead end's
+     * contracted element and the refutation of that contraction, or a core's class and element map.
+     */
+    private static Json minimal(CoreEnumeration.MinimalSet s) {
+        Json.Obj.Builder b = Json.Obj.builder().put("elements", Json.Arr.ofStrings(s.elements()));
+        if (s.proof().orElse(null) instanceof CoreEnumeration.DeadEnd d) {
+            b.put("deadEnd", Json.Obj.builder().put("contracted", d.contracted())
+                    .put("nonOrientability", CertificateWriter.nonOrientability(d.minor(), d.refutation())).build());
+        } else if (s.proof().orElse(null) instanceof CoreEnumeration.ClassMember c) {
+            b.put("classMember", Json.Obj.builder().put("class", c.classNumber())
+                    .put("images", Json.Arr.ofStrings(c.images())).build());
+        }
+        return b.build();
     }
 
     /** A witness's signs as '+' and '-', one per basis in canonical order. */

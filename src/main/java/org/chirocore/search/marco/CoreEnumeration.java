@@ -2,17 +2,22 @@ package org.chirocore.search.marco;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.Isomorphism;
 import org.chirocore.matroid.MatroidShape;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.Chirotope;
+import org.chirocore.orient.Refutation;
+import org.chirocore.orient.RefutationSearch;
 import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.MinimalityDecider;
@@ -64,11 +69,46 @@ public final class CoreEnumeration {
      * maximal orientable and every minimal non-orientable restriction of M/C, as label lists.
      */
     public record ContractionEvidence(List<String> contracted, List<MaximalOrientable> maximal,
-            List<List<String>> minimal) {
+            List<MinimalSet> minimal) {
         public ContractionEvidence {
             contracted = List.copyOf(contracted);
             maximal = List.copyOf(maximal);
-            minimal = minimal.stream().map(List::copyOf).toList();
+            minimal = List.copyOf(minimal);
+        }
+    }
+
+    /**
+     * A minimal non-orientable restriction (M/C)|S and, unless an automorphism of the group maps a
+     * class's first core or an earlier proved set onto it (or its refutation ran out of budget),
+     * the proof of what it is.
+     */
+    public record MinimalSet(List<String> elements, Optional<Proof> proof) {
+        public MinimalSet {
+            elements = List.copyOf(elements);
+        }
+    }
+
+    /** Why a minimal non-orientable restriction is a core of a listed class or no core at all. */
+    public sealed interface Proof {
+    }
+
+    /**
+     * (M/C)|S / e is non-orientable, by {@code refutation}: so (M/C)|S is non-orientable and not
+     * minor-minimal.
+     *
+     * @param contracted the label of e
+     * @param minor (M/C)|S / e, on S − e in M's order, the matroid the refutation is over
+     */
+    public record DeadEnd(String contracted, ExplicitMatroid minor, Refutation refutation) implements Proof {
+    }
+
+    /**
+     * (M/C)|S is isomorphic to the first core of class {@code classNumber} (1-based) under the
+     * element map sending the i-th element of S to {@code images.get(i)}.
+     */
+    public record ClassMember(int classNumber, List<String> images) implements Proof {
+        public ClassMember {
+            images = List.copyOf(images);
         }
     }
 
@@ -120,14 +160,25 @@ public final class CoreEnumeration {
         final long started = System.currentTimeMillis();
         final List<CoreClass> classes = new ArrayList<>();
         final List<MatroidShape> shapes = new ArrayList<>();
-        final Set<Key> seen = new HashSet<>();
+        /** Every core met so far and its images under the group, with the index of its class. */
+        final Map<Key, Integer> seen = new HashMap<>();
         final List<ContractionEvidence> evidence = new ArrayList<>();
+        /** Per minimal set listed, in order: C and S over M, the restriction, and the verdict of {@link #candidate}. */
+        final List<Listed> listed = new ArrayList<>();
         String incomplete;
         int representatives;
         int contractionSets;
         int restrictions;
         int deadEnds;
         int solverCalls;
+    }
+
+    /**
+     * A listed minimal set: C and S as masks over M, (M/C)|S, and either the index of its class
+     * (a core) or its non-orientable single-element contraction (a dead end).
+     */
+    private record Listed(long contracted, long set, ExplicitMatroid restriction, int classIndex,
+            Optional<MinimalityDecider.NonOrientableContraction> deadEnd) {
     }
 
     /** A minor of M as a matroid on a labelled ground set: its elements and its bases, as masks over M. */
@@ -150,6 +201,9 @@ public final class CoreEnumeration {
                 explore(m, c, run);
             }
         }
+        if (run.incomplete == null) {
+            prove(m, run);
+        }
         return new Result(Optional.ofNullable(run.incomplete), ranks, run.representatives, run.contractionSets,
                 run.classes, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started,
                 run.evidence);
@@ -168,7 +222,9 @@ public final class CoreEnumeration {
             while (true) {
                 RestrictionExplorer.Step step = explorer.next();
                 if (step instanceof RestrictionExplorer.Done) {
-                    run.evidence.add(new ContractionEvidence(contracted, maximal, minimal));
+                    // the proofs are filled in by prove(), once every class is known
+                    run.evidence.add(new ContractionEvidence(contracted, maximal,
+                            minimal.stream().map(s -> new MinimalSet(s, Optional.empty())).toList()));
                     return;
                 }
                 if (step instanceof RestrictionExplorer.Orientable o) {
@@ -182,7 +238,7 @@ public final class CoreEnumeration {
                 if (step instanceof RestrictionExplorer.MinimalNonOrientable mus) {
                     run.restrictions++;
                     minimal.add(labels(n0, mus.set()));
-                    candidate(m, n0, mus.set(), contracted, run);
+                    candidate(m, n0, ElementSets.mask(c), mus.set(), contracted, run);
                 }
             }
         } finally {
@@ -194,8 +250,9 @@ public final class CoreEnumeration {
         return Arrays.stream(ElementSets.elements(set)).mapToObj(n.labels()::get).toList();
     }
 
-    private void candidate(ExplicitMatroid m, ExplicitMatroid n0, long set, List<String> contracted, Run run) {
+    private void candidate(ExplicitMatroid m, ExplicitMatroid n0, long c, long set, List<String> contracted, Run run) {
         ExplicitMatroid core = ExplicitMatroid.of(Minor.restriction(n0, ElementSets.elements(set)));
+        long s = ElementSets.mask(core.labels().stream().mapToInt(m.labels()::indexOf).toArray());
         MinimalityDecider.Result result = MinimalityDecider.decide(core, settings.budget());
         run.solverCalls += 2 * core.size();
         if (result instanceof MinimalityDecider.Unknown u) {
@@ -205,19 +262,20 @@ public final class CoreEnumeration {
         if (result instanceof MinimalityDecider.NonOrientableDeletion) {
             throw new IllegalStateException("A restriction found minimal non-orientable has a non-orientable deletion.");
         }
-        if (result instanceof MinimalityDecider.NonOrientableContraction) {
+        if (result instanceof MinimalityDecider.NonOrientableContraction d) {
             run.deadEnds++;
+            run.listed.add(new Listed(c, s, core, -1, Optional.of(d)));
             return;
         }
         Key key = key(m, core);
-        if (run.seen.contains(key)) {
+        if (run.seen.containsKey(key)) {
+            run.listed.add(new Listed(c, s, core, run.seen.get(key), Optional.empty()));
             return;
         }
         Set<Key> images = new HashSet<>();
         for (int[] p : symmetry.permutations()) {
             images.add(image(p, key));
         }
-        run.seen.addAll(images);
         MatroidShape shape = MatroidShape.of(core);
         for (int j = 0; j < run.classes.size(); j++) {
             CoreClass k = run.classes.get(j);
@@ -225,6 +283,7 @@ public final class CoreEnumeration {
                     && new HyperplaneIsomorphismInspector(k.example().core(), core).find().isPresent()) {
                 run.classes.set(j, new CoreClass(k.example(), k.count() + images.size(), k.foundAtMillis(),
                         k.solverCallsAtDiscovery()));
+                record(run, images, j, c, s, core);
                 return;
             }
         }
@@ -236,6 +295,80 @@ public final class CoreEnumeration {
         progress.report("found class " + (run.classes.size() + 1), core.size(), core.rank(), run.solverCalls);
         run.classes.add(new CoreClass(example, images.size(), millis, run.solverCalls));
         run.shapes.add(shape);
+        record(run, images, run.classes.size() - 1, c, s, core);
+    }
+
+    private static void record(Run run, Set<Key> images, int classIndex, long c, long s, ExplicitMatroid core) {
+        for (Key k : images) {
+            run.seen.put(k, classIndex);
+        }
+        run.listed.add(new Listed(c, s, core, classIndex, Optional.empty()));
+    }
+
+    /**
+     * Fills in the proofs of the listed minimal sets, in order: none for a set that an
+     * automorphism of the group maps a class's first core or an earlier proved set onto (the
+     * checker finds that automorphism itself); else a dead end's refutation of its non-orientable
+     * contraction (none when that runs out of budget: the checker then reports the set as not
+     * checked), or a core's isomorphism to its class's first core.
+     */
+    private void prove(ExplicitMatroid m, Run run) {
+        List<long[]> proved = new ArrayList<>();
+        for (CoreClass k : run.classes) {
+            long c = ElementSets.mask(k.example().contracted().stream().mapToInt(m.labels()::indexOf).toArray());
+            long s = ElementSets.mask(k.example().core().labels().stream().mapToInt(m.labels()::indexOf).toArray());
+            proved.add(new long[] {c, s});
+        }
+        RefutationSearch refuter = new RefutationSearch(settings.budget());
+        List<Optional<Proof>> proofs = new ArrayList<>();
+        for (Listed l : run.listed) {
+            Optional<Proof> proof = Optional.empty();
+            if (!isImage(proved, l.contracted(), l.set())) {
+                if (l.deadEnd().isPresent()) {
+                    MinimalityDecider.NonOrientableContraction d = l.deadEnd().get();
+                    RefutationSearch.Outcome o = refuter.refute(d.minor());
+                    run.solverCalls++;
+                    if (o instanceof RefutationSearch.Orientable) {
+                        throw new IllegalStateException("A contraction decided non-orientable has a chirotope.");
+                    }
+                    if (o instanceof RefutationSearch.Refuted r) {
+                        proof = Optional.of(new DeadEnd(l.restriction().labels().get(d.element()), d.minor(),
+                                r.refutation()));
+                    }
+                } else {
+                    ExplicitMatroid example = run.classes.get(l.classIndex()).example().core();
+                    Isomorphism iso = new HyperplaneIsomorphismInspector(l.restriction(), example).find()
+                            .orElseThrow(() -> new IllegalStateException("A core is not isomorphic to its class."));
+                    proof = Optional.of(new ClassMember(l.classIndex() + 1,
+                            iso.image().stream().map(example.labels()::get).toList()));
+                }
+                if (proof.isPresent()) {
+                    proved.add(new long[] {l.contracted(), l.set()});
+                }
+            }
+            proofs.add(proof);
+        }
+        int next = 0;
+        for (int i = 0; i < run.evidence.size(); i++) {
+            ContractionEvidence e = run.evidence.get(i);
+            List<MinimalSet> sets = new ArrayList<>();
+            for (MinimalSet s : e.minimal()) {
+                sets.add(new MinimalSet(s.elements(), proofs.get(next++)));
+            }
+            run.evidence.set(i, new ContractionEvidence(e.contracted(), e.maximal(), sets));
+        }
+    }
+
+    /** Whether some permutation p of the group has p(C0) = c and p(S0) = s for a (C0, S0) in {@code proved}. */
+    private boolean isImage(List<long[]> proved, long c, long s) {
+        for (long[] x : proved) {
+            for (int[] p : symmetry.permutations()) {
+                if (symmetry.apply(p, x[0]) == c && symmetry.apply(p, x[1]) == s) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     /** The core as a key over M's elements. */

@@ -14,6 +14,7 @@ import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
+import org.chirocore.matroid.Isomorphism;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.LazySatDecider;
@@ -92,13 +93,46 @@ class CoreEnumerationTest {
     private static void assertAgrees(ExplicitMatroid m, Symmetry g, OptionalInt rank) {
         CoreEnumeration.Result r = enumerate(m, g, rank);
         assertTrue(r.complete(), r.incomplete().orElse(""));
-        Map<ExplicitMatroid, Integer> expected = classes(bruteForce(m, rank));
+        List<ExplicitMatroid> cores = bruteForce(m, rank);
+        assertProofsAgree(m, r, cores);
+        Map<ExplicitMatroid, Integer> expected = classes(cores);
         assertEquals(expected.size(), r.classes().size(), "classes");
         for (CoreEnumeration.CoreClass c : r.classes()) {
             ExplicitMatroid rep = expected.keySet().stream()
                     .filter(x -> new HyperplaneIsomorphismInspector(x, c.example().core()).find().isPresent())
                     .findFirst().orElseThrow();
             assertEquals(expected.get(rep), c.count(), "count of " + c.example().core());
+        }
+    }
+
+    /**
+     * The proofs of the evidence against the brute force: a dead end's set is no core and its
+     * contraction (the minor the refutation is over, on S − e) is decided non-orientable here; a
+     * class member's set is a core and its element map an isomorphism onto its class's first core.
+     */
+    private static void assertProofsAgree(ExplicitMatroid m, CoreEnumeration.Result r, List<ExplicitMatroid> cores) {
+        for (CoreEnumeration.ContractionEvidence e : r.evidence()) {
+            int[] c = e.contracted().stream().mapToInt(m.labels()::indexOf).toArray();
+            for (CoreEnumeration.MinimalSet s : e.minimal()) {
+                int[] deleted = java.util.stream.IntStream.range(0, m.size())
+                        .filter(x -> !e.contracted().contains(m.labels().get(x)) && !s.elements().contains(m.labels().get(x)))
+                        .toArray();
+                ExplicitMatroid restriction = ExplicitMatroid.of(new Minor(m, c, deleted));
+                if (s.proof().orElse(null) instanceof CoreEnumeration.DeadEnd d) {
+                    assertTrue(!cores.contains(restriction), "a dead end is a core: " + s.elements());
+                    List<String> rest = new ArrayList<>(s.elements());
+                    rest.remove(d.contracted());
+                    assertEquals(rest, d.minor().labels());
+                    assertEquals(ExplicitMatroid.of(new Minor(restriction, new int[] {s.elements().indexOf(d.contracted())},
+                            new int[0])), d.minor());
+                    assertTrue(!isOrientable(d.minor(), new HashMap<>()), "the dead end's contraction is orientable");
+                } else if (s.proof().orElse(null) instanceof CoreEnumeration.ClassMember k) {
+                    assertTrue(cores.contains(restriction), "a class member is no core: " + s.elements());
+                    ExplicitMatroid example = r.classes().get(k.classNumber() - 1).example().core();
+                    Isomorphism iso = new Isomorphism(k.images().stream().map(example.labels()::indexOf).toList());
+                    assertTrue(iso.isIsomorphism(restriction, example), "not an isomorphism: " + k);
+                }
+            }
         }
     }
 

@@ -19,9 +19,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPInputStream;
 
-import org.chirocore.check.ParsedCertificate.Relation;
 import org.chirocore.check.ParsedCertificate.Witness;
-import org.chirocore.check.Relations.Term;
 import org.chirocore.check.VerificationReport.Check;
 import org.chirocore.check.VerificationReport.Status;
 
@@ -291,74 +289,19 @@ public final class CertificateVerifier {
 
         /** A sorted set of distinct elements of the core, of the given size, as a mask. */
         private long set(int[] elements, String what, int size) throws Failure {
-            long mask = 0;
-            for (int i = 0; i < elements.length; i++) {
-                if (elements[i] < 0 || elements[i] >= n || (i > 0 && elements[i] <= elements[i - 1])) {
-                    throw new Failure(what + " " + java.util.Arrays.toString(elements) + " is not a sorted set of elements 0.." + (n - 1));
-                }
-                mask |= 1L << elements[i];
-            }
-            if (elements.length != size) {
-                throw new Failure(what + " " + java.util.Arrays.toString(elements) + " has " + elements.length + " elements, not " + size);
-            }
-            return mask;
+            return RefutationCheck.set(n, elements, what, size);
         }
 
-        /**
-         * The normalised bases are bases and the vectors (1, 1_B) are GF(2)-independent
-         * (docs/mathematics.md §4): equivalently the differences 1_B ⊕ 1_B0 are independent.
-         */
+        /** The normalised bases are bases and the vectors (1, 1_B) are GF(2)-independent (docs/mathematics.md §4). */
         String normalisation() throws Failure {
-            long[] pivotByTopBit = new long[64];
-            long first = 0;
-            for (int i = 0; i < c.normalised().size(); i++) {
-                long b = normalisedBasis(i);
-                first = i == 0 ? b : first;
-                // reduce 1_B ⊕ 1_B0 by the pivots, each stored at its highest bit
-                long v = b ^ first;
-                while (v != 0 && pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] != 0) {
-                    v ^= pivotByTopBit[63 - Long.numberOfLeadingZeros(v)];
-                }
-                if (v != 0) {
-                    pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] = v;
-                } else if (i > 0) {
-                    throw new Failure("normalised[" + i + "] " + BasisTable.set(b)
-                            + " makes the vectors (1, 1_B) linearly dependent over GF(2)");
-                }
-            }
+            RefutationCheck.independent(RefutationCheck.normalised(core, c.normalised()));
             return c.normalised().size() + " bases fixed to +1, GF(2)-independent";
-        }
-
-        private long normalisedBasis(int i) throws Failure {
-            long b = set(c.normalised().get(i), "normalised[" + i + "]", c.rank());
-            if (core.positionOf(b) < 0) {
-                throw new Failure("normalised[" + i + "] " + BasisTable.set(b) + " is not a basis of the core");
-            }
-            return b;
         }
 
         /** Every relation is well formed with 0, 2 or 3 non-zero terms; builds the spec's CNF. */
         String relations() throws Failure {
-            List<int[]> clauses = new ArrayList<>();
-            for (int i = 0; i < c.normalised().size(); i++) {
-                clauses.add(new int[] {core.positionOf(normalisedBasis(i)) + 1});
-            }
-            for (int i = 0; i < c.relations().size(); i++) {
-                Relation r = c.relations().get(i);
-                String what = "relation " + i + " " + r;
-                long x = set(r.x(), what + ": X", c.rank() - 2);
-                long abcd = set(new int[] {r.a(), r.b(), r.c(), r.d()}, what + ": a, b, c, d", 4);
-                if ((x & abcd) != 0) {
-                    throw new Failure(what + ": a, b, c, d must lie outside X");
-                }
-                List<Term> terms = Relations.nonZero(Relations.terms(core, x, r.a(), r.b(), r.c(), r.d()));
-                if (terms.size() == 1) {
-                    throw new Failure(what + " has exactly one non-zero term, which basis exchange rules out");
-                }
-                clauses.addAll(Relations.clauses(terms));
-            }
-            cnf = new Cnf(core.count(), clauses);
-            return c.relations().size() + " relations; CNF of " + core.count() + " variables and " + clauses.size() + " clauses";
+            cnf = RefutationCheck.cnf(core, RefutationCheck.normalised(core, c.normalised()), c.relations());
+            return c.relations().size() + " relations; CNF of " + core.count() + " variables and " + cnf.clauses().size() + " clauses";
         }
 
         /**

@@ -3,6 +3,7 @@ package org.chirocore.check;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.BitSet;
 import java.util.HashSet;
 import java.util.List;
@@ -48,9 +49,11 @@ public final class CompletenessCheck {
     static final String WITNESSES = "witnesses";
     static final String DUALITY = "transversal duality";
     static final String CERTIFICATES = "certificates";
+    static final String DEAD_ENDS = "dead-end refutations";
+    static final String MEMBERS = "class members";
     static final String ACCOUNTED = "minimal sets accounted for";
     static final List<String> CHECKS = List.of(FORMAT, INPUT, SYMMETRY, COVERAGE, WITNESSES, DUALITY, CERTIFICATES,
-            ACCOUNTED);
+            DEAD_ENDS, MEMBERS, ACCOUNTED);
 
     private CompletenessCheck() {
     }
@@ -85,8 +88,13 @@ public final class CompletenessCheck {
         return new VerificationReport(file.toString(), checks, (System.nanoTime() - start) / 1_000_000);
     }
 
-    /** One listed contraction set: C, the orientable restrictions T with their signs (null: no witness), the minimal sets S. */
-    private record Entry(long contracted, List<Long> orientable, List<String> signs, List<Long> minimal) {
+    /**
+     * One listed contraction set: C, the orientable restrictions T with their signs (null: no
+     * witness), the minimal sets S and the object listing each (with its "deadEnd" or
+     * "classMember" proof, if any).
+     */
+    private record Entry(long contracted, List<Long> orientable, List<String> signs, List<Long> minimal,
+            List<JsonTree.Obj> proofs) {
     }
 
     /** The evidence read step by step; each step leaves what the later ones need. */
@@ -100,8 +108,10 @@ public final class CompletenessCheck {
         private final List<Entry> entries = new ArrayList<>();
         private Set<Long> bases;
         private final List<int[]> group = new ArrayList<>();
-        /** The certified class cores: contraction set and restriction, as masks over M. */
+        /** The certified class cores by class number − 1 (null: no certificate): contraction set and restriction, as masks over M. */
         private final List<long[]> certified = new ArrayList<>();
+        /** Contraction set and restriction of every listed minimal set proved so far: certified cores, dead ends, class members. */
+        private final List<long[]> proved = new ArrayList<>();
         private int uncertifiedClasses;
 
         Evidence(Path file, Optional<Path> input) {
@@ -118,6 +128,8 @@ public final class CompletenessCheck {
                 case WITNESSES -> this::witnesses;
                 case DUALITY -> this::duality;
                 case CERTIFICATES -> this::certificates;
+                case DEAD_ENDS -> this::deadEnds;
+                case MEMBERS -> this::members;
                 default -> this::accounted;
             };
         }
@@ -126,8 +138,8 @@ public final class CompletenessCheck {
             doc = JsonTree.parse(CertificateVerifier.readRegularFile(file, VerifierLimits.MAX_CERTIFICATE_BYTES)).asObject("the file");
             doc.requireOnly(List.of("format", "version", "input", "labels", "ranks", "symmetry", "certificates",
                     "contractionSets"));
-            if (!doc.requireString("format").equals(FORMAT_NAME) || doc.requireInt("version") != 1) {
-                throw new Failure("format must be \"" + FORMAT_NAME + "\" version 1");
+            if (!doc.requireString("format").equals(FORMAT_NAME) || doc.requireInt("version") != 2) {
+                throw new Failure("format must be \"" + FORMAT_NAME + "\" version 2");
             }
             JsonTree.Arr names = doc.requireArray("labels");
             if (names.size() > VerifierLimits.MAX_ELEMENTS) {
@@ -170,18 +182,25 @@ public final class CompletenessCheck {
                     signs.add(t.require("signs") instanceof JsonTree.Null ? null : t.requireString("signs"));
                 }
                 List<Long> minimal = new ArrayList<>();
+                List<JsonTree.Obj> proofs = new ArrayList<>();
                 JsonTree.Arr ss = c.requireArray("minimalNonOrientable");
                 for (int j = 0; j < ss.size(); j++) {
-                    long s = mask(ss.get(j).asArray(at + ".minimalNonOrientable[" + j + "]"),
-                            at + ".minimalNonOrientable[" + j + "]", contracted);
+                    String where = at + ".minimalNonOrientable[" + j + "]";
+                    JsonTree.Obj m = ss.get(j).asObject(where);
+                    m.requireOnly(List.of("elements", "deadEnd", "classMember"));
+                    long s = mask(m.requireArray("elements"), where + ".elements", contracted);
                     if (minimal.contains(s)) {
-                        throw new Failure(at + ".minimalNonOrientable[" + j + "] is listed twice");
+                        throw new Failure(where + " is listed twice");
+                    }
+                    if (m.has("deadEnd") && m.has("classMember")) {
+                        throw new Failure(where + " has both a dead-end proof and a class membership");
                     }
                     minimal.add(s);
+                    proofs.add(m);
                 }
-                entries.add(new Entry(contracted, orientable, signs, minimal));
+                entries.add(new Entry(contracted, orientable, signs, minimal, proofs));
             }
-            return FORMAT_NAME + " version 1: " + labels.size() + " elements of rank " + rank + ", ranks " + ranks + ", "
+            return FORMAT_NAME + " version 2: " + labels.size() + " elements of rank " + rank + ", ranks " + ranks + ", "
                     + entries.size() + " contraction sets";
         }
 
@@ -318,34 +337,16 @@ public final class CompletenessCheck {
                 int r = rank - Long.bitCount(e.contracted());
                 for (int i = 0; i < e.orientable().size(); i++) {
                     long t = e.orientable().get(i);
-                    int[] elements = elements(t);
-                    List<Long> local = new ArrayList<>();
-                    if (ProvenanceCheck.binomial(elements.length, r) > VerifierLimits.MAX_CANDIDATES) {
-                        throw new Failure("a restriction on " + elements.length + " elements exceeds the verifier's limit");
-                    }
-                    if (elements.length >= r) {
-                        int[] pick = ProvenanceCheck.firstCombination(r);
-                        do {
-                            long s = e.contracted();
-                            long l = 0;
-                            for (int p : pick) {
-                                s |= 1L << elements[p];
-                                l |= 1L << p;
-                            }
-                            if (bases.contains(s)) {
-                                local.add(l);
-                            }
-                        } while (ProvenanceCheck.nextCombination(pick, elements.length));
-                    }
+                    int size = Long.bitCount(t);
+                    long[] local = localBases(e.contracted(), t);
                     String where = "after contracting " + names(e.contracted()) + ", the restriction to " + names(t);
                     String signs = e.signs().get(i);
                     if (signs == null) {
-                        if (!local.isEmpty()) {
+                        if (local.length > 0) {
                             throw new Failure(where + " spans but has no witness");
                         }
                     } else {
-                        long[] b = local.stream().mapToLong(Long::longValue).toArray();
-                        Optional<String> v = ChirotopeCheck.violation(elements.length, r, b, signs);
+                        Optional<String> v = ChirotopeCheck.violation(size, r, local, signs);
                         if (v.isPresent()) {
                             throw new Failure(where + ": the witness is not a chirotope: " + v.get());
                         }
@@ -417,6 +418,7 @@ public final class CompletenessCheck {
             for (int i = 0; i < names.size(); i++) {
                 if (names.get(i) instanceof JsonTree.Null) {
                     uncertifiedClasses++;
+                    certified.add(null);
                     continue;
                 }
                 String name = names.get(i).asString("certificates[" + i + "]");
@@ -449,6 +451,7 @@ public final class CompletenessCheck {
                     throw new Failure(name + ": its core is no listed minimal set of a listed contraction set");
                 }
                 certified.add(new long[] {c, s});
+                proved.add(new long[] {c, s});
             }
             if (uncertifiedClasses > 0) {
                 throw new Skipped(uncertifiedClasses + " of " + names.size() + " classes have no certificate");
@@ -457,27 +460,152 @@ public final class CompletenessCheck {
                     + "are listed minimal sets";
         }
 
+        /**
+         * Each listed dead-end proof: for S listed with C and e ∈ S, the bases of (M/C)|S / e =
+         * (M/(C ∪ e))|(S − e) are rebuilt (the (R − 1)-subsets X of S − e with X ∪ C ∪ e a basis of
+         * M, in canonical order over S − e in M's order), and the proof (normalisation, relations,
+         * DRAT or LRAT, in the certificate format's encoding) refutes their CNF. So that minor is
+         * non-orientable, hence (M/C)|S is, and it is no core (a proper minor is non-orientable).
+         */
+        String deadEnds() throws Failure {
+            int count = 0;
+            for (Entry e : entries) {
+                for (int j = 0; j < e.minimal().size(); j++) {
+                    if (!e.proofs().get(j).has("deadEnd")) {
+                        continue;
+                    }
+                    JsonTree.Obj proof = e.proofs().get(j).requireObject("deadEnd");
+                    long s = e.minimal().get(j);
+                    String where = "after contracting " + names(e.contracted()) + ", the dead end " + names(s);
+                    proof.requireOnly(List.of("contracted", "nonOrientability"));
+                    int x = labels.indexOf(proof.requireString("contracted"));
+                    if (x < 0 || (s & 1L << x) == 0) {
+                        throw new Failure(where + ": its contracted element is not one of its elements");
+                    }
+                    long c = e.contracted() | 1L << x;
+                    long rest = s & ~(1L << x);
+                    int r = rank - Long.bitCount(c);
+                    BasisTable minor = new BasisTable(Long.bitCount(rest), r, localBases(c, rest));
+                    if (minor.count() == 0) {
+                        throw new Failure(where + ": contracting " + names(1L << x) + " leaves no basis");
+                    }
+                    refute(minor, proof.requireObject("nonOrientability"), where + " contracted by " + names(1L << x));
+                    proved.add(new long[] {e.contracted(), s});
+                    count++;
+                }
+            }
+            return count + " dead ends: each has a single-element contraction whose CNF the listed proof refutes";
+        }
+
+        /** The proof, in the certificate format's {@code nonOrientability} form with the proof inline, refutes the CNF over {@code minor}. */
+        private static void refute(BasisTable minor, JsonTree.Obj non, String where) throws Failure {
+            non.requireOnly(List.of("normalised", "relations", "drat", "lrat"));
+            if (non.has("drat") == non.has("lrat")) {
+                throw new Failure(where + ": exactly one of \"drat\" and \"lrat\" is needed");
+            }
+            long[] fixed = RefutationCheck.normalised(minor,
+                    ParsedCertificate.sets(non.requireArray("normalised"), "normalised", VerifierLimits.MAX_ELEMENTS + 1));
+            RefutationCheck.independent(fixed);
+            Cnf cnf = RefutationCheck.cnf(minor, fixed, ParsedCertificate.relations(non.requireArray("relations")));
+            Optional<String> failure = non.has("lrat") ? LratChecker.check(cnf, non.requireString("lrat"))
+                    : Optional.of(DratChecker.check(cnf, non.requireString("drat"))).filter(o -> !o.valid())
+                            .map(DratChecker.Outcome::failure);
+            if (failure.isPresent()) {
+                throw new Failure(where + ": the proof does not refute the CNF: " + failure.get());
+            }
+        }
+
+        /**
+         * Each listed class membership: the listed images map S bijectively onto the core S0 of the
+         * class's certificate (contraction set C0), and the bases of (M/C)|S onto those of
+         * (M/C0)|S0, so (M/C)|S is isomorphic to a certified minor-minimal non-orientable matroid.
+         */
+        String members() throws Failure {
+            int count = 0;
+            int uncertified = 0;
+            for (Entry e : entries) {
+                for (int j = 0; j < e.minimal().size(); j++) {
+                    if (!e.proofs().get(j).has("classMember")) {
+                        continue;
+                    }
+                    JsonTree.Obj member = e.proofs().get(j).requireObject("classMember");
+                    long s = e.minimal().get(j);
+                    String where = "after contracting " + names(e.contracted()) + ", the class member " + names(s);
+                    member.requireOnly(List.of("class", "images"));
+                    int k = member.requireInt("class");
+                    if (k < 1 || k > certified.size()) {
+                        throw new Failure(where + ": class " + k + " is not listed");
+                    }
+                    long[] core = certified.get(k - 1);
+                    if (core == null) {
+                        uncertified++;
+                        continue;
+                    }
+                    int[] from = elements(s);
+                    int[] to = elements(core[1]);
+                    JsonTree.Arr images = member.requireArray("images");
+                    if (images.size() != from.length) {
+                        throw new Failure(where + ": " + images.size() + " images for " + from.length + " elements");
+                    }
+                    int[] position = new int[from.length];
+                    long hit = 0;
+                    for (int i = 0; i < from.length; i++) {
+                        int y = labels.indexOf(images.get(i).asString("images[" + i + "]"));
+                        position[i] = Arrays.binarySearch(to, y);
+                        if (y < 0 || position[i] < 0 || (hit & 1L << position[i]) != 0) {
+                            throw new Failure(where + ": images[" + i + "] is not an element of the class core, or repeats one");
+                        }
+                        hit |= 1L << position[i];
+                    }
+                    long[] mine = localBases(e.contracted(), s);
+                    Set<Long> theirs = new HashSet<>();
+                    for (long b : localBases(core[0], core[1])) {
+                        theirs.add(b);
+                    }
+                    for (long b : mine) {
+                        long image = 0;
+                        for (long t = b; t != 0; t &= t - 1) {
+                            image |= 1L << position[Long.numberOfTrailingZeros(t)];
+                        }
+                        if (!theirs.contains(image)) {
+                            throw new Failure(where + ": the images do not map the bases onto those of class " + k);
+                        }
+                    }
+                    if (mine.length != theirs.size() || mine.length == 0) {
+                        throw new Failure(where + " has " + mine.length + " bases, class " + k + " has " + theirs.size());
+                    }
+                    proved.add(new long[] {e.contracted(), s});
+                    count++;
+                }
+            }
+            return count + " class members are isomorphic to certified class cores (bases mapped onto bases)"
+                    + (uncertified == 0 ? "" : "; " + uncertified + " members of classes without a certificate are not checked");
+        }
+
         String accounted() throws Skipped {
             int total = 0;
             int shown = 0;
             for (Entry e : entries) {
                 for (long s : e.minimal()) {
                     total++;
-                    if (isImageOfCertified(e.contracted(), s)) {
+                    if (isImageOfProved(e.contracted(), s)) {
                         shown++;
                     }
                 }
             }
             if (shown < total) {
-                throw new Skipped(shown + " of the " + total + " listed minimal sets are images of certified class cores "
-                        + "under a listed automorphism; for the other " + (total - shown) + ", that they are non-orientable "
-                        + "and either in a listed class or with a non-orientable single-element contraction is not checked");
+                throw new Skipped(shown + " of the " + total + " listed minimal sets are certified class cores, checked dead "
+                        + "ends or class members, or images of one under a listed automorphism; for the other "
+                        + (total - shown) + ", that they are non-orientable and either in a listed class or with a "
+                        + "non-orientable single-element contraction is not checked");
             }
-            return "every listed minimal set is the image of a certified class core under a listed automorphism";
+            return "every one of the " + total + " listed minimal sets is a certified class core, a checked dead end or "
+                    + "class member, or the image of one under a listed automorphism";
         }
 
-        private boolean isImageOfCertified(long c, long s) {
-            for (long[] cs : certified) {
+        /** Whether p(C0) = c and p(S0) = s for a proved (C0, S0) and a listed automorphism p (the identity is listed). */
+        private boolean isImageOfProved(long c, long s) {
+            for (long[] cs : proved) {
                 for (int[] p : group) {
                     if (apply(p, cs[0]) == c && apply(p, cs[1]) == s) {
                         return true;
@@ -485,6 +613,34 @@ public final class CompletenessCheck {
                 }
             }
             return false;
+        }
+
+        /**
+         * The bases of (M/c)|t as masks over t's elements in M's order (position i = the i-th
+         * element of t), in canonical order: the (r − |c|)-subsets X of t with X ∪ c a basis of M.
+         */
+        private long[] localBases(long c, long t) throws Failure {
+            int[] elements = elements(t);
+            int r = rank - Long.bitCount(c);
+            if (ProvenanceCheck.binomial(elements.length, r) > VerifierLimits.MAX_CANDIDATES) {
+                throw new Failure("a restriction on " + elements.length + " elements exceeds the verifier's limit");
+            }
+            List<Long> local = new ArrayList<>();
+            if (elements.length >= r && r >= 0) {
+                int[] pick = ProvenanceCheck.firstCombination(r);
+                do {
+                    long s = c;
+                    long l = 0;
+                    for (int p : pick) {
+                        s |= 1L << elements[p];
+                        l |= 1L << p;
+                    }
+                    if (bases.contains(s)) {
+                        local.add(l);
+                    }
+                } while (ProvenanceCheck.nextCombination(pick, elements.length));
+            }
+            return local.stream().mapToLong(Long::longValue).toArray();
         }
 
         private boolean independent(long set) {

@@ -118,7 +118,7 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         return out;
     }
 
-    private static List<Relation> relations(JsonTree.Arr array) {
+    static List<Relation> relations(JsonTree.Arr array) {
         if (array.size() > VerifierLimits.MAX_RELATIONS) {
             throw new JsonTree.Mistyped("nonOrientability.relations has " + array.size() + " entries; at most " + VerifierLimits.MAX_RELATIONS + " are allowed");
         }
