@@ -27,16 +27,21 @@ import org.chirocore.check.VerificationReport.Status;
  * contains a listed S. With the symmetries checked to be automorphisms of M and every
  * independent set of size r − R mapped by one of them onto a listed C, every minor-minimal
  * non-orientable minor of rank R of M is, up to an automorphism, (M/C)|S for a listed C and a
- * listed S, provided each listed S is non-orientable. That, and that S is a core of a listed
- * class, is checked for the images of the certified class cores under the symmetries; for the
- * other listed S it is the producer's word and reported as not run.
+ * listed S, provided each listed S is non-orientable. Each listed S is shown to be either a dead
+ * end (a refutation of a single-element contraction (M/C)|S / e: non-orientable and not
+ * minor-minimal) or isomorphic to a certified class core (by the certificate itself, or a listed
+ * element map carrying bases onto bases), directly or as the image of such a set under a listed
+ * automorphism; a set shown neither way is reported as not checked. So every core of a listed
+ * rank is isomorphic to a listed class's certified core; the class counts are not checked.
  *
  * <p>Nothing here is shared with the producer: M is rebuilt with {@link ProvenanceCheck}'s own
  * arithmetic, witnesses go through {@link ChirotopeCheck}, certificates through
- * {@link CertificateVerifier}. Cost: C(n, r) rank evaluations, |group| · |bases| lookups,
- * |group| · C(n, r − R) set maps, the witnesses' relations, and one minimal-transversal
+ * {@link CertificateVerifier}, refutations through {@link RefutationCheck} and
+ * {@link DratChecker} or {@link LratChecker}. Cost: C(n, r) rank evaluations, |group| · |bases|
+ * lookups, |group| · C(n, r − R) set maps, the witnesses' relations, one minimal-transversal
  * computation per contraction set (Berge's incremental method, bounded by
- * {@link VerifierLimits#MAX_TRANSVERSALS}).
+ * {@link VerifierLimits#MAX_TRANSVERSALS}), the proofs' checks, C(|S|, R) lookups per class
+ * member, and |group| · (proved sets) set maps per listed minimal set.
  */
 public final class CompletenessCheck {
     /** The evidence's format name. */
