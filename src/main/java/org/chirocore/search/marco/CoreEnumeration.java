@@ -313,17 +313,18 @@ public final class CoreEnumeration {
      * checked), or a core's isomorphism to its class's first core.
      */
     private void prove(ExplicitMatroid m, Run run) {
-        List<long[]> proved = new ArrayList<>();
+        // the images (p(C0), p(S0)) of the proved sets under the group
+        Set<List<Long>> proved = new HashSet<>();
         for (CoreClass k : run.classes) {
             long c = ElementSets.mask(k.example().contracted().stream().mapToInt(m.labels()::indexOf).toArray());
             long s = ElementSets.mask(k.example().core().labels().stream().mapToInt(m.labels()::indexOf).toArray());
-            proved.add(new long[] {c, s});
+            addImages(proved, c, s);
         }
         RefutationSearch refuter = new RefutationSearch(settings.budget());
         List<Optional<Proof>> proofs = new ArrayList<>();
         for (Listed l : run.listed) {
             Optional<Proof> proof = Optional.empty();
-            if (!isImage(proved, l.contracted(), l.set())) {
+            if (!proved.contains(List.of(l.contracted(), l.set()))) {
                 if (l.deadEnd().isPresent()) {
                     MinimalityDecider.NonOrientableContraction d = l.deadEnd().get();
                     RefutationSearch.Outcome o = refuter.refute(d.minor());
@@ -343,7 +344,7 @@ public final class CoreEnumeration {
                             iso.image().stream().map(example.labels()::get).toList()));
                 }
                 if (proof.isPresent()) {
-                    proved.add(new long[] {l.contracted(), l.set()});
+                    addImages(proved, l.contracted(), l.set());
                 }
             }
             proofs.add(proof);
@@ -359,16 +360,10 @@ public final class CoreEnumeration {
         }
     }
 
-    /** Whether some permutation p of the group has p(C0) = c and p(S0) = s for a (C0, S0) in {@code proved}. */
-    private boolean isImage(List<long[]> proved, long c, long s) {
-        for (long[] x : proved) {
-            for (int[] p : symmetry.permutations()) {
-                if (symmetry.apply(p, x[0]) == c && symmetry.apply(p, x[1]) == s) {
-                    return true;
-                }
-            }
+    private void addImages(Set<List<Long>> proved, long c, long s) {
+        for (int[] p : symmetry.permutations()) {
+            proved.add(List.of(symmetry.apply(p, c), symmetry.apply(p, s)));
         }
-        return false;
     }
 
     /** The core as a key over M's elements. */
