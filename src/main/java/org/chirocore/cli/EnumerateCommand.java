@@ -75,6 +75,11 @@ final class EnumerateCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
+            description = "Wall-clock limit of the enumeration (not of the certificates written after it), after which "
+                    + "it ends incomplete with the classes found so far; 0 (default) for none.")
+    private double totalTime;
+
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "Output directory.")
     private Path out;
 
@@ -107,7 +112,11 @@ final class EnumerateCommand implements Callable<Integer> {
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot create the output directory: " + e, e);
         }
-        SearchSettings settings = new SearchSettings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget());
+        if (totalTime < 0 || Double.isNaN(totalTime)) {
+            throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
+        }
+        long deadline = totalTime == 0 ? 0 : System.currentTimeMillis() + Math.round(totalTime * 1000);
+        SearchSettings settings = new SearchSettings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget().until(deadline));
         ConsoleProgress progress = ConsoleProgress.ifInteractive(spec.commandLine().getErr());
         CoreEnumeration.Result result = new CoreEnumeration(settings, constraints, group, progress).enumerate(m);
         progress.finish();
@@ -116,13 +125,17 @@ final class EnumerateCommand implements Callable<Integer> {
             certificates.add(certify(result.classes().get(k), input, k + 1));
         }
         Inputs.write(out.resolve(SUMMARY_JSON), summaryJson(input, m, group, result, certificates));
-        if (result.complete()) {
+        boolean evidence = result.complete() && result.evidence().size() == result.representatives();
+        if (evidence) {
             Inputs.write(out.resolve(COMPLETENESS_JSON), completenessJson(input, m, group, result, certificates));
         }
         String markdown = summaryMarkdown(m, group, result, certificates);
         Inputs.writeText(out.resolve(SUMMARY_MD), markdown);
         PrintWriter w = spec.commandLine().getOut();
         w.print(markdown);
+        if (result.complete() && !evidence) {
+            w.println("no completeness evidence: its witnesses would exceed " + CoreEnumeration.EVIDENCE_SIGNS + " signs");
+        }
         w.println("wrote " + out.resolve(SUMMARY_JSON) + ", " + out.resolve(SUMMARY_MD) + " and "
                 + certificates.stream().filter(Optional::isPresent).count() + " verified certificates");
         return result.complete() ? ExitCodes.OK : ExitCodes.UNKNOWN;
@@ -269,6 +282,7 @@ final class EnumerateCommand implements Callable<Integer> {
                 .put("incomplete", r.incomplete().<Json>map(Json.Str::new).orElse(Json.NULL))
                 .put("contractionSets", Json.Obj.builder().put("representatives", r.representatives())
                         .put("all", r.contractionSets()).build())
+                .put("maximalOrientableRestrictions", r.maximal())
                 .put("minimalNonOrientableRestrictions", r.restrictions())
                 .put("withNonOrientableContraction", r.deadEnds())
                 .put("solverCalls", r.solverCalls())

@@ -120,15 +120,17 @@ public final class CoreEnumeration {
      * @param representatives contraction sets enumerated (one per orbit)
      * @param contractionSets all independent contraction sets of those sizes (the orbits' sizes summed)
      * @param classes the classes, in order of discovery
+     * @param maximal maximal orientable restrictions found (over the representatives)
      * @param restrictions minimal non-orientable restrictions found (over the representatives)
      * @param deadEnds those with a non-orientable single-element contraction
      * @param solverCalls orientability solves, map calls and minimality decisions
      * @param millis wall-clock time
      * @param evidence per representative contraction set, its maximal orientable and minimal
-     *     non-orientable restrictions (complete only when the enumeration is)
+     *     non-orientable restrictions (complete only when the enumeration is; empty when the
+     *     witnesses would exceed {@link #EVIDENCE_SIGNS} signs)
      */
     public record Result(Optional<String> incomplete, List<Integer> ranks, int representatives, int contractionSets,
-            List<CoreClass> classes, int restrictions, int deadEnds, int solverCalls, long millis,
+            List<CoreClass> classes, int maximal, int restrictions, int deadEnds, int solverCalls, long millis,
             List<ContractionEvidence> evidence) {
         public Result {
             ranks = List.copyOf(ranks);
@@ -141,6 +143,13 @@ public final class CoreEnumeration {
             return incomplete.isEmpty();
         }
     }
+
+    /**
+     * Most witness signs kept for the completeness evidence: 64 Mi, as many characters as the
+     * largest evidence file the verifier reads. Beyond it the witnesses are dropped (memory) and
+     * no evidence is given.
+     */
+    public static final long EVIDENCE_SIGNS = 64L << 20;
 
     private final SearchSettings settings;
     private final CoreConstraints constraints;
@@ -162,12 +171,16 @@ public final class CoreEnumeration {
         final List<MatroidShape> shapes = new ArrayList<>();
         /** Every core met so far and its images under the group, with the index of its class. */
         final Map<Key, Integer> seen = new HashMap<>();
+        /** Every dead end met so far and its images under the group. */
+        final Set<Key> deadEndKeys = new HashSet<>();
         final List<ContractionEvidence> evidence = new ArrayList<>();
         /** Per minimal set listed, in order: C and S over M, the restriction, and the verdict of {@link #candidate}. */
         final List<Listed> listed = new ArrayList<>();
         String incomplete;
         int representatives;
         int contractionSets;
+        int maximal;
+        long witnessSigns;
         int restrictions;
         int deadEnds;
         int solverCalls;
@@ -175,7 +188,8 @@ public final class CoreEnumeration {
 
     /**
      * A listed minimal set: C and S as masks over M, (M/C)|S, and either the index of its class
-     * (a core) or its non-orientable single-element contraction (a dead end).
+     * (a core) or its non-orientable single-element contraction (a dead end), or neither: a
+     * labelled copy of a dead end met before, decided again only if its proof is needed.
      */
     private record Listed(long contracted, long set, ExplicitMatroid restriction, int classIndex,
             Optional<MinimalityDecider.NonOrientableContraction> deadEnd) {
@@ -205,8 +219,8 @@ public final class CoreEnumeration {
             prove(m, run);
         }
         return new Result(Optional.ofNullable(run.incomplete), ranks, run.representatives, run.contractionSets,
-                run.classes, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started,
-                run.evidence);
+                run.classes, run.maximal, run.restrictions, run.deadEnds, run.solverCalls, System.currentTimeMillis() - run.started,
+                run.witnessSigns > EVIDENCE_SIGNS ? List.of() : run.evidence);
     }
 
     /** Enumerates the minimal non-orientable restrictions of M/C and records the cores among them. */
@@ -215,7 +229,8 @@ public final class CoreEnumeration {
         List<String> contracted = Arrays.stream(c).mapToObj(m.labels()::get).toList();
         progress.report("contracting " + (c.length == 0 ? "nothing" : String.join(" ", contracted)), n0.size(),
                 n0.rank(), run.solverCalls);
-        RestrictionExplorer explorer = new RestrictionExplorer(n0, 0, settings.budget(), true, settings.seed());
+        RestrictionExplorer explorer = new RestrictionExplorer(n0, 0, settings.budget(), true, settings.seed(),
+                stabiliser(m, c));
         List<MaximalOrientable> maximal = new ArrayList<>();
         List<List<String>> minimal = new ArrayList<>();
         try {
@@ -228,7 +243,10 @@ public final class CoreEnumeration {
                     return;
                 }
                 if (step instanceof RestrictionExplorer.Orientable o) {
-                    maximal.add(new MaximalOrientable(labels(n0, o.set()), o.witness()));
+                    run.maximal++;
+                    run.witnessSigns += o.witness().map(Chirotope::size).orElse(0);
+                    maximal.add(new MaximalOrientable(labels(n0, o.set()),
+                            run.witnessSigns > EVIDENCE_SIGNS ? Optional.empty() : o.witness()));
                 }
                 if (step instanceof RestrictionExplorer.OutOfBudget o) {
                     run.incomplete = "the enumeration after contracting " + contracted + " ran out of budget: "
@@ -246,6 +264,23 @@ public final class CoreEnumeration {
         }
     }
 
+    /**
+     * The permutations of the group fixing C setwise, as permutations of M/C's elements (M's
+     * other elements, renumbered in order): automorphisms of M/C, so the explorer can settle each
+     * explored restriction's orbit at once.
+     */
+    private List<int[]> stabiliser(ExplicitMatroid m, int[] c) {
+        long mask = ElementSets.mask(c);
+        int[] rest = java.util.stream.IntStream.range(0, m.size()).filter(e -> (mask >>> e & 1) == 0).toArray();
+        List<int[]> out = new ArrayList<>();
+        for (int[] p : symmetry.permutations()) {
+            if (symmetry.apply(p, mask) == mask) {
+                out.add(Arrays.stream(rest).map(e -> Arrays.binarySearch(rest, p[e])).toArray());
+            }
+        }
+        return out;
+    }
+
     private static List<String> labels(ExplicitMatroid n, long set) {
         return Arrays.stream(ElementSets.elements(set)).mapToObj(n.labels()::get).toList();
     }
@@ -253,6 +288,17 @@ public final class CoreEnumeration {
     private void candidate(ExplicitMatroid m, ExplicitMatroid n0, long c, long set, List<String> contracted, Run run) {
         ExplicitMatroid core = ExplicitMatroid.of(Minor.restriction(n0, ElementSets.elements(set)));
         long s = ElementSets.mask(core.labels().stream().mapToInt(m.labels()::indexOf).toArray());
+        Key key = key(m, core);
+        // the same labelled minor as a core or dead end met before (often its image under the group) needs no decision
+        if (run.seen.containsKey(key)) {
+            run.listed.add(new Listed(c, s, core, run.seen.get(key), Optional.empty()));
+            return;
+        }
+        if (run.deadEndKeys.contains(key)) {
+            run.deadEnds++;
+            run.listed.add(new Listed(c, s, core, -1, Optional.empty()));
+            return;
+        }
         MinimalityDecider.Result result = MinimalityDecider.decide(core, settings.budget());
         run.solverCalls += 2 * core.size();
         if (result instanceof MinimalityDecider.Unknown u) {
@@ -264,12 +310,10 @@ public final class CoreEnumeration {
         }
         if (result instanceof MinimalityDecider.NonOrientableContraction d) {
             run.deadEnds++;
+            for (int[] p : symmetry.permutations()) {
+                run.deadEndKeys.add(image(p, key));
+            }
             run.listed.add(new Listed(c, s, core, -1, Optional.of(d)));
-            return;
-        }
-        Key key = key(m, core);
-        if (run.seen.containsKey(key)) {
-            run.listed.add(new Listed(c, s, core, run.seen.get(key), Optional.empty()));
             return;
         }
         Set<Key> images = new HashSet<>();
@@ -325,8 +369,19 @@ public final class CoreEnumeration {
         for (Listed l : run.listed) {
             Optional<Proof> proof = Optional.empty();
             if (!proved.contains(List.of(l.contracted(), l.set()))) {
-                if (l.deadEnd().isPresent()) {
-                    MinimalityDecider.NonOrientableContraction d = l.deadEnd().get();
+                Optional<MinimalityDecider.NonOrientableContraction> deadEnd = l.deadEnd();
+                if (deadEnd.isEmpty() && l.classIndex() < 0
+                        && MinimalityDecider.decide(l.restriction(), settings.budget())
+                                instanceof MinimalityDecider.NonOrientableContraction d) {
+                    deadEnd = Optional.of(d);
+                }
+                if (l.classIndex() < 0) {
+                    if (deadEnd.isEmpty()) {
+                        // its decision ran out of budget: listed without a proof, which the checker reports
+                        proofs.add(Optional.empty());
+                        continue;
+                    }
+                    MinimalityDecider.NonOrientableContraction d = deadEnd.get();
                     RefutationSearch.Outcome o = refuter.refute(d.minor());
                     run.solverCalls++;
                     if (o instanceof RefutationSearch.Orientable) {

@@ -1,11 +1,17 @@
 package org.chirocore.search.marco;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Random;
+import java.util.Set;
 
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
@@ -74,6 +80,10 @@ public final class RestrictionExplorer {
      */
     private static final int HALVINGS = 8;
 
+    /** Automorphisms of N fixing the required elements setwise; explored sets are blocked with all their images. */
+    private final List<int[]> symmetries;
+    /** Images of explored sets, reported before the next seed is drawn. */
+    private final Deque<Step> pending = new ArrayDeque<>();
     private final List<Long> nonOrientable = new ArrayList<>();
     private final List<Long> orientable = new ArrayList<>();
     private final Optional<Budget> seedBudget;
@@ -90,7 +100,18 @@ public final class RestrictionExplorer {
      * @param seed the seed of the element order of the map, the shrink and the growth
      */
     public RestrictionExplorer(ExplicitMatroid m, long required, Budget budget, boolean grow, long seed) {
-        this(m, required, budget, Optional.empty(), grow, seed);
+        this(m, required, budget, Optional.empty(), grow, seed, List.of());
+    }
+
+    /**
+     * As above, with automorphisms of N (each a permutation of N's elements mapping bases to
+     * bases and the required elements onto themselves): every explored set's images are explored
+     * with it, reported as steps of their own (an orientable image with the witness carried over by
+     * the automorphism), so each solve settles a whole orbit.
+     */
+    public RestrictionExplorer(ExplicitMatroid m, long required, Budget budget, boolean grow, long seed,
+            List<int[]> symmetries) {
+        this(m, required, budget, Optional.empty(), grow, seed, symmetries);
     }
 
     /**
@@ -102,6 +123,18 @@ public final class RestrictionExplorer {
      */
     public RestrictionExplorer(ExplicitMatroid m, long required, Budget budget, Optional<Budget> seedBudget,
             boolean grow, long seed) {
+        this(m, required, budget, seedBudget, grow, seed, List.of());
+    }
+
+    private RestrictionExplorer(ExplicitMatroid m, long required, Budget budget, Optional<Budget> seedBudget,
+            boolean grow, long seed, List<int[]> symmetries) {
+        for (int[] p : symmetries) {
+            if (p.length != m.size() || apply(p, required) != required) {
+                throw new IllegalArgumentException("A symmetry of the explorer must permute the " + m.size()
+                        + " elements and fix the required ones, but " + Arrays.toString(p) + " does not.");
+            }
+        }
+        this.symmetries = symmetries.stream().map(int[]::clone).toList();
         this.seedCap = 3 * m.rank() + 1;
         this.m = m;
         this.required = required;
@@ -121,6 +154,9 @@ public final class RestrictionExplorer {
 
     /** The next minimal non-orientable or explored orientable restriction, or the end. */
     public Step next() {
+        if (!pending.isEmpty()) {
+            return pending.poll();
+        }
         while (true) {
             UnexploredSubsets.Next seed = map.next(budget, order);
             if (seed instanceof UnexploredSubsets.Exhausted) {
@@ -219,7 +255,70 @@ public final class RestrictionExplorer {
             witness = Optional.of(WitnessCheck.checked(Minor.restriction(m, elements),
                     session.index().chirotope(model, t)));
         }
+        for (long image : images(t)) {
+            map.blockSubsets(image);
+            orientable.add(image);
+            long from = t;
+            int[] p = symmetries.stream().filter(q -> apply(q, from) == image).findFirst().orElseThrow();
+            pending.add(new Orientable(image, witness.map(w -> carried(w, from, image, p))));
+        }
         return new Orientable(t, witness);
+    }
+
+    /** The images of {@code set} under the symmetries, other than the set itself, each once. */
+    private List<Long> images(long set) {
+        Set<Long> out = new LinkedHashSet<>();
+        for (int[] p : symmetries) {
+            out.add(apply(p, set));
+        }
+        out.remove(set);
+        return List.copyOf(out);
+    }
+
+    /**
+     * The witness of N|image carried over from the witness {@code w} of N|t by the automorphism p
+     * with p(t) = image: χ'(p(x1), …, p(xr)) = χ(x1, …, xr), the sign of the permutation sorting
+     * the image tuple taken into account. A relabelling of a chirotope by a bijection that maps
+     * the bases of N|t onto those of N|image is a chirotope of N|image.
+     */
+    private Chirotope carried(Chirotope w, long t, long image, int[] p) {
+        int[] from = ElementSets.elements(t);
+        int[] to = ElementSets.elements(image);
+        int[] position = new int[from.length];
+        for (int i = 0; i < from.length; i++) {
+            position[i] = Arrays.binarySearch(to, p[from[i]]);
+        }
+        Long[] bases = new Long[w.size()];
+        Map<Long, Byte> signs = new HashMap<>();
+        for (int k = 0; k < w.size(); k++) {
+            int[] tuple = Arrays.stream(ElementSets.elements(w.basis(k))).map(i -> position[i]).toArray();
+            int inversions = 0;
+            long mask = 0;
+            for (int i = 0; i < tuple.length; i++) {
+                mask |= 1L << tuple[i];
+                for (int j = i + 1; j < tuple.length; j++) {
+                    inversions += tuple[i] > tuple[j] ? 1 : 0;
+                }
+            }
+            bases[k] = mask;
+            signs.put(mask, (byte) ((inversions & 1) == 0 ? w.sign(k) : -w.sign(k)));
+        }
+        // canonical order: a before b when the least element of their difference lies in a
+        Arrays.sort(bases, (a, b) -> a.equals(b) ? 0 : (a & Long.lowestOneBit(a ^ b)) != 0 ? -1 : 1);
+        byte[] out = new byte[bases.length];
+        for (int k = 0; k < bases.length; k++) {
+            out[k] = signs.get(bases[k]);
+        }
+        return new Chirotope(Arrays.stream(to).mapToObj(m.labels()::get).toList(), w.rank(),
+                Arrays.stream(bases).mapToLong(Long::longValue).toArray(), out);
+    }
+
+    private static long apply(int[] p, long set) {
+        long out = 0;
+        for (long s = set; s != 0; s &= s - 1) {
+            out |= 1L << p[Long.numberOfTrailingZeros(s)];
+        }
+        return out;
     }
 
     /**
@@ -283,6 +382,9 @@ public final class RestrictionExplorer {
                 if (o instanceof OrientationSession.Unsatisfiable u) {
                     if (isRequired) {
                         map.blockSubsets(global(t, elements));
+                        for (long image : images(global(t, elements))) {
+                            map.blockSubsets(image);
+                        }
                         return null;
                     }
                     t = u.needed() | (t & localRequired);
@@ -292,6 +394,11 @@ public final class RestrictionExplorer {
         long found = global(t, elements);
         nonOrientable.add(found);
         map.blockSupersets(found);
+        for (long image : images(found)) {
+            nonOrientable.add(image);
+            map.blockSupersets(image);
+            pending.add(new MinimalNonOrientable(image));
+        }
         return new MinimalNonOrientable(found);
     }
 
