@@ -356,7 +356,8 @@ public final class RestrictionExplorer {
 
     /**
      * Shrinks the non-orientable {@code set}: non-required elements first, each kept exactly when
-     * the set without it is orientable; an unsatisfiable answer cuts the set to the elements the
+     * the set without it is orientable (known without a solve when it lies inside an explored
+     * orientable set); an unsatisfiable answer cuts the set to the elements the
      * solver needed (plus the required ones, still non-orientable, being a superset). Returns
      * null when a required element turned out removable (its subsets are then blocked). The
      * solves go to a fresh selector session on N|set: on a small restriction it answers far
@@ -373,6 +374,10 @@ public final class RestrictionExplorer {
                 boolean isRequired = (localRequired & (1L << e)) != 0;
                 if ((t & (1L << e)) == 0 || isRequired != (pass == 1)) {
                     continue;
+                }
+                long without = global(t & ~(1L << e), elements);
+                if (orientable.stream().anyMatch(o -> (without & ~o) == 0)) {
+                    continue; // inside an explored orientable set, so orientable: e stays, no solve needed
                 }
                 solves++;
                 OrientationSession.Outcome o = local.solve(t & ~(1L << e));
