@@ -3,12 +3,14 @@ package org.chirocore.cert;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.BasisIndex;
+import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
 import org.chirocore.orient.WitnessCheck;
@@ -45,6 +47,19 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
      *     for another matroid
      */
     public static Certificate of(CoreFinding found, Refutation refutation) {
+        return of(found, refutation, WitnessForm.EXPLICIT);
+    }
+
+    /**
+     * As {@link #of(CoreFinding, Refutation)}, with the witnesses stated in {@code form}. With
+     * {@link WitnessForm#ORBITS}, an element outside its orbit's representative gets the
+     * representative's witnesses transported by a listed automorphism ({@link ElementOrbits}),
+     * re-checked like the others; when the core has too many automorphisms to list, every witness
+     * is stated by its signs.
+     *
+     * @throws IllegalStateException as for {@link #of(CoreFinding, Refutation)}
+     */
+    public static Certificate of(CoreFinding found, Refutation refutation, WitnessForm form) {
         ExplicitMatroid core = found.core();
         BasisIndex index = BasisIndex.of(core);
         List<Integer> normalisation = Arrays.stream(Normalisation.fixedVariables(index)).boxed().toList();
@@ -52,26 +67,50 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             throw new IllegalStateException("The refutation fixes variables " + refutation.normalised()
                     + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
         }
+        Optional<ElementOrbits> orbits = form == WitnessForm.ORBITS ? ElementOrbits.of(core) : Optional.empty();
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
             String label = core.labels().get(e);
-            entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION),
-                    checkedSigns(found, core, e, Operation.CONTRACTION)));
+            if (orbits.isEmpty() || orbits.get().representative()[e] == e) {
+                entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION, Optional.empty()),
+                        checkedSigns(found, core, e, Operation.CONTRACTION, Optional.empty())));
+            } else {
+                int f = orbits.get().representative()[e];
+                MinimalityWitness.Transport transport = new MinimalityWitness.Transport(core.labels().get(f),
+                        Arrays.stream(orbits.get().carrier().get(e)).boxed().toList());
+                entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION, orbits),
+                        checkedSigns(found, core, e, Operation.CONTRACTION, orbits), Optional.of(transport)));
+            }
         }
         return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
-    private static String checkedSigns(CoreFinding found, ExplicitMatroid core, int e, Operation operation) {
-        String label = core.labels().get(e);
+    /**
+     * The re-checked signs of the minor at e: the search's own witness, or, given {@code orbits},
+     * the witness at e's representative transported to e.
+     */
+    private static String checkedSigns(CoreFinding found, ExplicitMatroid core, int e, Operation operation,
+            Optional<ElementOrbits> orbits) {
+        int from = orbits.map(o -> o.representative()[e]).orElse(e);
+        String label = core.labels().get(from);
         MinorWitness w = found.witnesses().stream()
                 .filter(x -> x.element().equals(label) && x.operation() == operation)
                 .findFirst()
                 .orElseThrow(() -> new IllegalStateException("The core has no " + operation + " witness for element "
                         + label + "."));
-        // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
+        Matroid minor = minor(core, e, operation);
+        Chirotope witness = orbits.isEmpty() ? w.witness() : orbits.get().transport(w.witness(), e, minor.labels());
+        return ResultJson.signString(WitnessCheck.checked(minor, witness));
+    }
+
+    /** core\e or core/e; for a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way. */
+    private static Matroid minor(ExplicitMatroid core, int e, Operation operation) {
         int[] single = {e};
-        Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
-                : new Minor(core, single, new int[0]);
-        return ResultJson.signString(WitnessCheck.checked(minor, w.witness()));
+        return operation == Operation.DELETION ? new Minor(core, new int[0], single) : new Minor(core, single, new int[0]);
+    }
+
+    /** The number of entries whose witnesses are transported rather than stated by their signs. */
+    public int transportedEntries() {
+        return (int) minimality.stream().filter(w -> w.transport().isPresent()).count();
     }
 }

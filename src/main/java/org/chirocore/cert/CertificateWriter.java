@@ -112,12 +112,22 @@ public final class CertificateWriter {
                         .build())
                 .put("provenance", provenance(c.provenance()))
                 .put("nonOrientability", nonOrientability(c, dratFile))
-                .put("minimality", new Json.Arr(c.minimality().stream().<Json>map(w -> Json.Obj.builder()
-                        .put("element", w.element())
-                        .put("deletion", w.deletion())
-                        .put("contraction", w.contraction())
-                        .build()).toList()))
+                .put("minimality", new Json.Arr(c.minimality().stream().<Json>map(CertificateWriter::minimality).toList()))
                 .build();
+    }
+
+    /** One minimality entry: its signs, or both witnesses as transported by its stated automorphism. */
+    private static Json minimality(MinimalityWitness w) {
+        if (w.transport().isEmpty()) {
+            return Json.Obj.builder().put("element", w.element()).put("deletion", w.deletion()).put("contraction", w.contraction())
+                    .build();
+        }
+        MinimalityWitness.Transport t = w.transport().get();
+        Json.Obj transported = Json.Obj.builder()
+                .put("image", t.image())
+                .put("under", Json.Arr.ofInts(t.under().stream().mapToInt(Integer::intValue).toArray()))
+                .build();
+        return Json.Obj.builder().put("element", w.element()).put("deletion", transported).put("contraction", transported).build();
     }
 
     /** The content digest: SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */

@@ -35,9 +35,18 @@ public sealed interface Certification {
      *     re-check: either is a bug of whoever found the core, and no certificate must be written then
      */
     static Certification of(CoreFinding found, Budget budget) {
+        return of(found, budget, WitnessForm.EXPLICIT);
+    }
+
+    /**
+     * As {@link #of(CoreFinding, Budget)}, with the witnesses stated in {@code form}.
+     *
+     * @throws IllegalStateException as for {@link #of(CoreFinding, Budget)}
+     */
+    static Certification of(CoreFinding found, Budget budget, WitnessForm form) {
         RefutationSearch.Outcome outcome = new RefutationSearch(budget).refute(found.core());
         if (outcome instanceof RefutationSearch.Refuted r) {
-            return new Certified(Certificate.of(found, r.refutation()));
+            return new Certified(Certificate.of(found, r.refutation(), form));
         }
         if (outcome instanceof RefutationSearch.OutOfBudget o) {
             return new OutOfBudget(o.reason());

@@ -14,12 +14,18 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.zip.GZIPInputStream;
 
 import org.chirocore.check.ParsedCertificate.Relation;
+import org.chirocore.check.ParsedCertificate.Side;
+import org.chirocore.check.ParsedCertificate.Signs;
+import org.chirocore.check.ParsedCertificate.Transported;
 import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.Relations.Term;
 import org.chirocore.check.VerificationReport.Check;
@@ -254,6 +260,8 @@ public final class CertificateVerifier {
         private final Optional<Path> input;
         private final int n;
         private BasisTable core;
+        /** The stated automorphisms already checked, as {@code Arrays.toString} of their images. */
+        private final Set<String> checkedAutomorphisms = new HashSet<>();
         private Cnf cnf;
 
         Verification(ParsedCertificate c, Path baseDir, Optional<Path> input) {
@@ -421,28 +429,96 @@ public final class CertificateVerifier {
             return outcome;
         }
 
-        /** Each witness has one sign per basis of its minor and satisfies all its 3-term relations ([BLSWZ, Thm. 3.6.2]). */
+        /**
+         * Each explicit witness has one sign per basis of its minor and satisfies all its 3-term
+         * relations ([BLSWZ, Thm. 3.6.2]); each transported one refers to an explicit witness of
+         * the same kind through a stated automorphism (docs/verifier.md, "Witnesses by symmetry").
+         */
         String minimality() throws Failure {
             long work = 0;
+            long lookups = 0;
+            Set<String> permutations = new HashSet<>();
             for (int e = 0; e < n; e++) {
-                work = Math.addExact(work, Relations.evaluations(core, e));
+                Witness w = c.witnesses().get(e);
+                if (w.deletion() instanceof Signs || w.contraction() instanceof Signs) {
+                    work = Math.addExact(work, Relations.evaluations(core, e));
+                }
+                for (Side side : List.of(w.deletion(), w.contraction())) {
+                    if (side instanceof Transported t) {
+                        // one lookup per basis for the transport, and one per basis for each distinct automorphism
+                        lookups = Math.addExact(lookups, core.count() * (permutations.add(Arrays.toString(t.under())) ? 2L : 1L));
+                    }
+                }
             }
             if (work > VerifierLimits.MAX_WITNESS_RELATIONS) {
                 throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
                         + VerifierLimits.MAX_WITNESS_RELATIONS + "; not checked");
             }
+            if (lookups > VerifierLimits.MAX_TRANSPORT_LOOKUPS) {
+                throw new Failure("the transported witnesses need " + lookups + " basis lookups, more than the verifier's limit of "
+                        + VerifierLimits.MAX_TRANSPORT_LOOKUPS + "; not checked");
+            }
+            int transported = 0;
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
                 if (!w.element().equals(c.labels().get(e))) {
                     throw new Failure("minimality[" + e + "] is for element \"" + w.element() + "\", expected \"" + c.labels().get(e) + "\"");
                 }
-                witness(core.deletion(e), w.deletion(), "the deletion witness of " + w.element());
-                witness(core.contraction(e), w.contraction(), "the contraction witness of " + w.element());
+                transported += witness(e, false, w.deletion(), "the deletion witness of " + w.element()) ? 1 : 0;
+                transported += witness(e, true, w.contraction(), "the contraction witness of " + w.element()) ? 1 : 0;
             }
-            return 2 * n + " witnesses orient every single-element deletion and contraction";
+            return 2 * n + " witnesses orient every single-element deletion and contraction" + (transported == 0 ? ""
+                    : " (" + (2 * n - transported) + " explicit, " + transported + " transported by "
+                            + checkedAutomorphisms.size() + " stated automorphisms)");
         }
 
-        private static void witness(BasisTable minor, String signs, String what) throws Failure {
+        /**
+         * Checks the witness of the minor at e (core/e when {@code contraction}, else core\e) in
+         * whichever form it is given; returns whether it was transported.
+         */
+        private boolean witness(int e, boolean contraction, Side side, String what) throws Failure {
+            BasisTable minor = contraction ? core.contraction(e) : core.deletion(e);
+            if (side instanceof Signs s) {
+                Optional<String> bad = Relations.violated(minor, signs(minor, s.signs(), what));
+                if (bad.isPresent()) {
+                    throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
+                }
+                return false;
+            }
+            transported(e, contraction, minor, (Transported) side, what);
+            return true;
+        }
+
+        /**
+         * A transported witness: its image f names a core element whose witness of the same kind
+         * is explicit, its permutation σ is an automorphism of the core with σ(f) = e, and the
+         * relabelled signs have the minor's bases as support.
+         */
+        private void transported(int e, boolean contraction, BasisTable minor, Transported t, String what) throws Failure {
+            int f = c.labels().indexOf(t.image());
+            if (f < 0) {
+                throw new Failure(what + " is transported from \"" + Escaping.printable(t.image()) + "\", which is not a core element");
+            }
+            Witness source = c.witnesses().get(f);
+            if (!((contraction ? source.contraction() : source.deletion()) instanceof Signs signs)) {
+                throw new Failure(what + " is transported from the " + (contraction ? "contraction" : "deletion") + " witness of "
+                        + Escaping.printable(t.image()) + ", which is not given by its signs (a transported witness must refer to an "
+                        + "explicit one)");
+            }
+            if (checkedAutomorphisms.add(Arrays.toString(t.under()))) {
+                TransportedWitness.checkAutomorphism(core, t.under(), what);
+            }
+            if (t.under()[f] != e) {
+                throw new Failure(what + ": the permutation " + Arrays.toString(t.under()) + " maps its image " + f + " (\""
+                        + Escaping.printable(t.image()) + "\") to " + t.under()[f] + ", not to " + e);
+            }
+            BasisTable from = contraction ? core.contraction(f) : core.deletion(f);
+            String sourceWhat = "the " + (contraction ? "contraction" : "deletion") + " witness of " + Escaping.printable(t.image());
+            TransportedWitness.transport(from, f, signs(from, signs.signs(), sourceWhat), minor, e, t.under(), what);
+        }
+
+        /** The signs of a sign string, one per basis of {@code minor}: +1 for '+', −1 for '-'. */
+        private static int[] signs(BasisTable minor, String signs, String what) throws Failure {
             if (signs.length() != minor.count()) {
                 throw new Failure(what + " has " + signs.length() + " signs; the minor has " + minor.count() + " bases");
             }
@@ -454,10 +530,7 @@ public final class CertificateVerifier {
                 }
                 values[i] = s == '+' ? 1 : -1;
             }
-            Optional<String> bad = Relations.violated(minor, values);
-            if (bad.isPresent()) {
-                throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
-            }
+            return values;
         }
 
         String provenance() throws ProvenanceCheck.Mismatch, Skipped, IOException {

@@ -27,8 +27,23 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         }
     }
 
-    /** One minimality entry: the element's label and the sign strings of core\e and core/e. */
-    record Witness(String element, String deletion, String contraction) {
+    /** One minimality entry: the element's label and the orientation witnesses of core\e and core/e. */
+    record Witness(String element, Side deletion, Side contraction) {
+    }
+
+    /** How a witness of one single-element minor is given (docs/certificate-format.md, {@code minimality}). */
+    sealed interface Side permits Signs, Transported {
+    }
+
+    /** Explicitly: one sign per basis of the minor, in its canonical order. */
+    record Signs(String signs) implements Side {
+    }
+
+    /**
+     * By symmetry: the witness of the same kind at element {@code image}, relabelled by the stated
+     * permutation σ of the core's elements, {@code under[i]} = σ(i).
+     */
+    record Transported(String image, int[] under) implements Side {
     }
 
     /**
@@ -144,9 +159,19 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
             String what = "content.minimality[" + i + "]";
             JsonTree.Obj w = array.get(i).asObject(what);
             w.requireOnly(List.of("element", "deletion", "contraction"));
-            out.add(new Witness(w.require("element").asString(what + ".element"), w.require("deletion").asString(what + ".deletion"),
-                    w.require("contraction").asString(what + ".contraction")));
+            out.add(new Witness(w.require("element").asString(what + ".element"), side(w.require("deletion"), what + ".deletion"),
+                    side(w.require("contraction"), what + ".contraction")));
         }
         return out;
+    }
+
+    /** A witness: a sign string, or an object naming its form by its members. */
+    private static Side side(JsonTree.Value value, String what) {
+        if (value instanceof JsonTree.Str s) {
+            return new Signs(s.value());
+        }
+        JsonTree.Obj o = value.asObject(what + " (a sign string or a witness object)");
+        o.requireOnly(List.of("image", "under"));
+        return new Transported(o.require("image").asString(what + ".image"), ints(o.requireArray("under"), what + ".under"));
     }
 }
