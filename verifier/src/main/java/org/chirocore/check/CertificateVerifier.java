@@ -437,6 +437,7 @@ public final class CertificateVerifier {
         String minimality() throws Failure {
             long work = 0;
             long lookups = 0;
+            int transported = 0;
             Set<String> permutations = new HashSet<>();
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
@@ -445,6 +446,7 @@ public final class CertificateVerifier {
                 }
                 for (Side side : List.of(w.deletion(), w.contraction())) {
                     if (side instanceof Transported t) {
+                        transported++;
                         // one lookup per basis for the transport, and one per basis for each distinct automorphism
                         lookups = Math.addExact(lookups, core.count() * (permutations.add(Arrays.toString(t.under())) ? 2L : 1L));
                     }
@@ -458,14 +460,13 @@ public final class CertificateVerifier {
                 throw new Failure("the transported witnesses need " + lookups + " basis lookups, more than the verifier's limit of "
                         + VerifierLimits.MAX_TRANSPORT_LOOKUPS + "; not checked");
             }
-            int transported = 0;
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
                 if (!w.element().equals(c.labels().get(e))) {
                     throw new Failure("minimality[" + e + "] is for element \"" + w.element() + "\", expected \"" + c.labels().get(e) + "\"");
                 }
-                transported += witness(e, false, w.deletion(), "the deletion witness of " + w.element()) ? 1 : 0;
-                transported += witness(e, true, w.contraction(), "the contraction witness of " + w.element()) ? 1 : 0;
+                witness(e, false, w.deletion(), "the deletion witness of " + w.element());
+                witness(e, true, w.contraction(), "the contraction witness of " + w.element());
             }
             return 2 * n + " witnesses orient every single-element deletion and contraction" + (transported == 0 ? ""
                     : " (" + (2 * n - transported) + " explicit, " + transported + " transported by "
@@ -474,19 +475,18 @@ public final class CertificateVerifier {
 
         /**
          * Checks the witness of the minor at e (core/e when {@code contraction}, else core\e) in
-         * whichever form it is given; returns whether it was transported.
+         * whichever form it is given.
          */
-        private boolean witness(int e, boolean contraction, Side side, String what) throws Failure {
+        private void witness(int e, boolean contraction, Side side, String what) throws Failure {
             BasisTable minor = contraction ? core.contraction(e) : core.deletion(e);
             if (side instanceof Signs s) {
                 Optional<String> bad = Relations.violated(minor, signs(minor, s.signs(), what));
                 if (bad.isPresent()) {
                     throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
                 }
-                return false;
+            } else {
+                transported(e, contraction, minor, (Transported) side, what);
             }
-            transported(e, contraction, minor, (Transported) side, what);
-            return true;
         }
 
         /**
