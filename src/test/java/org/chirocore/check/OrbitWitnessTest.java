@@ -28,6 +28,7 @@ import org.chirocore.pipeline.Subject;
 import org.chirocore.search.Progress;
 import org.chirocore.search.Strategy;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -164,6 +165,17 @@ class OrbitWitnessTest {
             assertEquals(orbits(group, v.certificate().core().size()), v.certificate().core().size() - v.certificate().transportedEntries());
         }
         assertTransportsAreChirotopes(v);
+    }
+
+    static Stream<Arguments> largeCorners() {
+        return Stream.of(7, 8).map(Arguments::of);
+    }
+
+    @Tag("slow")
+    @ParameterizedTest(name = "corner n = {0}")
+    @MethodSource("largeCorners")
+    void aLargeCornerCoreWithOrbitWitnessesVerifies(int n) throws IOException {
+        aCornerCoreWithOrbitWitnessesVerifiesAndItsTransportsAreChirotopes(n);
     }
 
     @Test
