@@ -70,24 +70,19 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
         Optional<ElementOrbits> orbits = form == WitnessForm.ORBITS ? ElementOrbits.of(core) : Optional.empty();
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
-            String label = core.labels().get(e);
-            if (orbits.isEmpty() || orbits.get().representative()[e] == e) {
-                entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION, Optional.empty()),
-                        checkedSigns(found, core, e, Operation.CONTRACTION, Optional.empty())));
-            } else {
-                int f = orbits.get().representative()[e];
-                MinimalityWitness.Transport transport = new MinimalityWitness.Transport(core.labels().get(f),
-                        Arrays.stream(orbits.get().carrier().get(e)).boxed().toList());
-                entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION, orbits),
-                        checkedSigns(found, core, e, Operation.CONTRACTION, orbits), Optional.of(transport)));
-            }
+            int element = e;
+            // a representative states the search's own witnesses; every other element transports its representative's
+            Optional<ElementOrbits> transporting = orbits.filter(o -> o.representative()[element] != element);
+            entries.add(new MinimalityWitness(core.labels().get(e), checkedSigns(found, core, e, Operation.DELETION, transporting),
+                    checkedSigns(found, core, e, Operation.CONTRACTION, transporting),
+                    transporting.map(o -> o.transport(core.labels(), element))));
         }
         return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
     /**
      * The re-checked signs of the minor at e: the search's own witness, or, given {@code orbits},
-     * the witness at e's representative transported to e.
+     * the witness at e's representative transported to e by its carrier.
      */
     private static String checkedSigns(CoreFinding found, ExplicitMatroid core, int e, Operation operation,
             Optional<ElementOrbits> orbits) {

@@ -68,6 +68,11 @@ record ElementOrbits(int[] representative, List<int[]> carrier) {
         return count;
     }
 
+    /** How the certificate states e's witnesses: its representative's, carried by σ_e ({@code labels} the core's). */
+    MinimalityWitness.Transport transport(List<String> labels, int e) {
+        return new MinimalityWitness.Transport(labels.get(representative[e]), Arrays.stream(carrier.get(e)).boxed().toList());
+    }
+
     /**
      * The chirotope {@code source} of the minor at f = representative(e), relabelled by σ = σ_e
      * onto the minor of the same kind at e (docs/mathematics.md §8): for a basis B' of the image,
