@@ -69,8 +69,8 @@ record ElementOrbits(int[] representative, List<int[]> carrier) {
     }
 
     /** How the certificate states e's witnesses: its representative's, carried by σ_e ({@code labels} the core's). */
-    MinimalityWitness.Transport transport(List<String> labels, int e) {
-        return new MinimalityWitness.Transport(labels.get(representative[e]), Arrays.stream(carrier.get(e)).boxed().toList());
+    MinimalityWitness.Transported transported(List<String> labels, int e) {
+        return new MinimalityWitness.Transported(labels.get(representative[e]), Arrays.stream(carrier.get(e)).boxed().toList());
     }
 
     /**
@@ -83,7 +83,7 @@ record ElementOrbits(int[] representative, List<int[]> carrier) {
      *
      * @param labels the labels of the minor at e
      */
-    Chirotope transport(Chirotope source, int e, List<String> labels) {
+    Chirotope relabelled(Chirotope source, int e, List<String> labels) {
         int f = representative[e];
         int[] sigma = carrier.get(e);
         record Signed(int[] basis, byte sign) {

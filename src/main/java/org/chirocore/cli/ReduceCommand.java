@@ -139,7 +139,7 @@ final class ReduceCommand implements Callable<Integer> {
                 }
                 outcome = steered instanceof SteeredSearch.Found f
                         ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
-                                witnesses.form(), out, subject.file())
+                                out, subject.file(), settings.witnesses())
                         : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
             } else {
                 outcome = new CertifiedReduction(settings, progress).run(subject, out);
@@ -192,8 +192,8 @@ final class ReduceCommand implements Callable<Integer> {
         }
         SmallestCore.Found found = (SmallestCore.Found) r;
         CertifiedReduction.Outcome outcome = CertifiedReduction.certify(
-                CoreFinding.searched(found.core(), subject.source()), budget.budget(), witnesses.form(), out,
-                subject.file());
+                CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file(),
+                settings.witnesses());
         if (!(outcome instanceof CertifiedReduction.Verified v)) {
             w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
             return ExitCodes.UNKNOWN;
@@ -255,11 +255,9 @@ final class ReduceCommand implements Callable<Integer> {
         w.println("contracted: " + Format.labels(certificate.provenance().contracted()));
         w.println("deleted: " + Format.deleted(certificate.provenance().deleted(), core.size(),
                 certificate.provenance().contracted().size(), inputSize));
-        int transported = certificate.transportedEntries();
         w.println("witnesses: " + 2 * certificate.minimality().size()
-                + " (every single-element deletion and contraction is orientable)" + (transported == 0 ? ""
-                        : "; " + 2 * (certificate.minimality().size() - transported) + " stated by their signs, "
-                                + 2 * transported + " transported by automorphisms of the core"));
+                + " (every single-element deletion and contraction is orientable; " + certificate.witnessCount("signs")
+                + " by signs, " + certificate.witnessCount("transported") + " transported by automorphisms of the core)");
         if (certificate.discovery() instanceof Discovery.Searched s) {
             w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
         }

@@ -1,6 +1,6 @@
 package org.chirocore.cli;
 
-import org.chirocore.cert.WitnessForm;
+import org.chirocore.cert.WitnessForms;
 
 import picocli.CommandLine.Option;
 
@@ -13,7 +13,7 @@ final class WitnessOption {
                     + "witness by its signs.")
     private boolean orbits;
 
-    WitnessForm form() {
-        return orbits ? WitnessForm.ORBITS : WitnessForm.EXPLICIT;
+    WitnessForms form() {
+        return orbits ? WitnessForms.ORBITS : WitnessForms.SIGNS;
     }
 }

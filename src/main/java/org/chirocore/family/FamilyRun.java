@@ -12,7 +12,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.WitnessForm;
+import org.chirocore.cert.WitnessForms;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.VerificationReport;
 import org.chirocore.io.InputFiles;
@@ -55,7 +55,7 @@ public final class FamilyRun {
      * @param witnesses how new certificates state their minimality witnesses (an existing certificate that
      *     verifies is reused whatever its form)
      */
-    public record Settings(long seed, Strategy strategy, Budget budget, int threads, WitnessForm witnesses) {
+    public record Settings(long seed, Strategy strategy, Budget budget, int threads, WitnessForms witnesses) {
         public Settings {
             if (strategy == null || budget == null || witnesses == null) {
                 throw new IllegalArgumentException("Family run settings need a strategy, a budget and a witness form.");
@@ -67,7 +67,7 @@ public final class FamilyRun {
 
         /** Settings whose new certificates state every witness by its signs. */
         public Settings(long seed, Strategy strategy, Budget budget, int threads) {
-            this(seed, strategy, budget, threads, WitnessForm.EXPLICIT);
+            this(seed, strategy, budget, threads, WitnessForms.SIGNS);
         }
     }
 

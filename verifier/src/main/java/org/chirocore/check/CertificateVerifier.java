@@ -23,9 +23,6 @@ import java.util.Set;
 import java.util.zip.GZIPInputStream;
 
 import org.chirocore.check.ParsedCertificate.Relation;
-import org.chirocore.check.ParsedCertificate.Side;
-import org.chirocore.check.ParsedCertificate.Signs;
-import org.chirocore.check.ParsedCertificate.Transported;
 import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.Relations.Term;
 import org.chirocore.check.VerificationReport.Check;
@@ -436,26 +433,20 @@ public final class CertificateVerifier {
          */
         String minimality() throws Failure {
             long work = 0;
-            long lookups = 0;
             int transported = 0;
-            Set<String> permutations = new HashSet<>();
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
-                if (w.deletion() instanceof Signs || w.contraction() instanceof Signs) {
+                if (w.deletion() instanceof JsonTree.Str || w.contraction() instanceof JsonTree.Str) {
                     work = Math.addExact(work, Relations.evaluations(core, e));
                 }
-                for (Side side : List.of(w.deletion(), w.contraction())) {
-                    if (side instanceof Transported t) {
-                        transported++;
-                        // one lookup per basis for the transport, and one per basis for each distinct automorphism
-                        lookups = Math.addExact(lookups, core.count() * (permutations.add(Arrays.toString(t.under())) ? 2L : 1L));
-                    }
-                }
+                transported += (TransportedWitness.isTransported(w.deletion()) ? 1 : 0) + (TransportedWitness.isTransported(w.contraction()) ? 1 : 0);
             }
             if (work > VerifierLimits.MAX_WITNESS_RELATIONS) {
                 throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
                         + VerifierLimits.MAX_WITNESS_RELATIONS + "; not checked");
             }
+            // per transported witness: one lookup per basis of its minor, and at most one per basis of the core for its automorphism
+            long lookups = 2L * transported * core.count();
             if (lookups > VerifierLimits.MAX_TRANSPORT_LOOKUPS) {
                 throw new Failure("the transported witnesses need " + lookups + " basis lookups, more than the verifier's limit of "
                         + VerifierLimits.MAX_TRANSPORT_LOOKUPS + "; not checked");
@@ -468,39 +459,40 @@ public final class CertificateVerifier {
                 witness(e, false, w.deletion(), "the deletion witness of " + w.element());
                 witness(e, true, w.contraction(), "the contraction witness of " + w.element());
             }
-            return 2 * n + " witnesses orient every single-element deletion and contraction" + (transported == 0 ? ""
-                    : " (" + (2 * n - transported) + " explicit, " + transported + " transported by "
-                            + checkedAutomorphisms.size() + " stated automorphisms)");
+            return 2 * n + " witnesses orient every single-element deletion and contraction (" + (2 * n - transported) + " by signs, "
+                    + transported + " transported by " + checkedAutomorphisms.size() + " stated automorphisms)";
         }
 
         /**
-         * Checks the witness of the minor at e (core/e when {@code contraction}, else core\e) in
-         * whichever form it is given.
+         * Checks the witness of the minor at e (core/e when {@code contraction}, else core\e),
+         * dispatching on its form: a sign string, or an object naming its kind.
          */
-        private void witness(int e, boolean contraction, Side side, String what) throws Failure {
+        private void witness(int e, boolean contraction, JsonTree.Value witness, String what) throws Failure {
             BasisTable minor = contraction ? core.contraction(e) : core.deletion(e);
-            if (side instanceof Signs s) {
-                Optional<String> bad = Relations.violated(minor, signs(minor, s.signs(), what));
+            if (witness instanceof JsonTree.Str s) {
+                Optional<String> bad = Relations.violated(minor, signs(minor, s.value(), what));
                 if (bad.isPresent()) {
                     throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
                 }
+            } else if (TransportedWitness.isTransported(witness)) {
+                transported(e, contraction, minor, TransportedWitness.Stated.read((JsonTree.Obj) witness, what), what);
             } else {
-                transported(e, contraction, minor, (Transported) side, what);
+                throw new Failure(what + " is an object without \"image\"; a witness is a sign string or {\"image\": label, \"under\": [...]}");
             }
         }
 
         /**
          * A transported witness: its image f names a core element whose witness of the same kind
-         * is explicit, its permutation σ is an automorphism of the core with σ(f) = e, and the
+         * is a sign string, its permutation σ is an automorphism of the core with σ(f) = e, and the
          * relabelled signs have the minor's bases as support.
          */
-        private void transported(int e, boolean contraction, BasisTable minor, Transported t, String what) throws Failure {
+        private void transported(int e, boolean contraction, BasisTable minor, TransportedWitness.Stated t, String what) throws Failure {
             int f = c.labels().indexOf(t.image());
             if (f < 0) {
                 throw new Failure(what + " is transported from \"" + Escaping.printable(t.image()) + "\", which is not a core element");
             }
             Witness source = c.witnesses().get(f);
-            if (!((contraction ? source.contraction() : source.deletion()) instanceof Signs signs)) {
+            if (!((contraction ? source.contraction() : source.deletion()) instanceof JsonTree.Str signs)) {
                 throw new Failure(what + " is transported from the " + (contraction ? "contraction" : "deletion") + " witness of "
                         + Escaping.printable(t.image()) + ", which is not given by its signs (a transported witness must refer to an "
                         + "explicit one)");
@@ -514,7 +506,7 @@ public final class CertificateVerifier {
             }
             BasisTable from = contraction ? core.contraction(f) : core.deletion(f);
             String sourceWhat = "the " + (contraction ? "contraction" : "deletion") + " witness of " + Escaping.printable(t.image());
-            TransportedWitness.transport(from, f, signs(from, signs.signs(), sourceWhat), minor, e, t.under(), what);
+            TransportedWitness.transport(from, f, signs(from, signs.value(), sourceWhat), minor, e, t.under(), what);
         }
 
         /** The signs of a sign string, one per basis of {@code minor}: +1 for '+', −1 for '-'. */

@@ -27,23 +27,11 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         }
     }
 
-    /** One minimality entry: the element's label and the orientation witnesses of core\e and core/e. */
-    record Witness(String element, Side deletion, Side contraction) {
-    }
-
-    /** How a witness of one single-element minor is given (docs/certificate-format.md, {@code minimality}). */
-    sealed interface Side permits Signs, Transported {
-    }
-
-    /** Explicitly: one sign per basis of the minor, in its canonical order. */
-    record Signs(String signs) implements Side {
-    }
-
     /**
-     * By symmetry: the witness of the same kind at element {@code image}, relabelled by the stated
-     * permutation σ of the core's elements, {@code under[i]} = σ(i).
+     * One minimality entry: the element's label and the witnesses of core\e and core/e, each a
+     * sign string or an object naming its kind (checked by the minimality check).
      */
-    record Transported(String image, int[] under) implements Side {
+    record Witness(String element, JsonTree.Value deletion, JsonTree.Value contraction) {
     }
 
     /**
@@ -122,7 +110,8 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         return out;
     }
 
-    private static int[] ints(JsonTree.Arr array, String what) {
+    /** An array of at most 64 ints. */
+    static int[] ints(JsonTree.Arr array, String what) {
         if (array.size() > VerifierLimits.MAX_ELEMENTS) {
             throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + VerifierLimits.MAX_ELEMENTS + " are allowed");
         }
@@ -159,19 +148,18 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
             String what = "content.minimality[" + i + "]";
             JsonTree.Obj w = array.get(i).asObject(what);
             w.requireOnly(List.of("element", "deletion", "contraction"));
-            out.add(new Witness(w.require("element").asString(what + ".element"), side(w.require("deletion"), what + ".deletion"),
-                    side(w.require("contraction"), what + ".contraction")));
+            out.add(new Witness(w.require("element").asString(what + ".element"), witness(w, "deletion", what),
+                    witness(w, "contraction", what)));
         }
         return out;
     }
 
-    /** A witness: a sign string, or an object naming its form by its members. */
-    private static Side side(JsonTree.Value value, String what) {
-        if (value instanceof JsonTree.Str s) {
-            return new Signs(s.value());
+    /** A witness member: a sign string or an object. */
+    private static JsonTree.Value witness(JsonTree.Obj entry, String name, String what) {
+        JsonTree.Value v = entry.require(name);
+        if (!(v instanceof JsonTree.Str) && !(v instanceof JsonTree.Obj)) {
+            throw new JsonTree.Mistyped(what + "." + name + " must be a sign string or an object, found " + v.kind());
         }
-        JsonTree.Obj o = value.asObject(what + " (a sign string or a witness object)");
-        o.requireOnly(List.of("image", "under"));
-        return new Transported(o.require("image").asString(what + ".image"), ints(o.requireArray("under"), what + ".under"));
+        return v;
     }
 }

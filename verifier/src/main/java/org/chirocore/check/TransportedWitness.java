@@ -1,6 +1,7 @@
 package org.chirocore.check;
 
 import java.util.Arrays;
+import java.util.List;
 
 import org.chirocore.check.CertificateVerifier.Failure;
 
@@ -20,6 +21,29 @@ import org.chirocore.check.CertificateVerifier.Failure;
  */
 final class TransportedWitness {
     private TransportedWitness() {
+    }
+
+    /**
+     * A transported witness as stated: {@code {"image": label f, "under": [σ(0), …, σ(N−1)]}}.
+     *
+     * @param image the label f
+     * @param under σ as its list of images
+     */
+    record Stated(String image, int[] under) {
+        /**
+         * Reads the object {@code o}, whose members must be exactly {@code image} and {@code under}.
+         *
+         * @throws JsonTree.Mistyped naming the member of the wrong type or the unknown member
+         */
+        static Stated read(JsonTree.Obj o, String what) {
+            o.requireOnly(List.of("image", "under"));
+            return new Stated(o.require("image").asString(what + ".image"), ParsedCertificate.ints(o.requireArray("under"), what + ".under"));
+        }
+    }
+
+    /** Whether a witness member is an object of this form (it names its kind by the member {@code image}). */
+    static boolean isTransported(JsonTree.Value witness) {
+        return witness instanceof JsonTree.Obj o && o.has("image");
     }
 
     /**

@@ -28,8 +28,9 @@ final class VerifierLimits {
     /** Most 3-term relations evaluated over all minimality witnesses together. */
     static final long MAX_WITNESS_RELATIONS = 100_000_000L;
     /**
-     * Most basis lookups for the witnesses transported by symmetry: per transported witness one
-     * per basis of the core, and as many again for each distinct automorphism it states.
+     * Most basis lookups for the witnesses transported by symmetry, counted as twice the core's
+     * basis count per transported witness (one lookup per basis of its minor, and at most one per
+     * basis of the core to check its automorphism).
      */
     static final long MAX_TRANSPORT_LOOKUPS = 100_000_000L;
     /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
