@@ -460,7 +460,7 @@ public final class CertificateVerifier {
                 witness(e, true, w.contraction(), "the contraction witness of " + w.element());
             }
             return 2 * n + " witnesses orient every single-element deletion and contraction (" + (2 * n - transported) + " by signs, "
-                    + transported + " transported by " + checkedAutomorphisms.size() + " stated automorphisms)";
+                    + transported + " transported" + (transported == 0 ? "" : " by " + checkedAutomorphisms.size() + " stated automorphisms") + ")";
         }
 
         /**
