@@ -114,7 +114,11 @@ class RunReportTest {
         // docs/sweep.md: the n = 3 pair's core is F7; AG(2,3)\e occurs among the others
         assertAll(() -> assertEquals("", Structure.latexProblem(tex)),
                 () -> assertTrue(tex.contains("$F_7$") && tex.contains("$AG(2,3)\\setminus e$"), "classes named"),
-                () -> assertEquals(23, count(tex, "\\subsection*{n = "), "one section per pair (23 pairs, docs/sweep.md)"));
+                () -> assertTrue(tex.contains("rank-n core") && tex.contains("7, 3, 28 bases"),
+                        "the column of the cores of rank n; n = 3: the Fano plane, 28 bases (docs/sweep.md)"),
+                () -> assertEquals(23 + count(Files.readString(sweep.resolve("sweep.json")), "\"status\": \"found\""),
+                        count(tex, "\\subsection*{n = "),
+                        "one section per pair (23 pairs, docs/sweep.md) and one per core of rank n found"));
     }
 
     @Test
