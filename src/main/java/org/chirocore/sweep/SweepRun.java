@@ -65,9 +65,11 @@ import org.chirocore.search.UnsatCoreSearch;
  * last, which makes a pair done. A rerun reuses a done pair whose certificates still verify and
  * record the same construction, seed and strategy, and redoes any other; of a reused pair it keeps
  * the rank-n core outcome when its certificate still verifies likewise, when it is "none exists",
- * or when it is unknown under a limit at least this run's, and otherwise searches the core only. Then {@code sweep.json} and {@code sweep.md} are
- * written. Pairs run on {@code threads} threads; each pair depends only on its input and the
- * seed, so the files do not depend on thread timing.
+ * or when it is unknown under a limit at least this run's, and otherwise searches the core only.
+ * Then {@code sweep.json} and {@code sweep.md} are written. Pairs run on {@code threads} threads;
+ * each pair depends only on its input and the seed, so the files do not depend on thread timing
+ * (except that a rank-n search under a time limit may answer unknown under one load and find a
+ * core under another: its inner budgets count conflicts, only the limit counts time).
  *
  * <p>Cost per n: the enumeration (see {@link HyperplaneOrbits}), one general-position test per
  * candidate pair, and per decided pair one or two reductions, two refutations and two

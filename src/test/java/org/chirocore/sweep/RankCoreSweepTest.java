@@ -128,7 +128,7 @@ class RankCoreSweepTest {
 
     @Test
     void mergeRefusesShardsWithOtherRankCoreSettings(@TempDir Path tmp) throws IOException {
-        Path longer = copy(shard1, tmp.resolve("longer"));
+        Path longer = SweepRunTest.copy(shard1, tmp.resolve("longer"));
         Path json = longer.resolve(SweepRun.SWEEP_JSON);
         String text = Files.readString(json);
         assertTrue(text.contains("\"timeLimitMillis\": 0"), text);
@@ -146,7 +146,7 @@ class RankCoreSweepTest {
         assertFalse(Files.exists(tmp.resolve("o1")) || Files.exists(tmp.resolve("o2")), "a refused merge writes nothing");
 
         // a rank-n certificate swapped for another pair's is refused like a verdict's
-        Path swapped = copy(shard1, tmp.resolve("swapped"));
+        Path swapped = SweepRunTest.copy(shard1, tmp.resolve("swapped"));
         Path mine = rankCertificate(swapped);
         Files.copy(rankCertificate(shard0), mine, StandardCopyOption.REPLACE_EXISTING);
         SweepException construction = assertThrows(SweepException.class,
@@ -272,19 +272,5 @@ class RankCoreSweepTest {
         try (Stream<Path> files = Files.list(shard.resolve("n=4"))) {
             return files.filter(f -> f.toString().endsWith(".rank-n.cert.json")).findFirst().orElseThrow();
         }
-    }
-
-    private static Path copy(Path from, Path to) throws IOException {
-        try (Stream<Path> walk = Files.walk(from)) {
-            for (Path p : walk.toList()) {
-                Path target = to.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(target);
-                } else {
-                    Files.copy(p, target);
-                }
-            }
-        }
-        return to;
     }
 }
