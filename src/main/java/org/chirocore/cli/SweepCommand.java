@@ -130,7 +130,7 @@ final class SweepCommand implements Callable<Integer> {
             result.rankCores().ifPresent(r -> w.println("n = " + l.n() + ": cores of rank " + l.n() + ": "
                     + count(l, RankCore.Found.class) + " found (certified and verified), "
                     + count(l, RankCore.NoneExists.class) + " none exists, " + count(l, RankCore.Unknown.class)
-                    + " unknown within " + r.describe()));
+                    + " unknown (limit: " + r.describe() + ")"));
         }
         for (PairResult p : result.discoveries()) {
             w.println("!!! ORIENTABLE PULL: " + p.id() + " (pulled " + p.pulledVerdict().text() + ", contracted "

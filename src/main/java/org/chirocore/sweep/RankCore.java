@@ -84,7 +84,8 @@ public sealed interface RankCore {
 
         @Override
         public String text() {
-            return "unknown within " + (millis == 0 ? "no time limit" : seconds(millis) + " s") + ": " + reason;
+            return "unknown " + (millis == 0 ? "without a time limit" : "within " + seconds(millis) + " s") + ": "
+                    + reason;
         }
 
         @Override

@@ -31,7 +31,7 @@ class SweepCommandTest {
         CliRun rank = CliRun.of("sweep", "--n", "3", "--rank-n-cores", "--out", dir.resolve("r").toString());
         assertEquals(0, rank.exit(), rank.err());
         assertTrue(rank.out().contains("n = 3: cores of rank 3: 1 found (certified and verified), 0 none exists, 0 unknown "
-                + "within 120 s per pair"), rank.out());
+                + "(limit: 120 s per pair)"), rank.out());
         assertTrue(Files.exists(dir.resolve("r/n=3/n3_a1-1-1_b1_o111.rank-n.cert.json")));
         CliRun merged = CliRun.of("sweep-merge", out.toString(), "--out", dir.resolve("m").toString());
         assertEquals(0, merged.exit(), merged.err());
