@@ -21,7 +21,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Reports on run directories: the stored corner family run (families/corner, n = 3..10), the
+ * Reports on run directories: the stored corner family run (families/corner, n = 3..16), the
  * stored sweep and enumeration, and an exploration and a checked prediction of the corner family
  * made here.
  */
@@ -35,8 +35,9 @@ class RunReportTest {
         Document.Table table = (Document.Table) doc.blocks().stream()
                 .filter(b -> b instanceof Document.Table t && t.header().contains("core elements"))
                 .findFirst().orElseThrow();
-        assertEquals(List.of("3", "4", "5", "6", "7", "8", "9", "10"), column(table, 0));
-        assertEquals(List.of("7", "8", "7", "10", "8", "12", "15", "8"), column(table, 3), "core elements as in docs/families.md");
+        assertEquals(List.of("3", "4", "5", "6", "7", "8", "9", "10", "11", "12", "13", "14", "15", "16"), column(table, 0));
+        assertEquals(List.of("7", "8", "7", "10", "8", "12", "15", "8", "7", "14", "7", "16", "10", "10"), column(table, 3),
+                "core elements as in docs/families.md");
         // the family's description names F7 at n = 3; the corner-n4 certificate's core is AG(2,3)\e (CatalogueTest)
         Document.Math fano = (Document.Math) table.rows().get(0).get(7);
         Document.Math ag = (Document.Math) table.rows().get(1).get(7);
@@ -45,7 +46,7 @@ class RunReportTest {
         String html = ReportFormat.HTML.render(doc, "corner").text();
         assertAll(
                 // three charts and one configuration per member (all cores have rank 3)
-                () -> assertEquals(3 + 8, count(html, "<svg ")),
+                () -> assertEquals(3 + 14, count(html, "<svg ")),
                 () -> assertEquals("", Structure.htmlProblem(html)),
                 () -> assertFalse(html.contains("http")),
                 () -> assertTrue(html.contains("java -jar chirocore.jar verify families/corner/n=*.cert.json"), "relative command"),
@@ -62,7 +63,7 @@ class RunReportTest {
         assertEquals("corner.md", names.get(0));
         assertTrue(names.containsAll(List.of("corner-core-size.svg", "corner-proof-size.svg", "corner-time.svg",
                 "corner-configuration.svg", "corner-configuration-8.svg")), names.toString());
-        assertEquals(1 + 3 + 8, names.stream().distinct().count());
+        assertEquals(1 + 3 + 14, names.stream().distinct().count());
     }
 
     @Test
@@ -82,7 +83,7 @@ class RunReportTest {
                 () -> assertTrue(index.contains("<a href=\"run.html\">"), index),
                 () -> assertTrue(index.contains("<a href=\"n=3.html\">"), index),
                 () -> assertTrue(index.contains("the Fano plane F7"), index),
-                () -> assertEquals(1 + 1 + 8, written.size()),
+                () -> assertEquals(1 + 1 + 14, written.size()),
                 () -> assertEquals("", Structure.htmlProblem(index)));
     }
 
