@@ -254,7 +254,7 @@ public final class UnsatCoreSearch implements CoreSearch {
     /**
      * The element indices of {@code labels} in {@code m}, sorted. The labels are looked up in a
      * map: a path deletes almost all of a pulled 16-cube's 2^16 vertices, and a linear search per
-     * label would cost 2^32 string comparisons.
+     * label would cost about 2·10^9 string comparisons.
      */
     private static int[] indices(Matroid m, List<String> labels) {
         Map<String, Integer> index = new HashMap<>();
