@@ -3,7 +3,6 @@ package org.chirocore.matroid;
 import java.util.Arrays;
 import java.util.BitSet;
 import java.util.Comparator;
-import java.util.List;
 
 /**
  * A finite set of elements of a ground set, the elements being indices 0, 1, 2, …: the sets of
@@ -217,16 +216,6 @@ public final class ElementSet {
         return true;
     }
 
-    /** Whether the two sets share an element. */
-    public boolean intersects(ElementSet other) {
-        for (int i = 0; i < Math.min(words.length, other.words.length); i++) {
-            if ((words[i] & other.words[i]) != 0) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     /** |this ∩ other|. */
     public int intersectionSize(ElementSet other) {
         int n = 0;
@@ -284,10 +273,5 @@ public final class ElementSet {
     @Override
     public String toString() {
         return Arrays.toString(elements());
-    }
-
-    /** The set written with its elements' labels for messages, e.g. "{100, 010, 001}". */
-    public String format(List<String> labels) {
-        return ElementSets.format(labels, elements());
     }
 }

@@ -107,7 +107,7 @@ final class TestCertificates {
                 for (int b = a + 1; b < n; b++) {
                     for (int c = b + 1; c < n; c++) {
                         for (int d = c + 1; d < n; d++) {
-                            if (!ElementSet.of(a, b, c, d).intersects(xm) && !ClauseEncoding.clauses(index, new GpRelation(xm, a, b, c, d)).isEmpty()) {
+                            if (ElementSet.of(a, b, c, d).intersectionSize(xm) == 0 && !ClauseEncoding.clauses(index, new GpRelation(xm, a, b, c, d)).isEmpty()) {
                                 out.add(new GpRelation(xm, a, b, c, d));
                             }
                         }
