@@ -276,30 +276,30 @@ public final class CertificateVerifier {
 
         /** The bases are sorted sets of size r in canonical order and satisfy basis exchange ([Ox, §1.2]). */
         String core() throws Failure {
-            long[] masks = new long[c.bases().size()];
-            for (int i = 0; i < masks.length; i++) {
-                masks[i] = set(c.bases().get(i), "basis " + (i + 1), c.rank());
-                if (i > 0 && !BasisTable.lexLess(masks[i - 1], masks[i])) {
-                    throw new Failure("basis " + (i + 1) + " " + BasisTable.set(masks[i]) + " does not come after basis " + i + " "
-                            + BasisTable.set(masks[i - 1]) + " in lexicographic order (or repeats it)");
+            List<int[]> bases = new ArrayList<>();
+            for (int i = 0; i < c.bases().size(); i++) {
+                bases.add(set(c.bases().get(i), "basis " + (i + 1), c.rank()));
+                if (i > 0 && java.util.Arrays.compare(bases.get(i - 1), bases.get(i)) >= 0) {
+                    throw new Failure("basis " + (i + 1) + " " + BasisTable.set(bases.get(i)) + " does not come after basis " + i + " "
+                            + BasisTable.set(bases.get(i - 1)) + " in lexicographic order (or repeats it)");
                 }
             }
-            core = new BasisTable(n, c.rank(), masks);
+            core = new BasisTable(n, c.rank(), bases);
             Optional<String> defect = core.exchangeDefect();
             if (defect.isPresent()) {
                 throw new Failure("basis exchange fails: " + defect.get());
             }
-            return masks.length + " distinct bases in canonical order; basis exchange holds";
+            return bases.size() + " distinct bases in canonical order; basis exchange holds";
         }
 
-        /** A sorted set of distinct elements of the core, of the given size, as a mask. */
-        private long set(int[] elements, String what, int size) throws Failure {
+        /** {@code elements} (a copy), after checking it is a sorted set of distinct elements of the core, of the given size. */
+        private int[] set(int[] elements, String what, int size) throws Failure {
             return RefutationCheck.set(n, elements, what, size);
         }
 
         /** The normalised bases are bases and the vectors (1, 1_B) are GF(2)-independent (docs/mathematics.md §4). */
         String normalisation() throws Failure {
-            RefutationCheck.independent(RefutationCheck.normalised(core, c.normalised()));
+            RefutationCheck.independent(n, RefutationCheck.normalised(core, c.normalised()));
             return c.normalised().size() + " bases fixed to +1, GF(2)-independent";
         }
 

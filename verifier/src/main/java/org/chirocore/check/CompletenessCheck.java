@@ -147,8 +147,8 @@ public final class CompletenessCheck {
                 throw new Failure("format must be \"" + FORMAT_NAME + "\" version 2");
             }
             JsonTree.Arr names = doc.requireArray("labels");
-            if (names.size() > VerifierLimits.MAX_ELEMENTS) {
-                throw new Failure("at most " + VerifierLimits.MAX_ELEMENTS + " elements, not " + names.size());
+            if (names.size() > VerifierLimits.MAX_ENUMERATED_ELEMENTS) {
+                throw new Failure("at most " + VerifierLimits.MAX_ENUMERATED_ELEMENTS + " elements, not " + names.size());
             }
             labels = new ArrayList<>();
             for (int i = 0; i < names.size(); i++) {
@@ -351,7 +351,8 @@ public final class CompletenessCheck {
                             throw new Failure(where + " spans but has no witness");
                         }
                     } else {
-                        Optional<String> v = ChirotopeCheck.violation(size, r, local, signs);
+                        Optional<String> v = ChirotopeCheck.violation(size, r,
+                                Arrays.stream(local).mapToObj(CompletenessCheck::elements).toList(), signs);
                         if (v.isPresent()) {
                             throw new Failure(where + ": the witness is not a chirotope: " + v.get());
                         }
@@ -490,7 +491,8 @@ public final class CompletenessCheck {
                     long c = e.contracted() | 1L << x;
                     long rest = s & ~(1L << x);
                     int r = rank - Long.bitCount(c);
-                    BasisTable minor = new BasisTable(Long.bitCount(rest), r, localBases(c, rest));
+                    BasisTable minor = new BasisTable(Long.bitCount(rest), r,
+                            Arrays.stream(localBases(c, rest)).mapToObj(CompletenessCheck::elements).toList());
                     if (minor.count() == 0) {
                         throw new Failure(where + ": contracting " + names(1L << x) + " leaves no basis");
                     }
@@ -508,9 +510,9 @@ public final class CompletenessCheck {
             if (non.has("drat") == non.has("lrat")) {
                 throw new Failure(where + ": exactly one of \"drat\" and \"lrat\" is needed");
             }
-            long[] fixed = RefutationCheck.normalised(minor,
+            List<int[]> fixed = RefutationCheck.normalised(minor,
                     ParsedCertificate.sets(non.requireArray("normalised"), "normalised", VerifierLimits.MAX_ELEMENTS + 1));
-            RefutationCheck.independent(fixed);
+            RefutationCheck.independent(minor.size, fixed);
             Cnf cnf = RefutationCheck.cnf(minor, fixed, ParsedCertificate.relations(non.requireArray("relations")));
             Optional<String> failure = non.has("lrat") ? LratChecker.check(cnf, non.requireString("lrat"))
                     : Optional.of(DratChecker.check(cnf, non.requireString("drat"))).filter(o -> !o.valid())

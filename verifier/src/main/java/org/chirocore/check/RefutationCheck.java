@@ -2,6 +2,7 @@ package org.chirocore.check;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.List;
 
 import org.chirocore.check.CertificateVerifier.Failure;
@@ -20,17 +21,18 @@ final class RefutationCheck {
     }
 
     /**
-     * The normalised bases as masks, each checked to be a sorted set and a basis of {@code table}.
+     * The normalised bases, each checked to be a sorted set and a basis of {@code table}.
      *
      * @throws Failure naming the first one that is not
      */
-    static long[] normalised(BasisTable table, List<int[]> normalised) throws Failure {
-        long[] fixed = new long[normalised.size()];
-        for (int i = 0; i < fixed.length; i++) {
-            fixed[i] = set(table.size, normalised.get(i), "normalised[" + i + "]", table.rank);
-            if (table.positionOf(fixed[i]) < 0) {
-                throw new Failure("normalised[" + i + "] " + BasisTable.set(fixed[i]) + " is not a basis of the core");
+    static List<int[]> normalised(BasisTable table, List<int[]> normalised) throws Failure {
+        List<int[]> fixed = new ArrayList<>();
+        for (int i = 0; i < normalised.size(); i++) {
+            int[] b = set(table.size, normalised.get(i), "normalised[" + i + "]", table.rank);
+            if (table.positionOf(b) < 0) {
+                throw new Failure("normalised[" + i + "] " + BasisTable.set(b) + " is not a basis of the core");
             }
+            fixed.add(b);
         }
         return fixed;
     }
@@ -41,17 +43,17 @@ final class RefutationCheck {
      *
      * @throws Failure naming the first relation at fault
      */
-    static Cnf cnf(BasisTable table, long[] fixed, List<Relation> relations) throws Failure {
+    static Cnf cnf(BasisTable table, List<int[]> fixed, List<Relation> relations) throws Failure {
         List<int[]> clauses = new ArrayList<>();
-        for (long b : fixed) {
+        for (int[] b : fixed) {
             clauses.add(new int[] {table.positionOf(b) + 1});
         }
         for (int i = 0; i < relations.size(); i++) {
             Relation r = relations.get(i);
             String what = "relation " + i + " " + r;
-            long x = set(table.size, r.x(), what + ": X", table.rank - 2);
-            long abcd = set(table.size, new int[] {r.a(), r.b(), r.c(), r.d()}, what + ": a, b, c, d", 4);
-            if ((x & abcd) != 0) {
+            int[] x = set(table.size, r.x(), what + ": X", table.rank - 2);
+            int[] abcd = set(table.size, new int[] {r.a(), r.b(), r.c(), r.d()}, what + ": a, b, c, d", 4);
+            if (Arrays.stream(abcd).anyMatch(e -> BasisTable.contains(x, e))) {
                 throw new Failure(what + ": a, b, c, d must lie outside X");
             }
             List<Term> terms = Relations.nonZero(Relations.terms(table, x, r.a(), r.b(), r.c(), r.d()));
@@ -64,37 +66,44 @@ final class RefutationCheck {
     }
 
     /**
-     * The vectors (1, 1_B) of the normalised bases are linearly independent over GF(2)
-     * (docs/mathematics.md §4): equivalently the differences 1_B ⊕ 1_B0 are independent.
+     * The vectors (1, 1_B) of the normalised bases (sets of elements below {@code n}) are linearly
+     * independent over GF(2) (docs/mathematics.md §4): equivalently the differences 1_B ⊕ 1_B0 are.
      */
-    static void independent(long[] fixed) throws Failure {
-        long[] pivotByTopBit = new long[64];
-        for (int i = 1; i < fixed.length; i++) {
-            // reduce 1_B ⊕ 1_B0 by the pivots, each stored at its highest bit
-            long v = fixed[i] ^ fixed[0];
-            while (v != 0 && pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] != 0) {
-                v ^= pivotByTopBit[63 - Long.numberOfLeadingZeros(v)];
+    static void independent(int n, List<int[]> fixed) throws Failure {
+        BitSet[] pivotByTopBit = new BitSet[n];
+        BitSet first = new BitSet();
+        for (int i = 0; i < fixed.size(); i++) {
+            BitSet v = new BitSet(n);
+            for (int e : fixed.get(i)) {
+                v.set(e);
             }
-            if (v == 0) {
-                throw new Failure("normalised[" + i + "] " + BasisTable.set(fixed[i])
+            if (i == 0) {
+                first = (BitSet) v.clone();
+            }
+            // reduce 1_B ⊕ 1_B0 by the pivots, each stored at its highest bit
+            v.xor(first);
+            while (!v.isEmpty() && pivotByTopBit[v.length() - 1] != null) {
+                v.xor(pivotByTopBit[v.length() - 1]);
+            }
+            if (!v.isEmpty()) {
+                pivotByTopBit[v.length() - 1] = v;
+            } else if (i > 0) {
+                throw new Failure("normalised[" + i + "] " + BasisTable.set(fixed.get(i))
                         + " makes the vectors (1, 1_B) linearly dependent over GF(2)");
             }
-            pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] = v;
         }
     }
 
-    /** A sorted set of distinct elements of 0..n−1 of the given size, as a mask. */
-    static long set(int n, int[] elements, String what, int size) throws Failure {
-        long mask = 0;
+    /** {@code elements} (a copy), after checking it is a sorted set of distinct elements of 0..n−1 of the given size. */
+    static int[] set(int n, int[] elements, String what, int size) throws Failure {
         for (int i = 0; i < elements.length; i++) {
             if (elements[i] < 0 || elements[i] >= n || (i > 0 && elements[i] <= elements[i - 1])) {
                 throw new Failure(what + " " + Arrays.toString(elements) + " is not a sorted set of elements 0.." + (n - 1));
             }
-            mask |= 1L << elements[i];
         }
         if (elements.length != size) {
             throw new Failure(what + " " + Arrays.toString(elements) + " has " + elements.length + " elements, not " + size);
         }
-        return mask;
+        return elements.clone();
     }
 }
