@@ -3,11 +3,13 @@ package org.chirocore.cert;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
+import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
@@ -36,15 +38,21 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
         }
     }
 
+    /** The certificate of {@code found} with sign witnesses only; as {@link #of(CoreFinding, Refutation, WitnessForms)}. */
+    public static Certificate of(CoreFinding found, Refutation refutation) {
+        return of(found, refutation, WitnessForms.SIGNS);
+    }
+
     /**
-     * The certificate of {@code found}, refuted by {@code refutation}.
-     * Re-checks every witness against the minor rebuilt here (one full relation scan each) and
-     * that the refutation's normalisation is the one of the core, so nothing unchecked is written.
+     * The certificate of {@code found}, refuted by {@code refutation}, its witnesses in
+     * {@code forms}. Re-checks every witness against the minor rebuilt here (a sign witness by
+     * one full relation scan, a matrix by all its maximal minors) and that the refutation's
+     * normalisation is the one of the core, so nothing unchecked is written.
      *
      * @throws IllegalStateException when a witness fails its re-check, or the refutation was made
      *     for another matroid
      */
-    public static Certificate of(CoreFinding found, Refutation refutation) {
+    public static Certificate of(CoreFinding found, Refutation refutation, WitnessForms forms) {
         ExplicitMatroid core = found.core();
         BasisIndex index = BasisIndex.of(core);
         List<Integer> normalisation = Arrays.stream(Normalisation.fixedVariables(index)).boxed().toList();
@@ -52,26 +60,39 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             throw new IllegalStateException("The refutation fixes variables " + refutation.normalised()
                     + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
         }
+        MatrixWitnesses matrices = forms == WitnessForms.MATRICES ? MatrixWitnesses.of(found) : null;
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
             String label = core.labels().get(e);
-            entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION),
-                    checkedSigns(found, core, e, Operation.CONTRACTION)));
+            entries.add(new MinimalityWitness(label, witness(found, core, e, Operation.DELETION, matrices),
+                    witness(found, core, e, Operation.CONTRACTION, matrices)));
         }
         return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
-    private static String checkedSigns(CoreFinding found, ExplicitMatroid core, int e, Operation operation) {
+    /** The number of witnesses of the given kind ("signs" or "matrix"). */
+    public int witnessCount(String kind) {
+        return minimality.stream().mapToInt(w -> w.count(kind)).sum();
+    }
+
+    private static MinimalityWitness.Form witness(CoreFinding found, ExplicitMatroid core, int e, Operation operation,
+            MatrixWitnesses matrices) {
+        // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
+        int[] single = {e};
+        Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
+                : new Minor(core, single, new int[0]);
+        if (matrices != null) {
+            Optional<Realisation> m = matrices.find(e, operation == Operation.CONTRACTION, minor);
+            if (m.isPresent()) {
+                return new MinimalityWitness.Matrix(m.get());
+            }
+        }
         String label = core.labels().get(e);
         MinorWitness w = found.witnesses().stream()
                 .filter(x -> x.element().equals(label) && x.operation() == operation)
                 .findFirst()
                 .orElseThrow(() -> new IllegalStateException("The core has no " + operation + " witness for element "
                         + label + "."));
-        // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
-        int[] single = {e};
-        Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
-                : new Minor(core, single, new int[0]);
-        return ResultJson.signString(WitnessCheck.checked(minor, w.witness()));
+        return new MinimalityWitness.Signs(ResultJson.signString(WitnessCheck.checked(minor, w.witness())));
     }
 }

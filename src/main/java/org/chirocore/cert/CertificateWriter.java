@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPOutputStream;
@@ -114,10 +115,22 @@ public final class CertificateWriter {
                 .put("nonOrientability", nonOrientability(c, dratFile))
                 .put("minimality", new Json.Arr(c.minimality().stream().<Json>map(w -> Json.Obj.builder()
                         .put("element", w.element())
-                        .put("deletion", w.deletion())
-                        .put("contraction", w.contraction())
+                        .put("deletion", witness(w.deletion()))
+                        .put("contraction", witness(w.contraction()))
                         .build()).toList()))
                 .build();
+    }
+
+    /** A witness as the certificate writes it: a sign string, or {@code {"matrix": [[column], ...]}}. */
+    static Json witness(MinimalityWitness.Form form) {
+        if (form instanceof MinimalityWitness.Matrix m) {
+            List<Json> columns = new ArrayList<>();
+            for (long[] column : m.columns()) {
+                columns.add(new Json.Arr(Arrays.stream(column).<Json>mapToObj(Json.Num::of).toList()));
+            }
+            return Json.Obj.builder().put("matrix", new Json.Arr(columns)).build();
+        }
+        return new Json.Str(((MinimalityWitness.Signs) form).signs());
     }
 
     /** The content digest: SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */

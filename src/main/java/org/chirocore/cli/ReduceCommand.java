@@ -12,6 +12,7 @@ import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
+import org.chirocore.cert.WitnessForms;
 import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.io.ResultJson;
@@ -106,6 +107,12 @@ final class ReduceCommand implements Callable<Integer> {
                     + "answers unknown; 0 (default) for none.")
     private double totalTime;
 
+    @Option(names = "--matrix-witnesses",
+            description = "For a core of a cube construction over Q, write an integer matrix realising a single-element "
+                    + "minor as its witness wherever the real cube (the pulled vertex moved onto the hyperplane, or not "
+                    + "moved) gives one, one sign per basis elsewhere (default: signs only).")
+    private boolean matrixWitnesses;
+
     @Override
     public Integer call() {
         // A large proof goes beside the certificate, so its name is an output too.
@@ -121,7 +128,7 @@ final class ReduceCommand implements Callable<Integer> {
         CertifiedReduction.Outcome outcome;
         try {
             CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
-                    budget.budget());
+                    budget.budget(), matrixWitnesses ? WitnessForms.MATRICES : WitnessForms.SIGNS);
             Subject subject = focus ? input : input.withoutFocus();
             if (smallest) {
                 return smallest(subject, settings, progress);
@@ -136,7 +143,7 @@ final class ReduceCommand implements Callable<Integer> {
                 }
                 outcome = steered instanceof SteeredSearch.Found f
                         ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
-                                out, subject.file())
+                                out, subject.file(), settings.witnesses())
                         : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
             } else {
                 outcome = new CertifiedReduction(settings, progress).run(subject, out);
@@ -189,7 +196,8 @@ final class ReduceCommand implements Callable<Integer> {
         }
         SmallestCore.Found found = (SmallestCore.Found) r;
         CertifiedReduction.Outcome outcome = CertifiedReduction.certify(
-                CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file());
+                CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file(),
+                settings.witnesses());
         if (!(outcome instanceof CertifiedReduction.Verified v)) {
             w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
             return ExitCodes.UNKNOWN;
@@ -252,7 +260,8 @@ final class ReduceCommand implements Callable<Integer> {
         w.println("deleted: " + Format.deleted(certificate.provenance().deleted(), core.size(),
                 certificate.provenance().contracted().size(), inputSize));
         w.println("witnesses: " + 2 * certificate.minimality().size()
-                + " (every single-element deletion and contraction is orientable)");
+                + " (every single-element deletion and contraction is orientable; " + certificate.witnessCount("signs")
+                + " by signs, " + certificate.witnessCount("matrix") + " by matrices)");
         if (certificate.discovery() instanceof Discovery.Searched s) {
             w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
         }

@@ -46,6 +46,13 @@ public final class Limits {
      */
     public static final long PROOF_BYTES = 256L << 20;
 
+    /**
+     * Most determinant work of the matrix witnesses of one certificate, counted as the verifier
+     * counts it: C(m, r) · r³ per matrix of rank r on m elements. A minor whose matrix would pass
+     * it keeps a sign witness.
+     */
+    public static final long MATRIX_WITNESS_STEPS = 500_000_000L;
+
     private Limits() {
     }
 

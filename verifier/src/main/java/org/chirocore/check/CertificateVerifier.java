@@ -421,16 +421,34 @@ public final class CertificateVerifier {
             return outcome;
         }
 
-        /** Each witness has one sign per basis of its minor and satisfies all its 3-term relations ([BLSWZ, Thm. 3.6.2]). */
+        /**
+         * Each witness orients its minor: a sign string has one sign per basis and satisfies every
+         * 3-term relation ([BLSWZ, Thm. 3.6.2]); a matrix has non-zero maximal minors exactly on the
+         * bases ({@link MatrixWitness}). The work of all witnesses is bounded before any is checked.
+         */
         String minimality() throws Failure {
-            long work = 0;
+            long relations = 0;
+            long determinants = 0;
             for (int e = 0; e < n; e++) {
-                work = Math.addExact(work, Relations.evaluations(core, e));
+                Witness w = c.witnesses().get(e);
+                for (boolean contract : new boolean[] {false, true}) {
+                    BasisTable.Shape minor = core.minorShape(e, contract);
+                    if (isMatrix(contract ? w.contraction() : w.deletion())) {
+                        determinants = saturatingAdd(determinants, MatrixWitness.steps(minor));
+                    } else {
+                        relations = saturatingAdd(relations, Relations.evaluations(minor));
+                    }
+                }
             }
-            if (work > VerifierLimits.MAX_WITNESS_RELATIONS) {
-                throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
+            if (relations > VerifierLimits.MAX_WITNESS_RELATIONS) {
+                throw new Failure("the sign witnesses need " + relations + " relation evaluations, more than the verifier's limit of "
                         + VerifierLimits.MAX_WITNESS_RELATIONS + "; not checked");
             }
+            if (determinants > VerifierLimits.MAX_DETERMINANT_STEPS) {
+                throw new Failure("the matrix witnesses need " + determinants + " elimination steps, more than the verifier's limit of "
+                        + VerifierLimits.MAX_DETERMINANT_STEPS + " (MAX_DETERMINANT_STEPS); not checked");
+            }
+            int matrices = 0;
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
                 if (!w.element().equals(c.labels().get(e))) {
@@ -438,11 +456,32 @@ public final class CertificateVerifier {
                 }
                 witness(core.deletion(e), w.deletion(), "the deletion witness of " + w.element());
                 witness(core.contraction(e), w.contraction(), "the contraction witness of " + w.element());
+                matrices += (isMatrix(w.deletion()) ? 1 : 0) + (isMatrix(w.contraction()) ? 1 : 0);
             }
-            return 2 * n + " witnesses orient every single-element deletion and contraction";
+            return 2 * n + " witnesses orient every single-element deletion and contraction (" + (2 * n - matrices) + " by signs, "
+                    + matrices + " by matrices)";
         }
 
-        private static void witness(BasisTable minor, String signs, String what) throws Failure {
+        private static long saturatingAdd(long a, long b) {
+            return a > Long.MAX_VALUE - b ? Long.MAX_VALUE : a + b;
+        }
+
+        private static boolean isMatrix(JsonTree.Value witness) {
+            return witness instanceof JsonTree.Obj o && o.has("matrix");
+        }
+
+        /** Checks one witness of {@code minor}, dispatching on its form: a sign string, or an object naming its kind. */
+        private static void witness(BasisTable minor, JsonTree.Value witness, String what) throws Failure {
+            if (witness instanceof JsonTree.Str s) {
+                signs(minor, s.value(), what);
+            } else if (isMatrix(witness)) {
+                MatrixWitness.check(minor, (JsonTree.Obj) witness, what);
+            } else {
+                throw new Failure(what + " is an object without \"matrix\"; a witness is a sign string or {\"matrix\": [...]}");
+            }
+        }
+
+        private static void signs(BasisTable minor, String signs, String what) throws Failure {
             if (signs.length() != minor.count()) {
                 throw new Failure(what + " has " + signs.length() + " signs; the minor has " + minor.count() + " bases");
             }

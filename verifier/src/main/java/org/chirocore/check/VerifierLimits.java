@@ -27,6 +27,16 @@ final class VerifierLimits {
     static final long MAX_EXCHANGE_PAIRS = 12_000_000;
     /** Most 3-term relations evaluated over all minimality witnesses together. */
     static final long MAX_WITNESS_RELATIONS = 100_000_000L;
+    /**
+     * Most decimal digits of an entry of a matrix witness (sign not counted): bounds the size of
+     * the numbers in the exact elimination, together with {@link #MAX_DETERMINANT_STEPS}.
+     */
+    static final int MAX_MATRIX_DIGITS = 40;
+    /**
+     * Most elimination steps for the matrix witnesses together, counted as C(m, r) · r³ for a
+     * witness of rank r on m elements (one determinant per r-subset of its columns).
+     */
+    static final long MAX_DETERMINANT_STEPS = 500_000_000L;
     /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
     static final int MAX_CUBE = 16;
     /**

@@ -1,0 +1,12 @@
+package org.chirocore.cert;
+
+/** Which forms the minimality witnesses of a certificate take. */
+public enum WitnessForms {
+    /** One sign per basis of each single-element minor (the default, as the stored certificates have). */
+    SIGNS,
+    /**
+     * An integer matrix realising the minor wherever the core's construction gives one
+     * ({@link MatrixWitnesses}), one sign per basis elsewhere.
+     */
+    MATRICES
+}
