@@ -82,6 +82,22 @@ class MatrixWitnessRegenerationTest {
         familyMemberWithMatrices(n);
     }
 
+    @Tag("slow")
+    @ParameterizedTest(name = "certificates/corner-n{0}-matrices.cert.json")
+    @MethodSource("storedWithMatrices")
+    void storedCertificateWithMatricesIsReproduced(int n) throws IOException {
+        Path stored = Path.of("certificates/corner-n" + n + "-matrices.cert.json");
+        CertifiedReduction.Outcome o = PIPELINE.run(Subject.of(CubeConstruction.corner(n)), dir.resolve("again.json"));
+        Json.Obj old = (Json.Obj) Json.parseUtf8(Files.readAllBytes(stored));
+        assertEquals(old.requireString("sha256"), assertInstanceOf(CertifiedReduction.Verified.class, o).written().sha256(),
+                stored + ": regenerated content differs");
+        assertAgrees(Subject.of(CubeConstruction.corner(n)), stored);
+    }
+
+    static Stream<Integer> storedWithMatrices() {
+        return Stream.of(9);
+    }
+
     private void assertAgrees(Subject subject, Path stored) throws IOException {
         Path file = dir.resolve("with-matrices.json");
         assertInstanceOf(CertifiedReduction.Verified.class, PIPELINE.run(subject, file));
