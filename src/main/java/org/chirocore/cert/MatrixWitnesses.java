@@ -1,5 +1,6 @@
 package org.chirocore.cert;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 
@@ -56,7 +57,7 @@ final class MatrixWitnesses {
         int[] rest = ElementSets.elements(ElementSets.allMask(labels.size()) & ~(1L << e));
         for (Realisation r : candidates) {
             List<long[]> columns = r.columns();
-            List<long[]> keep = java.util.Arrays.stream(rest).mapToObj(columns::get).toList();
+            List<long[]> keep = Arrays.stream(rest).mapToObj(columns::get).toList();
             List<long[]> contract = contraction ? List.of(columns.get(e)) : List.of();
             Optional<Realisation> w = PulledRealisations.minor(contract, keep, minor.labels());
             if (w.isPresent() && w.get().rank() == minor.rank() && RealisationCheck.defect(minor, w.get()).isEmpty()) {

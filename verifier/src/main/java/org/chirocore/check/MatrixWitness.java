@@ -1,7 +1,9 @@
 package org.chirocore.check;
 
 import java.math.BigInteger;
+import java.util.Arrays;
 import java.util.BitSet;
+import java.util.List;
 
 import org.chirocore.check.CertificateVerifier.Failure;
 
@@ -48,7 +50,7 @@ final class MatrixWitness {
      * @throws Failure naming the first column, entry or r-subset at fault
      */
     static void check(BasisTable minor, JsonTree.Obj witness, String what) throws Failure {
-        witness.requireOnly(java.util.List.of("matrix"));
+        witness.requireOnly(List.of("matrix"));
         JsonTree.Arr matrix = witness.require("matrix").asArray(what + ".matrix");
         int r = minor.rank;
         if (matrix.size() != minor.size) {
@@ -77,7 +79,7 @@ final class MatrixWitness {
             boolean nonZero = fullRank(columns, small, subset);
             boolean basis = minor.positionOf(mask(subset)) >= 0;
             if (nonZero != basis) {
-                throw new Failure(what + ": the columns " + java.util.Arrays.toString(subset) + " (elements numbered in the minor) have "
+                throw new Failure(what + ": the columns " + Arrays.toString(subset) + " (elements numbered in the minor) have "
                         + (basis ? "determinant 0, but they are a basis of the minor" : "a non-zero determinant, but they are not a basis of the minor"));
             }
         } while (next(subset, minor.size));
