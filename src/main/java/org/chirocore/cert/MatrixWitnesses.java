@@ -28,7 +28,10 @@ import org.chirocore.orient.RealisationCheck;
 final class MatrixWitnesses {
     private final List<String> labels;
     private final List<Realisation> candidates;
+    /** The determinant work of the matrices found so far, as the verifier counts it. */
     private long steps;
+    /** The r-subsets charged to the candidates tried so far. */
+    private long walked;
 
     private MatrixWitnesses(List<String> labels, List<Realisation> candidates) {
         this.labels = labels;
@@ -47,15 +50,22 @@ final class MatrixWitnesses {
 
     /**
      * A checked realisation of {@code minor}, the deletion or contraction of core element {@code e},
-     * or empty when no candidate realises it or the work limit would be passed.
+     * or empty when no candidate realises it or a work limit would be passed
+     * ({@link Limits#MATRIX_WITNESS_STEPS} for the matrices kept, {@link Limits#MATRIX_SEARCH_SUBSETS}
+     * for the candidates tried).
      */
     Optional<Realisation> find(int e, boolean contraction, Matroid minor) {
         long cost = steps(minor.size(), minor.rank());
         if (candidates.isEmpty() || cost > Limits.MATRIX_WITNESS_STEPS - steps) {
             return Optional.empty();
         }
+        long subsets = ElementSets.binomial(minor.size(), minor.rank());
         int[] rest = ElementSets.elements(ElementSets.allMask(labels.size()) & ~(1L << e));
         for (Realisation r : candidates) {
+            if (subsets > Limits.MATRIX_SEARCH_SUBSETS - walked) {
+                return Optional.empty();
+            }
+            walked += subsets;
             List<long[]> columns = r.columns();
             List<long[]> keep = Arrays.stream(rest).mapToObj(columns::get).toList();
             List<long[]> contract = contraction ? List.of(columns.get(e)) : List.of();

@@ -53,6 +53,14 @@ public final class Limits {
      */
     public static final long MATRIX_WITNESS_STEPS = 500_000_000L;
 
+    /**
+     * Most r-subsets walked while searching for matrix witnesses for one certificate: each
+     * candidate tried on a minor of rank r on m elements is charged C(m, r) (one determinant sign
+     * and one basis test each) before it is tried. Bounds the time of the search (about a minute);
+     * once spent, the remaining minors keep sign witnesses.
+     */
+    public static final long MATRIX_SEARCH_SUBSETS = 1L << 26;
+
     private Limits() {
     }
 

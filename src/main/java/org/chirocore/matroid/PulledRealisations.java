@@ -64,11 +64,11 @@ public final class PulledRealisations {
         for (int x : seen) {
             // (ν·X)·O − (ν·O)·X lies on the line through O and X, and ν vanishes on it: a point of span(H)
             long[] vx = cube.matrixMatroid().column(x);
-            long nx = dot(normal, vx);
-            long no = dot(normal, vertexO);
+            BigInteger nx = dot(normal, vx);
+            BigInteger no = dot(normal, vertexO);
             long[] p = new long[vx.length];
             for (int i = 0; i < p.length; i++) {
-                p[i] = Math.subtractExact(Math.multiplyExact(nx, vertexO[i]), Math.multiplyExact(no, vx[i]));
+                p[i] = nx.multiply(BigInteger.valueOf(vertexO[i])).subtract(no.multiply(BigInteger.valueOf(vx[i]))).longValueExact();
             }
             points.add(p);
         }
@@ -214,10 +214,10 @@ public final class PulledRealisations {
         return out;
     }
 
-    private static long dot(long[] a, long[] b) {
-        long s = 0;
+    private static BigInteger dot(long[] a, long[] b) {
+        BigInteger s = BigInteger.ZERO;
         for (int i = 0; i < a.length; i++) {
-            s = Math.addExact(s, Math.multiplyExact(a[i], b[i]));
+            s = s.add(BigInteger.valueOf(a[i]).multiply(BigInteger.valueOf(b[i])));
         }
         return s;
     }
