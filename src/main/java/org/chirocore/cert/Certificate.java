@@ -60,7 +60,7 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             throw new IllegalStateException("The refutation fixes variables " + refutation.normalised()
                     + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
         }
-        MatrixWitnesses matrices = forms == WitnessForms.MATRICES ? MatrixWitnesses.of(found) : null;
+        MatrixWitnesses matrices = forms == WitnessForms.MATRICES ? MatrixWitnesses.of(found) : MatrixWitnesses.NONE;
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
             String label = core.labels().get(e);
@@ -81,11 +81,9 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
         int[] single = {e};
         Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
                 : new Minor(core, single, new int[0]);
-        if (matrices != null) {
-            Optional<Realisation> m = matrices.find(e, operation == Operation.CONTRACTION, minor);
-            if (m.isPresent()) {
-                return new MinimalityWitness.Matrix(m.get());
-            }
+        Optional<Realisation> m = matrices.find(e, operation == Operation.CONTRACTION, minor);
+        if (m.isPresent()) {
+            return new MinimalityWitness.Matrix(m.get());
         }
         String label = core.labels().get(e);
         MinorWitness w = found.witnesses().stream()

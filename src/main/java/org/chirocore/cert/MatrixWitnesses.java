@@ -26,6 +26,9 @@ import org.chirocore.orient.RealisationCheck;
  * determinant signs and basis tests, for a minor of rank r on m elements.
  */
 final class MatrixWitnesses {
+    /** No candidates: every minor keeps its sign witness. */
+    static final MatrixWitnesses NONE = new MatrixWitnesses(List.of(), List.of());
+
     private final List<String> labels;
     private final List<Realisation> candidates;
     /** The determinant work of the matrices found so far, as the verifier counts it. */
@@ -45,7 +48,7 @@ final class MatrixWitnesses {
             return new MatrixWitnesses(labels, PulledRealisations.candidates(cube, labels, found.provenance().contracted(),
                     found.core().rank()));
         }
-        return new MatrixWitnesses(labels, List.of());
+        return NONE;
     }
 
     /**

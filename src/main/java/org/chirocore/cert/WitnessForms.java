@@ -6,7 +6,7 @@ public enum WitnessForms {
     SIGNS,
     /**
      * An integer matrix realising the minor wherever the core's construction gives one
-     * ({@link MatrixWitnesses}), one sign per basis elsewhere.
+     * (the real cube's configurations, docs/realisations.md), one sign per basis elsewhere.
      */
     MATRICES
 }
