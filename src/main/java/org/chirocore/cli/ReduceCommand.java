@@ -12,7 +12,6 @@ import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
-import org.chirocore.cert.WitnessForms;
 import org.chirocore.io.IoMessages;
 import org.chirocore.io.Json;
 import org.chirocore.io.ResultJson;
@@ -107,11 +106,8 @@ final class ReduceCommand implements Callable<Integer> {
                     + "answers unknown; 0 (default) for none.")
     private double totalTime;
 
-    @Option(names = "--matrix-witnesses",
-            description = "For a core of a cube construction over Q, write an integer matrix realising a single-element "
-                    + "minor as its witness wherever the real cube (the pulled vertex moved onto the hyperplane, or not "
-                    + "moved) gives one, one sign per basis elsewhere (default: signs only).")
-    private boolean matrixWitnesses;
+    @Mixin
+    private WitnessFormOption witnessForms;
 
     @Override
     public Integer call() {
@@ -128,7 +124,7 @@ final class ReduceCommand implements Callable<Integer> {
         CertifiedReduction.Outcome outcome;
         try {
             CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
-                    budget.budget(), matrixWitnesses ? WitnessForms.MATRICES : WitnessForms.SIGNS);
+                    budget.budget(), witnessForms.forms());
             Subject subject = focus ? input : input.withoutFocus();
             if (smallest) {
                 return smallest(subject, settings, progress);
