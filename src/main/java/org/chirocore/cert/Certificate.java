@@ -11,10 +11,10 @@ import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.BasisIndex;
+import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
 import org.chirocore.orient.WitnessCheck;
-import org.chirocore.search.MinorWitness;
 import org.chirocore.search.Operation;
 
 /**
@@ -38,19 +38,28 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
         }
     }
 
-    /** The certificate of {@code found} with sign witnesses only; as {@link #of(CoreFinding, Refutation, WitnessForms)}. */
+    /**
+     * The certificate of {@code found}, refuted by {@code refutation}, with sign witnesses.
+     * Re-checks every witness against the minor rebuilt here (one full relation scan each) and
+     * that the refutation's normalisation is the one of the core, so nothing unchecked is written.
+     *
+     * @throws IllegalStateException when a witness fails its re-check, or the refutation was made
+     *     for another matroid
+     */
     public static Certificate of(CoreFinding found, Refutation refutation) {
         return of(found, refutation, WitnessForms.SIGNS);
     }
 
     /**
-     * The certificate of {@code found}, refuted by {@code refutation}, its witnesses in
-     * {@code forms}. Re-checks every witness against the minor rebuilt here (a sign witness by
-     * one full relation scan, a matrix by all its maximal minors) and that the refutation's
-     * normalisation is the one of the core, so nothing unchecked is written.
+     * As {@link #of(CoreFinding, Refutation)}, with the witnesses in {@code forms}. With
+     * {@link WitnessForms#ORBITS}, an element other than its orbit's representative gets the
+     * representative's witnesses transported by a listed automorphism ({@link ElementOrbits}); the
+     * transported signs are re-checked like the others. When the core has too many automorphisms
+     * to list, every witness is given by its signs. With {@link WitnessForms#MATRICES}, a minor
+     * that a real configuration of the core's construction realises gets that matrix (checked on
+     * all its maximal minors), the others their signs.
      *
-     * @throws IllegalStateException when a witness fails its re-check, or the refutation was made
-     *     for another matroid
+     * @throws IllegalStateException as for {@link #of(CoreFinding, Refutation)}
      */
     public static Certificate of(CoreFinding found, Refutation refutation, WitnessForms forms) {
         ExplicitMatroid core = found.core();
@@ -60,37 +69,52 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             throw new IllegalStateException("The refutation fixes variables " + refutation.normalised()
                     + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
         }
+        Optional<ElementOrbits> orbits = forms == WitnessForms.ORBITS ? ElementOrbits.of(core) : Optional.empty();
         MatrixWitnesses matrices = forms == WitnessForms.MATRICES ? MatrixWitnesses.of(found) : MatrixWitnesses.NONE;
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
-            String label = core.labels().get(e);
-            entries.add(new MinimalityWitness(label, witness(found, core, e, Operation.DELETION, matrices),
-                    witness(found, core, e, Operation.CONTRACTION, matrices)));
+            entries.add(new MinimalityWitness(core.labels().get(e), witness(found, core, e, Operation.DELETION, orbits, matrices),
+                    witness(found, core, e, Operation.CONTRACTION, orbits, matrices)));
         }
         return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
-    /** The number of witnesses of the given kind ("signs" or "matrix"). */
+    /** The number of witnesses of the given kind ("signs", "transported" or "matrix"). */
     public int witnessCount(String kind) {
         return minimality.stream().mapToInt(w -> w.count(kind)).sum();
     }
 
+    /**
+     * The witness of the minor at e: given {@code orbits} and e not its orbit's representative f,
+     * f's transported to e, whose signs are re-checked here; else a matrix {@code matrices} finds;
+     * else the search's own, by its signs.
+     */
     private static MinimalityWitness.Form witness(CoreFinding found, ExplicitMatroid core, int e, Operation operation,
-            MatrixWitnesses matrices) {
+            Optional<ElementOrbits> orbits, MatrixWitnesses matrices) {
         // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
         int[] single = {e};
         Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
                 : new Minor(core, single, new int[0]);
+        if (orbits.isPresent() && orbits.get().representative()[e] != e) {
+            ElementOrbits o = orbits.get();
+            WitnessCheck.checked(minor, o.relabelled(searched(found, core, o.representative()[e], operation), e, minor.labels()));
+            return o.transported(core.labels(), e);
+        }
         Optional<Realisation> m = matrices.find(e, operation == Operation.CONTRACTION, minor);
         if (m.isPresent()) {
             return new MinimalityWitness.Matrix(m.get());
         }
+        return new MinimalityWitness.Signs(ResultJson.signString(WitnessCheck.checked(minor, searched(found, core, e, operation))));
+    }
+
+    /** The search's witness of the minor at e. */
+    private static Chirotope searched(CoreFinding found, ExplicitMatroid core, int e, Operation operation) {
         String label = core.labels().get(e);
-        MinorWitness w = found.witnesses().stream()
+        return found.witnesses().stream()
                 .filter(x -> x.element().equals(label) && x.operation() == operation)
                 .findFirst()
                 .orElseThrow(() -> new IllegalStateException("The core has no " + operation + " witness for element "
-                        + label + "."));
-        return new MinimalityWitness.Signs(ResultJson.signString(WitnessCheck.checked(minor, w.witness())));
+                        + label + "."))
+                .witness();
     }
 }

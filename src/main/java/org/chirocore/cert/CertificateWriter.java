@@ -121,8 +121,17 @@ public final class CertificateWriter {
                 .build();
     }
 
-    /** A witness as the certificate writes it: a sign string, or {@code {"matrix": [[column], ...]}}. */
+    /**
+     * A witness as the certificate writes it: a sign string, {@code {"image": label, "under": [...]}}
+     * or {@code {"matrix": [[column], ...]}}.
+     */
     static Json witness(MinimalityWitness.Form form) {
+        if (form instanceof MinimalityWitness.Transported t) {
+            return Json.Obj.builder()
+                    .put("image", t.image())
+                    .put("under", Json.Arr.ofInts(t.under().stream().mapToInt(Integer::intValue).toArray()))
+                    .build();
+        }
         if (form instanceof MinimalityWitness.Matrix m) {
             List<Json> columns = new ArrayList<>();
             for (long[] column : m.columns()) {

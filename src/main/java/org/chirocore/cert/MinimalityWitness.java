@@ -14,8 +14,8 @@ import org.chirocore.matroid.Realisation;
 public record MinimalityWitness(String element, Form deletion, Form contraction) {
 
     /** How one single-element minor is shown orientable; the certificate writes each form its own way. */
-    public sealed interface Form permits Signs, Matrix {
-        /** The name of the kind, as {@code reduce} counts it: "signs" or "matrix". */
+    public sealed interface Form permits Signs, Transported, Matrix {
+        /** The name of the kind, as {@code reduce} counts it: "signs", "transported" or "matrix". */
         String kind();
     }
 
@@ -34,6 +34,22 @@ public record MinimalityWitness(String element, Form deletion, Form contraction)
         @Override
         public String kind() {
             return "signs";
+        }
+    }
+
+    /**
+     * Witness by symmetry: the witness of the same kind at element {@code image} (given by its
+     * signs), relabelled by the automorphism σ of the core with {@code under.get(i)} = σ(i) and
+     * σ(image) = this entry's element (docs/certificate-format.md, {@code minimality}).
+     */
+    public record Transported(String image, List<Integer> under) implements Form {
+        public Transported {
+            under = List.copyOf(under);
+        }
+
+        @Override
+        public String kind() {
+            return "transported";
         }
     }
 

@@ -70,6 +70,9 @@ final class ReduceCommand implements Callable<Integer> {
     private BudgetOptions budget;
 
     @Mixin
+    private WitnessOption witnesses;
+
+    @Mixin
     private OutputOptions output;
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
@@ -106,9 +109,6 @@ final class ReduceCommand implements Callable<Integer> {
                     + "answers unknown; 0 (default) for none.")
     private double totalTime;
 
-    @Mixin
-    private WitnessFormOption witnessForms;
-
     @Override
     public Integer call() {
         // A large proof goes beside the certificate, so its name is an output too.
@@ -124,7 +124,7 @@ final class ReduceCommand implements Callable<Integer> {
         CertifiedReduction.Outcome outcome;
         try {
             CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
-                    budget.budget(), witnessForms.forms());
+                    budget.budget(), witnesses.form());
             Subject subject = focus ? input : input.withoutFocus();
             if (smallest) {
                 return smallest(subject, settings, progress);
@@ -257,7 +257,8 @@ final class ReduceCommand implements Callable<Integer> {
                 certificate.provenance().contracted().size(), inputSize));
         w.println("witnesses: " + 2 * certificate.minimality().size()
                 + " (every single-element deletion and contraction is orientable; " + certificate.witnessCount("signs")
-                + " by signs, " + certificate.witnessCount("matrix") + " by matrices)");
+                + " by signs, " + certificate.witnessCount("transported") + " transported by automorphisms of the core, "
+                + certificate.witnessCount("matrix") + " by matrices)");
         if (certificate.discovery() instanceof Discovery.Searched s) {
             w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
         }

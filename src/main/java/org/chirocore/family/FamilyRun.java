@@ -52,20 +52,20 @@ public final class FamilyRun {
      * @param strategy the strategy of every member's search
      * @param budget the budget of each orientability decision
      * @param threads how many members run at once, at least 1
-     * @param witnesses the forms of the minimality witnesses of new certificates (an existing
-     *     certificate that is reused keeps its own)
+     * @param witnesses how new certificates state their minimality witnesses (an existing certificate that
+     *     verifies is reused whatever its form)
      */
     public record Settings(long seed, Strategy strategy, Budget budget, int threads, WitnessForms witnesses) {
         public Settings {
             if (strategy == null || budget == null || witnesses == null) {
-                throw new IllegalArgumentException("Family run settings need a strategy, a budget and witness forms.");
+                throw new IllegalArgumentException("Family run settings need a strategy, a budget and a witness form.");
             }
             if (threads < 1) {
                 throw new IllegalArgumentException("A family run needs at least 1 thread, not " + threads + ".");
             }
         }
 
-        /** Settings writing sign witnesses only. */
+        /** Settings whose new certificates state every witness by its signs. */
         public Settings(long seed, Strategy strategy, Budget budget, int threads) {
             this(seed, strategy, budget, threads, WitnessForms.SIGNS);
         }

@@ -88,7 +88,7 @@ public final class CertifiedReduction {
     public record Settings(long seed, Strategy strategy, Budget budget, WitnessForms witnesses) {
         public Settings {
             if (strategy == null || budget == null || witnesses == null) {
-                throw new IllegalArgumentException("Pipeline settings need a strategy, a budget and witness forms.");
+                throw new IllegalArgumentException("Pipeline settings need a strategy, a budget and a witness form.");
             }
         }
 

@@ -110,7 +110,8 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         return out;
     }
 
-    private static int[] ints(JsonTree.Arr array, String what) {
+    /** An array of at most 64 ints. */
+    static int[] ints(JsonTree.Arr array, String what) {
         if (array.size() > VerifierLimits.MAX_ELEMENTS) {
             throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + VerifierLimits.MAX_ELEMENTS + " are allowed");
         }

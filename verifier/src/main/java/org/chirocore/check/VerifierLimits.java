@@ -37,6 +37,12 @@ final class VerifierLimits {
      * witness of rank r on m elements (one determinant per r-subset of its columns).
      */
     static final long MAX_DETERMINANT_STEPS = 500_000_000L;
+    /**
+     * Most basis lookups for the witnesses transported by symmetry, counted as twice the core's
+     * basis count per transported witness (one lookup per basis of its minor, and at most one per
+     * basis of the core to check its automorphism).
+     */
+    static final long MAX_TRANSPORT_LOOKUPS = 100_000_000L;
     /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
     static final int MAX_CUBE = 16;
     /**
