@@ -60,6 +60,10 @@ class ReduceCommandTest {
             }
         }
         assertEquals(7, matrices);
+        CliRun both = CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--matrix-witnesses",
+                "--orbit-witnesses", "--out", out("b.json"));
+        assertEquals(2, both.exit(), "a transported witness refers to signs: the two forms do not combine");
+        assertTrue(both.err().contains("mutually exclusive"), both.err());
         CliRun plain = CliRun.of("reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out", out("s.json"));
         assertTrue(plain.out().contains("14 by signs, 0 transported by automorphisms of the core, 0 by matrices)"), plain.out());
     }
