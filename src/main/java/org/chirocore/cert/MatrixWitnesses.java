@@ -3,6 +3,7 @@ package org.chirocore.cert;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
+import java.util.stream.IntStream;
 
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ElementSets;
@@ -63,7 +64,7 @@ final class MatrixWitnesses {
             return Optional.empty();
         }
         long subsets = ElementSets.binomial(minor.size(), minor.rank());
-        int[] rest = ElementSets.elements(ElementSets.allMask(labels.size()) & ~(1L << e));
+        int[] rest = IntStream.range(0, labels.size()).filter(i -> i != e).toArray();
         for (Realisation r : candidates) {
             if (subsets > Limits.MATRIX_SEARCH_SUBSETS - walked) {
                 return Optional.empty();

@@ -77,7 +77,7 @@ final class MatrixWitness {
         }
         do {
             boolean nonZero = fullRank(columns, small, subset);
-            boolean basis = minor.positionOf(mask(subset)) >= 0;
+            boolean basis = minor.positionOf(subset) >= 0;
             if (nonZero != basis) {
                 throw new Failure(what + ": the columns " + Arrays.toString(subset) + " (elements numbered in the minor) have "
                         + (basis ? "determinant 0, but they are a basis of the minor" : "a non-zero determinant, but they are not a basis of the minor"));
@@ -162,14 +162,6 @@ final class MatrixWitness {
             rank++;
         }
         return rank;
-    }
-
-    private static long mask(int[] subset) {
-        long m = 0;
-        for (int e : subset) {
-            m |= 1L << e;
-        }
-        return m;
     }
 
     /** Advances {@code subset} to the next r-subset of {0..n−1} in lexicographic order; false after the last. */
