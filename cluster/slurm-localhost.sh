@@ -4,7 +4,9 @@
 #
 #   cluster/slurm-localhost.sh install              apt-get install slurm-wlm munge (needs root)
 #   cluster/slurm-localhost.sh start                write the configuration, start munged, slurmctld, slurmd
-#   cluster/slurm-localhost.sh sweep A..B K OUT     submit K shards of "sweep --n A..B" and their merge; wait
+#   cluster/slurm-localhost.sh sweep A..B K OUT [OPTION...]
+#                                                   submit K shards of "sweep --n A..B OPTION..." (e.g.
+#                                                   --rank-n-cores --rank-n-time 180) and their merge; wait
 #   cluster/slurm-localhost.sh stop                 stop the daemons this script started (by their pids)
 #
 # Everything lives under $CHIROCORE_SLURM_DIR (default /tmp/chirocore-slurm): slurm.conf, state,
@@ -96,15 +98,18 @@ stop() {
 }
 
 sweep() {
-  [ $# -eq 3 ] || die "usage: $0 sweep A..B K OUT"
-  local range=$1 k=$2 out
+  [ $# -ge 3 ] || die "usage: $0 sweep A..B K OUT [SWEEP OPTION...]"
+  local range=$1 k=$2 out options=""
   out=$(realpath -m "$3")
+  shift 3
+  # further arguments go to every shard's sweep command, each quoted for the job's shell
+  [ $# -eq 0 ] || options=$(printf ' %q' "$@")
   [ -f "$JAR" ] || die "$JAR is missing (run: mvn -B -o package -DskipTests)."
   mkdir -p "$out"
   local array
   # shard i of k writes OUT/shard-i; its progress lines go to OUT/shard-i.log
   array=$(sbatch --parsable --job-name=sweep-shards --array=0-$((k - 1)) --cpus-per-task=1 \
-    --output="$out/shard-%a.log" --wrap="java -jar '$JAR' sweep --n $range --shard \$SLURM_ARRAY_TASK_ID/$k --out '$out'/shard-\$SLURM_ARRAY_TASK_ID")
+    --output="$out/shard-%a.log" --wrap="java -jar '$JAR' sweep --n $range --shard \$SLURM_ARRAY_TASK_ID/$k$options --out '$out'/shard-\$SLURM_ARRAY_TASK_ID")
   echo "slurm-localhost: submitted shard array $array"
   local shards=""
   for i in $(seq 0 $((k - 1))); do shards="$shards '$out/shard-$i'"; done
@@ -119,5 +124,5 @@ case "${1:-}" in
   start) start ;;
   stop) stop ;;
   sweep) shift; sweep "$@" ;;
-  *) die "usage: $0 install | start | sweep A..B K OUT | stop" ;;
+  *) die "usage: $0 install | start | sweep A..B K OUT [SWEEP OPTION...] | stop" ;;
 esac

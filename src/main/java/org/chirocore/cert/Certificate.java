@@ -3,16 +3,17 @@ package org.chirocore.cert;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.BasisIndex;
+import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
 import org.chirocore.orient.WitnessCheck;
-import org.chirocore.search.MinorWitness;
 import org.chirocore.search.Operation;
 
 /**
@@ -45,6 +46,19 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
      *     for another matroid
      */
     public static Certificate of(CoreFinding found, Refutation refutation) {
+        return of(found, refutation, WitnessForms.SIGNS);
+    }
+
+    /**
+     * As {@link #of(CoreFinding, Refutation)}, with the witnesses in {@code forms}. With
+     * {@link WitnessForms#ORBITS}, an element other than its orbit's representative gets the
+     * representative's witnesses transported by a listed automorphism ({@link ElementOrbits}); the
+     * transported signs are re-checked like the others. When the core has too many automorphisms
+     * to list, every witness is given by its signs.
+     *
+     * @throws IllegalStateException as for {@link #of(CoreFinding, Refutation)}
+     */
+    public static Certificate of(CoreFinding found, Refutation refutation, WitnessForms forms) {
         ExplicitMatroid core = found.core();
         BasisIndex index = BasisIndex.of(core);
         List<Integer> normalisation = Arrays.stream(Normalisation.fixedVariables(index)).boxed().toList();
@@ -52,26 +66,46 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             throw new IllegalStateException("The refutation fixes variables " + refutation.normalised()
                     + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
         }
+        Optional<ElementOrbits> orbits = forms == WitnessForms.ORBITS ? ElementOrbits.of(core) : Optional.empty();
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
-            String label = core.labels().get(e);
-            entries.add(new MinimalityWitness(label, checkedSigns(found, core, e, Operation.DELETION),
-                    checkedSigns(found, core, e, Operation.CONTRACTION)));
+            entries.add(new MinimalityWitness(core.labels().get(e), witness(found, core, e, Operation.DELETION, orbits),
+                    witness(found, core, e, Operation.CONTRACTION, orbits)));
         }
         return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
-    private static String checkedSigns(CoreFinding found, ExplicitMatroid core, int e, Operation operation) {
-        String label = core.labels().get(e);
-        MinorWitness w = found.witnesses().stream()
-                .filter(x -> x.element().equals(label) && x.operation() == operation)
-                .findFirst()
-                .orElseThrow(() -> new IllegalStateException("The core has no " + operation + " witness for element "
-                        + label + "."));
+    /** The number of witnesses of the given kind ("signs" or "transported"). */
+    public int witnessCount(String kind) {
+        return minimality.stream().mapToInt(w -> w.count(kind)).sum();
+    }
+
+    /**
+     * The witness of the minor at e: the search's own, by its signs; or, given {@code orbits} and
+     * e not its orbit's representative f, f's transported to e, whose signs are re-checked here.
+     */
+    private static MinimalityWitness.Form witness(CoreFinding found, ExplicitMatroid core, int e, Operation operation,
+            Optional<ElementOrbits> orbits) {
         // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
         int[] single = {e};
         Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
                 : new Minor(core, single, new int[0]);
-        return ResultJson.signString(WitnessCheck.checked(minor, w.witness()));
+        if (orbits.isPresent() && orbits.get().representative()[e] != e) {
+            ElementOrbits o = orbits.get();
+            WitnessCheck.checked(minor, o.relabelled(searched(found, core, o.representative()[e], operation), e, minor.labels()));
+            return o.transported(core.labels(), e);
+        }
+        return new MinimalityWitness.Signs(ResultJson.signString(WitnessCheck.checked(minor, searched(found, core, e, operation))));
+    }
+
+    /** The search's witness of the minor at e. */
+    private static Chirotope searched(CoreFinding found, ExplicitMatroid core, int e, Operation operation) {
+        String label = core.labels().get(e);
+        return found.witnesses().stream()
+                .filter(x -> x.element().equals(label) && x.operation() == operation)
+                .findFirst()
+                .orElseThrow(() -> new IllegalStateException("The core has no " + operation + " witness for element "
+                        + label + "."))
+                .witness();
     }
 }

@@ -114,10 +114,21 @@ public final class CertificateWriter {
                 .put("nonOrientability", nonOrientability(c, dratFile))
                 .put("minimality", new Json.Arr(c.minimality().stream().<Json>map(w -> Json.Obj.builder()
                         .put("element", w.element())
-                        .put("deletion", w.deletion())
-                        .put("contraction", w.contraction())
+                        .put("deletion", witness(w.deletion()))
+                        .put("contraction", witness(w.contraction()))
                         .build()).toList()))
                 .build();
+    }
+
+    /** A witness as the certificate writes it: a sign string, or {@code {"image": label, "under": [...]}}. */
+    static Json witness(MinimalityWitness.Form form) {
+        if (form instanceof MinimalityWitness.Transported t) {
+            return Json.Obj.builder()
+                    .put("image", t.image())
+                    .put("under", Json.Arr.ofInts(t.under().stream().mapToInt(Integer::intValue).toArray()))
+                    .build();
+        }
+        return new Json.Str(((MinimalityWitness.Signs) form).signs());
     }
 
     /** The content digest: SHA-256, lower-case hex, of the UTF-8 bytes of {@code value}'s canonical text. */

@@ -35,9 +35,18 @@ public sealed interface Certification {
      *     re-check: either is a bug of whoever found the core, and no certificate must be written then
      */
     static Certification of(CoreFinding found, Budget budget) {
+        return of(found, budget, WitnessForms.SIGNS);
+    }
+
+    /**
+     * Certifies {@code found} as {@link #of(CoreFinding, Budget)}, its minimality witnesses in {@code forms}.
+     *
+     * @throws IllegalStateException as for {@link #of(CoreFinding, Budget)}
+     */
+    static Certification of(CoreFinding found, Budget budget, WitnessForms forms) {
         RefutationSearch.Outcome outcome = new RefutationSearch(budget).refute(found.core());
         if (outcome instanceof RefutationSearch.Refuted r) {
-            return new Certified(Certificate.of(found, r.refutation()));
+            return new Certified(Certificate.of(found, r.refutation(), forms));
         }
         if (outcome instanceof RefutationSearch.OutOfBudget o) {
             return new OutOfBudget(o.reason());

@@ -1,16 +1,58 @@
 package org.chirocore.cert;
 
+import java.util.List;
+
 /**
  * The orientations proving that removing one element of a core leaves an orientable matroid.
  *
  * @param element the label of e
- * @param deletion one sign ('+' or '-') per basis of core\e, in that minor's canonical order
- * @param contraction one sign per basis of core/e, in that minor's canonical order
+ * @param deletion the witness of core\e
+ * @param contraction the witness of core/e
  */
-public record MinimalityWitness(String element, String deletion, String contraction) {
-    public MinimalityWitness {
-        if (!deletion.matches("[+-]*") || !contraction.matches("[+-]*")) {
-            throw new IllegalArgumentException("Witness signs of element " + element + " must be '+' and '-' only.");
+public record MinimalityWitness(String element, Form deletion, Form contraction) {
+
+    /** How one single-element minor is shown orientable; the certificate writes each form its own way. */
+    public sealed interface Form permits Signs, Transported {
+        /** The name of the kind, as {@code reduce} counts it: "signs" or "transported". */
+        String kind();
+    }
+
+    /**
+     * A chirotope of the minor, checked against every 3-term relation.
+     *
+     * @param signs one sign ('+' or '-') per basis of the minor, in its canonical order
+     */
+    public record Signs(String signs) implements Form {
+        public Signs {
+            if (!signs.matches("[+-]*")) {
+                throw new IllegalArgumentException("Witness signs must be '+' and '-' only.");
+            }
         }
+
+        @Override
+        public String kind() {
+            return "signs";
+        }
+    }
+
+    /**
+     * Witness by symmetry: the witness of the same kind at element {@code image} (given by its
+     * signs), relabelled by the automorphism σ of the core with {@code under.get(i)} = σ(i) and
+     * σ(image) = this entry's element (docs/certificate-format.md, {@code minimality}).
+     */
+    public record Transported(String image, List<Integer> under) implements Form {
+        public Transported {
+            under = List.copyOf(under);
+        }
+
+        @Override
+        public String kind() {
+            return "transported";
+        }
+    }
+
+    /** The number of this entry's two witnesses of the given kind. */
+    public int count(String kind) {
+        return (deletion.kind().equals(kind) ? 1 : 0) + (contraction.kind().equals(kind) ? 1 : 0);
     }
 }

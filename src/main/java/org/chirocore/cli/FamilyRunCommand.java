@@ -47,6 +47,9 @@ final class FamilyRunCommand implements Callable<Integer> {
     @Mixin
     private ThreadsOption threads;
 
+    @Mixin
+    private WitnessOption witnesses;
+
     @Option(names = "--shard", paramLabel = "i/k",
             description = "Run only the n of A..B with n mod k = i (0 <= i < k); join the shards' directories with "
                     + "family-merge.")
@@ -60,7 +63,7 @@ final class FamilyRunCommand implements Callable<Integer> {
         FamilyTable table;
         try {
             FamilyRun.Settings settings = new FamilyRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(),
-                    threadCount);
+                    threadCount, witnesses.form());
             FamilyRun run = new FamilyRun(family.definition(), family.out(), settings, family.console());
             output.checkReplacing(run.otherRun());
             table = run.run(bounds[0], bounds[1], shard());

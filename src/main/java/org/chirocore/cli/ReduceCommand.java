@@ -70,6 +70,9 @@ final class ReduceCommand implements Callable<Integer> {
     private BudgetOptions budget;
 
     @Mixin
+    private WitnessOption witnesses;
+
+    @Mixin
     private OutputOptions output;
 
     @Option(names = "--out", paramLabel = "FILE", required = true,
@@ -121,7 +124,7 @@ final class ReduceCommand implements Callable<Integer> {
         CertifiedReduction.Outcome outcome;
         try {
             CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
-                    budget.budget());
+                    budget.budget(), witnesses.form());
             Subject subject = focus ? input : input.withoutFocus();
             if (smallest) {
                 return smallest(subject, settings, progress);
@@ -136,7 +139,7 @@ final class ReduceCommand implements Callable<Integer> {
                 }
                 outcome = steered instanceof SteeredSearch.Found f
                         ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
-                                out, subject.file())
+                                out, subject.file(), settings.witnesses())
                         : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
             } else {
                 outcome = new CertifiedReduction(settings, progress).run(subject, out);
@@ -189,7 +192,8 @@ final class ReduceCommand implements Callable<Integer> {
         }
         SmallestCore.Found found = (SmallestCore.Found) r;
         CertifiedReduction.Outcome outcome = CertifiedReduction.certify(
-                CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file());
+                CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file(),
+                settings.witnesses());
         if (!(outcome instanceof CertifiedReduction.Verified v)) {
             w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
             return ExitCodes.UNKNOWN;
@@ -252,7 +256,8 @@ final class ReduceCommand implements Callable<Integer> {
         w.println("deleted: " + Format.deleted(certificate.provenance().deleted(), core.size(),
                 certificate.provenance().contracted().size(), inputSize));
         w.println("witnesses: " + 2 * certificate.minimality().size()
-                + " (every single-element deletion and contraction is orientable)");
+                + " (every single-element deletion and contraction is orientable; " + certificate.witnessCount("signs")
+                + " by signs, " + certificate.witnessCount("transported") + " transported by automorphisms of the core)");
         if (certificate.discovery() instanceof Discovery.Searched s) {
             w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
         }

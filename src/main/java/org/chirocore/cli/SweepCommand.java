@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.chirocore.family.Shard;
@@ -11,6 +12,8 @@ import org.chirocore.io.IoMessages;
 import org.chirocore.search.Strategy;
 import org.chirocore.sweep.HyperplaneOrbits;
 import org.chirocore.sweep.PairResult;
+import org.chirocore.sweep.RankCore;
+import org.chirocore.sweep.RankCoreSearch;
 import org.chirocore.sweep.SweepLevel;
 import org.chirocore.sweep.SweepResult;
 import org.chirocore.sweep.SweepRun;
@@ -57,6 +60,17 @@ final class SweepCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Option(names = "--rank-n-cores",
+            description = "Also search, for every pair, a core of rank n of the pulled cube with O contracted (deletions "
+                    + "only, the search of reduce --rank n), certify it (DIR/n=K/ID.rank-n.cert.json) and record it, or "
+                    + "that none exists, or unknown when --rank-n-time ran out. Never changes a verdict.")
+    private boolean rankNCores;
+
+    @Option(names = "--rank-n-time", paramLabel = "SECONDS", defaultValue = "120",
+            description = "With --rank-n-cores: wall-clock limit of the search for one pair (default: ${DEFAULT-VALUE}); "
+                    + "0 for none. Recorded in sweep.json; sweep-merge refuses shards run with another.")
+    private double rankNTime;
+
     @Override
     public Integer call() {
         int[] bounds = Converters.range(spec, "--n", range);
@@ -71,6 +85,15 @@ final class SweepCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--n must lie within " + SweepRun.MIN_DIMENSION + ".."
                     + HyperplaneOrbits.MAX_DIMENSION + "; got \"" + range + "\".");
         }
+        if (rankNTime < 0 || Double.isNaN(rankNTime) || Double.isInfinite(rankNTime)) {
+            throw new ParameterException(spec.commandLine(), "--rank-n-time must be a number of seconds, 0 or more; got "
+                    + rankNTime + ".");
+        }
+        if (!rankNCores && spec.commandLine().getParseResult().hasMatchedOption("--rank-n-time")) {
+            throw new ParameterException(spec.commandLine(), "--rank-n-time applies only with --rank-n-cores.");
+        }
+        Optional<RankCoreSearch> rankCores = rankNCores
+                ? Optional.of(new RankCoreSearch(Math.round(rankNTime * 1000))) : Optional.empty();
         OutputOptions.checkRunDirectory(out, List.of());
         PrintWriter err = spec.commandLine().getErr();
         long started = System.nanoTime();
@@ -84,7 +107,7 @@ final class SweepCommand implements Callable<Integer> {
         SweepResult result;
         try {
             result = new SweepRun(out, new SweepRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(), threadCount,
-                    part), progress).run(bounds[0], bounds[1]);
+                    part, rankCores), progress).run(bounds[0], bounds[1]);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot write the sweep's files: " + IoMessages.plain(e), e);
         }
@@ -104,12 +127,21 @@ final class SweepCommand implements Callable<Integer> {
             w.println("n = " + l.n() + ": " + l.orbits() + " hyperplane orbits, " + l.hyperplanes() + " hyperplanes, "
                     + l.generalPositionPairs() + " general-position pairs up to symmetry; " + l.pairs().size()
                     + " decided here, " + nonOrientable + " with both matroids non-orientable (certified and verified)");
+            result.rankCores().ifPresent(r -> w.println("n = " + l.n() + ": cores of rank " + l.n() + ": "
+                    + count(l, RankCore.Found.class) + " found (certified and verified), "
+                    + count(l, RankCore.NoneExists.class) + " none exists, " + count(l, RankCore.Unknown.class)
+                    + " unknown (limit: " + r.describe() + ")"));
         }
         for (PairResult p : result.discoveries()) {
             w.println("!!! ORIENTABLE PULL: " + p.id() + " (pulled " + p.pulledVerdict().text() + ", contracted "
                     + p.contractedVerdict().text() + ") !!!");
         }
+        // an unknown rank-n core is no unknown verdict: the exit code speaks of the verdicts only
         w.println("wrote " + out.resolve(SweepRun.SWEEP_MD) + " and " + out.resolve(SweepRun.SWEEP_JSON));
         return unknown ? ExitCodes.UNKNOWN : ExitCodes.OK;
+    }
+
+    private static long count(SweepLevel l, Class<? extends RankCore> kind) {
+        return l.pairs().stream().filter(p -> p.rankCore().filter(kind::isInstance).isPresent()).count();
     }
 }

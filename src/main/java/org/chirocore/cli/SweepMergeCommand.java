@@ -23,7 +23,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "sweep-merge", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = {"Join the output directories of the shards of one sweep (sweep --shard i/k) into DIR: the "
                 + "certificates, re-verified, and one DIR/sweep.json and DIR/sweep.md.",
-                "Refuses a missing or repeated shard, shards of another range, seed, strategy or shard count, "
+                "Refuses a missing or repeated shard, shards of another range, seed, strategy, shard count or "
+                        + "rank-n core search (--rank-n-cores, --rank-n-time), "
                         + "differing counts, and a pair missing, repeated or outside its shard."})
 final class SweepMergeCommand implements Callable<Integer> {
     @Spec

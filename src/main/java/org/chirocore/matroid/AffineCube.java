@@ -188,6 +188,11 @@ public final class AffineCube implements Matroid {
     }
 
     @Override
+    public int[] inClosure(int[] set, int[] candidates) {
+        return matrix.inClosure(set, candidates);
+    }
+
+    @Override
     public String toString() {
         return "AffineCube[n = " + dimension + " over " + field() + "]";
     }

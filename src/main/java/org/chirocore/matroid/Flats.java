@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import java.util.stream.IntStream;
 
 /**
  * Closures and flats through a rank oracle: the closure of S is S together with every element
@@ -33,15 +34,14 @@ public final class Flats {
         return firstOutsideInClosure(m, set) < 0;
     }
 
-    /** An element outside {@code set} that lies in its closure, or −1 when {@code set} is a flat. */
+    /**
+     * The first element outside {@code set} that lies in its closure, or −1 when {@code set} is a
+     * flat. Costs one {@link Matroid#inClosure} of the other elements.
+     */
     public static int firstOutsideInClosure(Matroid m, int[] set) {
-        int r = m.rank(set);
-        for (int e = 0; e < m.size(); e++) {
-            if (!ElementSets.contains(set, e) && m.rank(ElementSets.with(set, e)) == r) {
-                return e;
-            }
-        }
-        return -1;
+        int[] outside = IntStream.range(0, m.size()).filter(e -> !ElementSets.contains(set, e)).toArray();
+        int[] inClosure = m.inClosure(set, outside);
+        return inClosure.length == 0 ? -1 : inClosure[0];
     }
 
     /**

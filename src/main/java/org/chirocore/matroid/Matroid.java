@@ -1,5 +1,6 @@
 package org.chirocore.matroid;
 
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -33,6 +34,20 @@ public interface Matroid {
     /** Whether {@code set} (strictly increasing) is a basis: it has {@code rank()} elements and full rank. */
     default boolean isBasis(int[] set) {
         return set.length == rank() && rank(set) == set.length;
+    }
+
+    /**
+     * The elements of {@code candidates} that lie in the closure of {@code set}, i.e. the e with
+     * rank(set ∪ {e}) = rank(set) ([Ox, §1.4]), in the order of {@code candidates}. By default one
+     * rank query per candidate; a represented matroid answers with one dot product per candidate
+     * ({@link MatrixMatroid#inClosure}).
+     *
+     * @param set strictly increasing element indices
+     * @param candidates element indices, in any order
+     */
+    default int[] inClosure(int[] set, int[] candidates) {
+        int r = rank(set);
+        return Arrays.stream(candidates).filter(e -> rank(ElementSets.with(set, e)) == r).toArray();
     }
 
     /** Whether {@code set} (strictly increasing) is independent. */

@@ -91,11 +91,26 @@ public final class Minor implements Matroid {
 
     @Override
     public int rank(int[] set) {
+        return parent.rank(ElementSets.union(lift(set), contracted)) - contractedRank;
+    }
+
+    /**
+     * cl_{M/C\D}(S) consists of the remaining e with e ∈ cl_M(S ∪ C), as rank_{M/C\D}(S ∪ {e}) −
+     * rank_{M/C\D}(S) = rank_M(S ∪ C ∪ {e}) − rank_M(S ∪ C): one closure query of the parent.
+     */
+    @Override
+    public int[] inClosure(int[] set, int[] candidates) {
+        int[] inParent = parent.inClosure(ElementSets.union(lift(set), contracted), lift(candidates));
+        return Arrays.stream(inParent).map(e -> Arrays.binarySearch(kept, e)).toArray();
+    }
+
+    /** The parent indices of this minor's elements {@code set}, in the same order. */
+    private int[] lift(int[] set) {
         int[] lifted = new int[set.length];
         for (int i = 0; i < set.length; i++) {
             lifted[i] = kept[set[i]];
         }
-        return parent.rank(ElementSets.union(lifted, contracted)) - contractedRank;
+        return lifted;
     }
 
     /**
@@ -111,10 +126,6 @@ public final class Minor implements Matroid {
         if (contractedRank != contracted.length || rank + contractedRank != parent.rank()) {
             return rank(set) == set.length;
         }
-        int[] lifted = new int[set.length];
-        for (int i = 0; i < set.length; i++) {
-            lifted[i] = kept[set[i]];
-        }
-        return parent.isBasis(ElementSets.union(lifted, contracted));
+        return parent.isBasis(ElementSets.union(lift(set), contracted));
     }
 }

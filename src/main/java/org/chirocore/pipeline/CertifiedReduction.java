@@ -10,6 +10,7 @@ import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Certification;
 import org.chirocore.cert.CoreFinding;
+import org.chirocore.cert.WitnessForms;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.VerificationReport;
 import org.chirocore.io.AtomicFiles;
@@ -83,12 +84,18 @@ public final class CertifiedReduction {
      * @param seed the seed of the element order
      * @param strategy which single-element minors to try first
      * @param budget the budget of each decision and of the refutation
+     * @param witnesses the forms of the minimality witnesses written
      */
-    public record Settings(long seed, Strategy strategy, Budget budget) {
+    public record Settings(long seed, Strategy strategy, Budget budget, WitnessForms witnesses) {
         public Settings {
-            if (strategy == null || budget == null) {
-                throw new IllegalArgumentException("Pipeline settings need a strategy and a budget.");
+            if (strategy == null || budget == null || witnesses == null) {
+                throw new IllegalArgumentException("Pipeline settings need a strategy, a budget and a witness form.");
             }
+        }
+
+        /** Settings writing sign witnesses only. */
+        public Settings(long seed, Strategy strategy, Budget budget) {
+            this(seed, strategy, budget, WitnessForms.SIGNS);
         }
 
         /** The search settings for {@code subject}: these, with its focus. */
@@ -123,7 +130,7 @@ public final class CertifiedReduction {
             return new Unknown(u.reason());
         }
         CoreFinding found = CoreFinding.searched(((SearchResult.Found) result).core(), subject.source());
-        return certify(found, settings.budget(), out, subject.file());
+        return certify(found, settings.budget(), out, subject.file(), settings.witnesses());
     }
 
     /**
@@ -147,7 +154,19 @@ public final class CertifiedReduction {
      * @throws IllegalStateException as for {@link #certify(CoreFinding, Budget, Path)}
      */
     public static Outcome certify(CoreFinding found, Budget budget, Path out, Optional<Path> input) throws IOException {
-        Certification certification = Certification.of(found, budget);
+        return certify(found, budget, out, input, WitnessForms.SIGNS);
+    }
+
+    /**
+     * As {@link #certify(CoreFinding, Budget, Path, Optional)}, with the minimality witnesses in
+     * {@code forms}.
+     *
+     * @throws IOException when a file cannot be written
+     * @throws IllegalStateException as for {@link #certify(CoreFinding, Budget, Path)}
+     */
+    public static Outcome certify(CoreFinding found, Budget budget, Path out, Optional<Path> input, WitnessForms forms)
+            throws IOException {
+        Certification certification = Certification.of(found, budget, forms);
         if (certification instanceof Certification.OutOfBudget o) {
             return new Unknown("proving the core ran out of budget: " + o.reason());
         }

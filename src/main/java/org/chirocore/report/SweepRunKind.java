@@ -4,6 +4,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Function;
 
 import org.chirocore.io.Json;
@@ -37,9 +38,11 @@ final class SweepRunKind implements RunKind {
     public List<Member> certificates(Path dir) {
         List<Member> out = new ArrayList<>();
         for (Json.Obj p : pairs(record(dir))) {
+            String pair = "n = " + p.requireLong("n") + ", pair " + p.requireLong("index");
             if (p.requireObject("contracted").has("certificate")) {
-                out.add(new Member("n = " + p.requireLong("n") + ", pair " + p.requireLong("index"), file(dir, p)));
+                out.add(new Member(pair, file(dir, p)));
             }
+            rankCoreFile(dir, p).ifPresent(f -> out.add(new Member(pair + ", core of rank " + p.requireLong("n"), f)));
         }
         return out;
     }
@@ -48,24 +51,41 @@ final class SweepRunKind implements RunKind {
     public List<Document.Block> summary(Path dir, Function<Path, Document.Inline> classOf) {
         Json.Obj r = record(dir);
         try {
+            boolean rankN = r.has("rankNCores");
             List<List<Document.Inline>> rows = new ArrayList<>();
             for (Json.Obj p : pairs(r)) {
                 Json.Obj core = p.requireObject("core");
-                rows.add(List.of(text(Long.toString(p.requireLong("n"))), text(Long.toString(p.requireLong("index"))),
+                List<Document.Inline> row = new ArrayList<>(List.of(text(Long.toString(p.requireLong("n"))),
+                        text(Long.toString(p.requireLong("index"))),
                         new Document.Mono(p.requireString("pulled")), text(Long.toString(p.requireLong("orbitSize"))),
                         text(p.requireObject("pulledMatroid").requireString("verdict")),
                         text(p.requireObject("contracted").requireString("verdict")),
                         text(core.requireLong("elements") + ", " + core.requireLong("rank")),
                         p.requireObject("contracted").has("certificate") ? classOf.apply(file(dir, p)) : text("-")));
+                if (rankN) {
+                    row.add(text(rankCore(p)));
+                    row.add(rankCoreFile(dir, p).map(f -> classOf.apply(f)).orElse(text("-")));
+                }
+                rows.add(row);
+            }
+            List<String> header = new ArrayList<>(List.of("n", "#", "O", "orbit", "pulled cube", "O contracted",
+                    "core k, r", "class"));
+            String rankNNote = "";
+            if (rankN) {
+                header.addAll(List.of("rank-n core", "its class"));
+                long limit = r.requireObject("rankNCores").requireLong("timeLimitMillis");
+                rankNNote = " Rank-n core: a minor-minimal non-orientable minor of M'/O by deletions only, searched "
+                        + (limit == 0 ? "without a time limit" : "within " + seconds(limit) + " per pair")
+                        + " (elements, rank, bases; \"unknown\" is no verdict, only a budget that ran out).";
             }
             return List.of(Document.Paragraph.of("Every general-position pair (H, O) of the real n-cube up to its "
                             + "symmetries (seed " + r.requireLong("seed") + ", strategy " + r.requireString("strategy")
                             + "); orientable pulls found: " + r.requireArray("orientablePulls").size() + "."),
                     new Document.Heading("Pairs"),
-                    new Document.Table(List.of("n", "#", "O", "orbit", "pulled cube", "O contracted", "core k, r",
-                            "class"), rows),
+                    new Document.Table(header, rows),
                     Document.Paragraph.of("Orbit: the pairs in the orbit of (H, O) under the cube's symmetries; core k, r: "
-                            + "the core's elements and rank; class: its isomorphism class when the catalogue names it."),
+                            + "the core's elements and rank; class: its isomorphism class when the catalogue names it."
+                            + rankNNote),
                     Document.Paragraph.of("A referee re-checks the certificates with:"),
                     RunFiles.verifyCommand(dir, "n=*/*.cert.json"));
         } catch (IllegalArgumentException e) {
@@ -75,6 +95,35 @@ final class SweepRunKind implements RunKind {
 
     private static Document.Inline text(String s) {
         return new Document.Text(s);
+    }
+
+    /** A pair's rank-n core outcome in a few words: elements, rank, bases; none exists; unknown. */
+    private static String rankCore(Json.Obj pair) {
+        if (!pair.has("rankNCore")) {
+            return "not searched";
+        }
+        Json.Obj c = pair.requireObject("rankNCore");
+        String status = c.requireString("status");
+        if (status.equals("found")) {
+            return c.requireLong("elements") + ", " + c.requireLong("rank") + ", " + c.requireLong("bases") + " bases";
+        }
+        if (status.equals("unknown")) {
+            long limit = c.requireLong("timeLimitMillis");
+            return "unknown (" + (limit == 0 ? "no time limit" : "limit " + seconds(limit)) + ")";
+        }
+        return status;
+    }
+
+    private static String seconds(long millis) {
+        return (millis % 1000 == 0 ? Long.toString(millis / 1000) : Double.toString(millis / 1000.0)) + " s";
+    }
+
+    private static Optional<Path> rankCoreFile(Path dir, Json.Obj pair) {
+        if (!pair.has("rankNCore") || !pair.requireObject("rankNCore").has("certificate")) {
+            return Optional.empty();
+        }
+        return Optional.of(dir.resolve("n=" + pair.requireLong("n"))
+                .resolve(pair.requireObject("rankNCore").requireString("certificate")));
     }
 
     private static Path file(Path dir, Json.Obj pair) {

@@ -21,9 +21,12 @@ import org.chirocore.io.Json;
  * @param pulledVerdict the verdict on the pulled cube (rank n + 1 on 2^n elements)
  * @param contractedVerdict the verdict on the pulled cube with O contracted
  * @param core the minimal non-orientable core both certificates prove, when there is one
+ * @param rankCore the outcome of the search for a core of rank n of M'/O, when the run searched
+ *     one ({@link RankCoreSearch})
  */
 public record PairResult(int n, int index, List<Integer> normal, int offset, List<String> hyperplane, String pulled,
-        long hyperplaneOrbit, long orbitSize, Verdict pulledVerdict, Verdict contractedVerdict, Optional<Core> core) {
+        long hyperplaneOrbit, long orbitSize, Verdict pulledVerdict, Verdict contractedVerdict, Optional<Core> core,
+        Optional<RankCore> rankCore) {
     public PairResult {
         normal = List.copyOf(normal);
         hyperplane = List.copyOf(hyperplane);
@@ -57,6 +60,12 @@ public record PairResult(int n, int index, List<Integer> normal, int offset, Lis
         return s.append("_b").append(offset).append("_o").append(pulled).toString();
     }
 
+    /** The same pair with another rank-n core outcome (or none). */
+    PairResult withRankCore(Optional<RankCore> other) {
+        return new PairResult(n, index, normal, offset, hyperplane, pulled, hyperplaneOrbit, orbitSize, pulledVerdict,
+                contractedVerdict, core, other);
+    }
+
     /** Whether either matroid was found orientable: no such pull was known. */
     public boolean discovery() {
         return pulledVerdict instanceof Verdict.Orientable || contractedVerdict instanceof Verdict.Orientable;
@@ -85,6 +94,7 @@ public record PairResult(int n, int index, List<Integer> normal, int offset, Lis
             c.name().ifPresent(name -> cb.put("name", name));
             b.put("core", cb.build());
         });
+        rankCore.ifPresent(r -> b.put("rankNCore", r.toJson()));
         if (discovery()) {
             b.put("discovery", "ORIENTABLE PULL: this pull is orientable, which no published result reports");
         }
@@ -117,7 +127,8 @@ public record PairResult(int n, int index, List<Integer> normal, int offset, Lis
         return new PairResult(o.requireInt("n"), o.requireInt("index"), normal, o.requireInt("offset"),
                 strings(o.requireArray("hyperplane")), o.requireString("pulled"), o.requireLong("hyperplaneOrbit"),
                 o.requireLong("orbitSize"), Verdict.fromJson(o.requireObject("pulledMatroid")),
-                Verdict.fromJson(o.requireObject("contracted")), core);
+                Verdict.fromJson(o.requireObject("contracted")), core,
+                o.has("rankNCore") ? Optional.of(RankCore.fromJson(o.requireObject("rankNCore"))) : Optional.empty());
     }
 
     private static List<String> strings(Json.Arr a) {

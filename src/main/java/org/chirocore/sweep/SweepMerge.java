@@ -18,10 +18,11 @@ import org.chirocore.io.Json;
 /**
  * Joins the directories of the shards i/k of one sweep ({@code sweep --shard i/k}) into one
  * directory with one sweep.json and sweep.md. Refuses, naming the shard: a missing or unreadable
- * sweep.json; shards of another range, seed, strategy or shard count; a shard index missing or
+ * sweep.json; shards of another range, seed, strategy, shard count or rank-n core search (on or
+ * off, and its per-pair time limit); a shard index missing or
  * given twice; per-n counts that differ between shards; a pair outside its shard (index ≢ i mod
- * k), a pair index missing or given twice; a certificate that is missing, fails the verifier or
- * records another construction than its pair.
+ * k), a pair index missing or given twice; a certificate (of a verdict or of a rank-n core) that
+ * is missing, fails the verifier or records another construction than its pair.
  * Each certificate is verified in its shard first; only when every check has passed are the
  * certificates, witnesses and DRAT side files copied into the output, so a refused merge writes
  * nothing. Cost: one verification per certificate.
@@ -57,6 +58,10 @@ public final class SweepMerge {
                         + first.from() + ".." + first.to() + ", seed " + first.seed() + ", strategy " + first.strategy()
                         + " and " + k + " shards of " + shards.get(0) + ".");
             }
+            if (!p.rankCores().equals(first.rankCores())) {
+                throw new SweepException(where + ": the rank-n core search (" + rankCores(p) + ") differs from that of "
+                        + shards.get(0) + " (" + rankCores(first) + ").");
+            }
             int i = p.shard().index();
             if (byIndex[i] != null) {
                 throw new SweepException(where + ": shard " + i + "/" + k + " is given twice (also " + byIndex[i]
@@ -79,9 +84,13 @@ public final class SweepMerge {
             c.run();
         }
         SweepResult merged = new SweepResult(first.from(), first.to(), Shard.ALL, first.seed(), first.strategy(),
-                levels);
+                levels, first.rankCores());
         SweepReport.write(out, merged);
         return merged;
+    }
+
+    private static String rankCores(SweepResult r) {
+        return r.rankCores().map(c -> "on, " + c.describe()).orElse("off");
     }
 
     private static SweepResult read(Path shard) throws IOException {
@@ -120,8 +129,16 @@ public final class SweepMerge {
                             + " appears twice.");
                 }
                 Path from = SweepRun.levelDirectory(shards.get(s), n);
+                if (pair.rankCore().isPresent() != p.rankCores().isPresent()) {
+                    throw new SweepException(where + ": pair " + pair.id() + (pair.rankCore().isPresent()
+                            ? " has a rank-n core outcome, but the shard ran without the search"
+                            : " has no rank-n core outcome, but the shard ran the search") + ".");
+                }
                 check(pair, pair.contractedVerdict(), true, from, where);
                 check(pair, pair.pulledVerdict(), false, from, where);
+                if (pair.rankCore().orElse(null) instanceof RankCore.Found f) {
+                    check(pair, new Verdict.NonOrientable(f.certificate()), true, from, where);
+                }
                 copies.add(new Copy(pair, from, SweepRun.levelDirectory(out, n)));
             }
         }
@@ -138,18 +155,29 @@ public final class SweepMerge {
     private record Copy(PairResult pair, Path from, Path to) {
         void run() throws IOException {
             Files.createDirectories(to);
-            for (Verdict v : List.of(pair.contractedVerdict(), pair.pulledVerdict())) {
-                if (v.file().isEmpty()) {
-                    continue;
-                }
-                Path source = from.resolve(v.file());
-                Files.copy(source, to.resolve(v.file()), StandardCopyOption.REPLACE_EXISTING);
+            for (String file : files(pair)) {
+                Path source = from.resolve(file);
+                Files.copy(source, to.resolve(file), StandardCopyOption.REPLACE_EXISTING);
                 Path drat = from.resolve(CertificateWriter.baseName(source) + ".drat.gz");
                 if (Files.exists(drat)) {
                     Files.copy(drat, to.resolve(drat.getFileName()), StandardCopyOption.REPLACE_EXISTING);
                 }
             }
         }
+    }
+
+    /** The files of a pair: its certificates or witnesses, and its rank-n core's certificate. */
+    private static List<String> files(PairResult pair) {
+        List<String> out = new ArrayList<>();
+        for (Verdict v : List.of(pair.contractedVerdict(), pair.pulledVerdict())) {
+            if (!v.file().isEmpty()) {
+                out.add(v.file());
+            }
+        }
+        if (pair.rankCore().orElse(null) instanceof RankCore.Found f) {
+            out.add(f.certificate());
+        }
+        return out;
     }
 
     private static void check(PairResult pair, Verdict v, boolean contract, Path from, String where)

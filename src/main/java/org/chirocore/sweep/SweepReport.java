@@ -2,6 +2,7 @@ package org.chirocore.sweep;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
 
@@ -11,8 +12,8 @@ import org.chirocore.matroid.CubeHyperplane;
 /**
  * Writes a sweep's {@code sweep.json} (its {@link SweepResult#toJson}) and {@code sweep.md}: a
  * summary per n (orbits, hyperplanes, pairs, general-position pairs) and one row per decided
- * pair (H's equation and vertices, O, the pair's orbit size, both verdicts, the core and the
- * certificate files). An orientable pull is announced at the top of the Markdown file.
+ * pair (H's equation and vertices, O, the pair's orbit size, both verdicts, the core, the core of
+ * rank n when the run searched one, and the certificate files). An orientable pull is announced at the top of the Markdown file.
  */
 public final class SweepReport {
     private SweepReport() {
@@ -42,6 +43,9 @@ public final class SweepReport {
             s.append(", shard ").append(result.shard().index()).append('/').append(result.shard().count())
                     .append(" (only this shard's pairs are listed)");
         }
+        result.rankCores().ifPresent(r -> s.append(". A core of rank n of M'/O (deletions only) was searched for "
+                + "every pair with ").append(r.describe()).append("; \"unknown\" there is no verdict, only a budget "
+                + "that ran out"));
         s.append(".\n\n| n | hyperplane orbits | hyperplanes | pairs (H, O ∉ H) up to symmetry | in general position "
                 + "up to symmetry | in general position |\n|---|---|---|---|---|---|\n");
         for (SweepLevel l : result.levels()) {
@@ -55,9 +59,12 @@ public final class SweepReport {
                 s.append("No pair decided here.\n");
                 continue;
             }
+            boolean rankN = result.rankCores().isPresent();
             s.append("| # | H | vertices of H | O | orbit size | pulled (").append(1 << l.n()).append(" elements, rank ")
-                    .append(l.n() + 1).append(") | O contracted | core (elements, rank) | files |\n")
-                    .append("|---|---|---|---|---|---|---|---|---|\n");
+                    .append(l.n() + 1).append(") | O contracted | core (elements, rank) | ")
+                    .append(rankN ? "core of rank " + l.n() + " (elements, rank, bases) | " : "").append("files |\n")
+                    .append(rankN ? "|---|---|---|---|---|---|---|---|---|---|\n" : "|---|---|---|---|---|---|---|---|---|\n");
+            List<String> details = new ArrayList<>();
             for (PairResult p : l.pairs()) {
                 s.append("| ").append(p.index()).append(" | ").append(equation(p)).append(" | ")
                         .append(String.join(" ", p.hyperplane())).append(" | ").append(p.pulled()).append(" | ")
@@ -65,7 +72,17 @@ public final class SweepReport {
                         .append(verdict(p.contractedVerdict())).append(" | ")
                         .append(p.core().map(c -> c.elements() + ", " + c.rank() + c.name().map(x -> " (" + x + ")")
                                 .orElse("")).orElse("–"))
-                        .append(" | ").append(files(p)).append(" |\n");
+                        .append(" | ");
+                if (rankN) {
+                    s.append(p.rankCore().map(SweepReport::rankCore).orElse("not searched")).append(" | ");
+                    p.rankCore().filter(r -> !(r instanceof RankCore.Found))
+                            .ifPresent(r -> details.add("- #" + p.index() + ": " + r.text() + "\n"));
+                }
+                s.append(files(p)).append(" |\n");
+            }
+            if (!details.isEmpty()) {
+                s.append("\nRank-n core searches without a core:\n\n");
+                details.forEach(s::append);
             }
         }
         return s.toString();
@@ -79,8 +96,23 @@ public final class SweepReport {
         return v instanceof Verdict.Orientable ? "**" + v.text() + "**" : v.text();
     }
 
+    /** The short form of a rank-n core outcome for a table cell; the long reasons are listed below the table. */
+    private static String rankCore(RankCore r) {
+        if (r instanceof RankCore.Found f) {
+            return f.elements() + ", " + f.rank() + ", " + f.bases() + f.name().map(x -> " (" + x + ")").orElse("");
+        }
+        if (r instanceof RankCore.Unknown u) {
+            return "unknown (" + (u.millis() == 0 ? "no time limit" : RankCore.seconds(u.millis()) + " s") + ")";
+        }
+        return "none exists";
+    }
+
     private static String files(PairResult p) {
-        return List.of(p.pulledVerdict().file(), p.contractedVerdict().file()).stream().filter(f -> !f.isEmpty())
-                .map(f -> "`n=" + p.n() + "/" + f + "`").collect(Collectors.joining(" "));
+        List<String> files = new ArrayList<>(List.of(p.pulledVerdict().file(), p.contractedVerdict().file()));
+        if (p.rankCore().orElse(null) instanceof RankCore.Found f) {
+            files.add(f.certificate());
+        }
+        return files.stream().filter(f -> !f.isEmpty()).map(f -> "`n=" + p.n() + "/" + f + "`")
+                .collect(Collectors.joining(" "));
     }
 }

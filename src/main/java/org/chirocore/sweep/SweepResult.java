@@ -2,6 +2,7 @@ package org.chirocore.sweep;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.chirocore.family.Shard;
 import org.chirocore.io.Json;
@@ -16,8 +17,11 @@ import org.chirocore.io.Json;
  * @param seed the seed of every search
  * @param strategy the id of the search strategy
  * @param levels one per n of the range, in order
+ * @param rankCores the search for a core of rank n per pair, when the run made one (sweep.json's
+ *     {@code rankNCores}; absent in files of runs without it)
  */
-public record SweepResult(int from, int to, Shard shard, long seed, String strategy, List<SweepLevel> levels) {
+public record SweepResult(int from, int to, Shard shard, long seed, String strategy, List<SweepLevel> levels,
+        Optional<RankCoreSearch> rankCores) {
     /** The value of sweep.json's {@code format} member. */
     public static final String FORMAT = "chirocore-sweep-1";
 
@@ -36,14 +40,15 @@ public record SweepResult(int from, int to, Shard shard, long seed, String strat
         levels.forEach(l -> rows.add(l.toJson()));
         List<Json> found = new ArrayList<>();
         discoveries().forEach(p -> found.add(new Json.Str(p.id())));
-        return Json.Obj.builder()
+        Json.Obj.Builder b = Json.Obj.builder()
                 .put("format", FORMAT)
                 .put("from", from)
                 .put("to", to)
                 .put("shard", Json.Obj.builder().put("index", shard.index()).put("count", shard.count()).build())
                 .put("seed", seed)
-                .put("strategy", strategy)
-                .put("orientablePulls", new Json.Arr(found))
+                .put("strategy", strategy);
+        rankCores.ifPresent(r -> b.put("rankNCores", r.toJson()));
+        return b.put("orientablePulls", new Json.Arr(found))
                 .put("levels", new Json.Arr(rows))
                 .build();
     }
@@ -65,6 +70,8 @@ public record SweepResult(int from, int to, Shard shard, long seed, String strat
             levels.add(SweepLevel.fromJson(rows.get(i).asObject("levels[" + i + "]")));
         }
         return new SweepResult(o.requireInt("from"), o.requireInt("to"), new Shard(s.requireInt("index"),
-                s.requireInt("count")), o.requireLong("seed"), o.requireString("strategy"), levels);
+                s.requireInt("count")), o.requireLong("seed"), o.requireString("strategy"), levels,
+                o.has("rankNCores") ? Optional.of(RankCoreSearch.fromJson(o.requireObject("rankNCores")))
+                        : Optional.empty());
     }
 }

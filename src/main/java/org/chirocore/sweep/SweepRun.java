@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalInt;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -33,9 +34,11 @@ import org.chirocore.matroid.NamedMatroid;
 import org.chirocore.orient.Budget;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.pipeline.Subject;
+import org.chirocore.search.CoreConstraints;
 import org.chirocore.search.MinimalCore;
 import org.chirocore.search.Progress;
 import org.chirocore.search.SearchResult;
+import org.chirocore.search.SteeredSearch;
 import org.chirocore.search.Strategy;
 import org.chirocore.search.UnsatCoreSearch;
 
@@ -53,17 +56,24 @@ import org.chirocore.search.UnsatCoreSearch;
  *   <li>Otherwise (M'/O orientable, or out of budget) M' is reduced on its own.
  *   <li>An orientable matroid gets its re-checked orientation written as a witness file, and the
  *       pair is marked ORIENTABLE in every output and on stderr: no such pull was known.
+ *   <li>With {@link Settings#rankCores} set, a core of rank n of M'/O (deletions only) is searched
+ *       by {@link SteeredSearch} under the per-pair time limit and certified from M'/O; its
+ *       outcome (found, none exists, unknown) is recorded beside the verdicts and never changes them.
  * </ol>
  * Files go to {@code DIR/n=K/}: {@code ID.contracted.cert.json}, {@code ID.pulled.cert.json}
- * (or {@code .witness.json}), and {@code ID.pair.json}, written last, which makes a pair done.
- * A rerun reuses a done pair whose certificates still verify and record the same construction,
- * seed and strategy, and redoes any other. Then {@code sweep.json} and {@code sweep.md} are
- * written. Pairs run on {@code threads} threads; each pair depends only on its input and the
- * seed, so the files do not depend on thread timing.
+ * (or {@code .witness.json}), {@code ID.rank-n.cert.json}, and {@code ID.pair.json}, written
+ * last, which makes a pair done. A rerun reuses a done pair whose certificates still verify and
+ * record the same construction, seed and strategy, and redoes any other; of a reused pair it keeps
+ * the rank-n core outcome when its certificate still verifies likewise, when it is "none exists",
+ * or when it is unknown under a limit at least this run's, and otherwise searches the core only.
+ * Then {@code sweep.json} and {@code sweep.md} are written. Pairs run on {@code threads} threads;
+ * each pair depends only on its input and the seed, so the files do not depend on thread timing
+ * (except that a rank-n search under a time limit may answer unknown under one load and find a
+ * core under another: its inner budgets count conflicts, only the limit counts time).
  *
  * <p>Cost per n: the enumeration (see {@link HyperplaneOrbits}), one general-position test per
  * candidate pair, and per decided pair one or two reductions, two refutations and two
- * verifications.
+ * verifications; with the rank-n core search, up to its time limit more per pair.
  */
 public final class SweepRun {
     /** The sweep table as JSON, in the run's directory. */
@@ -81,15 +91,23 @@ public final class SweepRun {
      * @param budget the budget of each orientability decision
      * @param threads how many pairs run at once, at least 1
      * @param shard the part of the pairs this run decides
+     * @param rankCores whether to search a core of rank n per pair, and its budget
      */
-    public record Settings(long seed, Strategy strategy, Budget budget, int threads, Shard shard) {
+    public record Settings(long seed, Strategy strategy, Budget budget, int threads, Shard shard,
+            Optional<RankCoreSearch> rankCores) {
         public Settings {
-            if (strategy == null || budget == null || shard == null) {
-                throw new IllegalArgumentException("Sweep settings need a strategy, a budget and a shard.");
+            if (strategy == null || budget == null || shard == null || rankCores == null) {
+                throw new IllegalArgumentException("Sweep settings need a strategy, a budget, a shard and the rank-n "
+                        + "core search (or Optional.empty()).");
             }
             if (threads < 1) {
                 throw new IllegalArgumentException("A sweep needs at least 1 thread, not " + threads + ".");
             }
+        }
+
+        /** Settings without the rank-n core search. */
+        public Settings(long seed, Strategy strategy, Budget budget, int threads, Shard shard) {
+            this(seed, strategy, budget, threads, shard, Optional.empty());
         }
     }
 
@@ -138,7 +156,7 @@ public final class SweepRun {
             levels.add(level(n));
         }
         SweepResult result = new SweepResult(from, to, settings.shard(), settings.seed(), settings.strategy().id(),
-                levels);
+                levels, settings.rankCores());
         SweepReport.write(dir, result);
         for (PairResult p : result.discoveries()) {
             listener.line("!!! ORIENTABLE PULL " + p.id() + ": see " + SWEEP_MD + " !!!");
@@ -241,11 +259,21 @@ public final class SweepRun {
         if (Files.exists(record)) {
             Optional<PairResult> reused = reuse(record, level, index, contracted, pulled);
             if (reused.isPresent()) {
-                return reused.get();
+                PairResult earlier = reused.get();
+                if (settings.rankCores().isEmpty()) {
+                    return earlier.withRankCore(Optional.empty());
+                }
+                Optional<RankCore> kept = reusableRankCore(earlier.rankCore(), level, contracted);
+                if (kept.isPresent()) {
+                    return earlier.withRankCore(kept);
+                }
+                PairResult completed = earlier.withRankCore(Optional.of(rankCore(n, id, level, Subject.of(contracted),
+                        earlier.contractedVerdict())));
+                AtomicFiles.writeJson(record, completed.toJson());
+                return completed;
             }
         }
-        CertifiedReduction.Settings pipeline = new CertifiedReduction.Settings(settings.seed(), settings.strategy(),
-                settings.budget());
+        CertifiedReduction.Settings pipeline = pipelineSettings();
         Subject contractedSubject = Subject.of(contracted);
         Verdict contractedVerdict;
         Verdict pulledVerdict;
@@ -277,11 +305,88 @@ public final class SweepRun {
                 pulledVerdict = noCore(second, level, id + ".pulled");
             }
         }
+        Optional<RankCore> rankCore = settings.rankCores().isEmpty() ? Optional.empty()
+                : Optional.of(rankCore(n, id, level, contractedSubject, contractedVerdict));
         PairResult result = new PairResult(n, index, h.normal(), h.offset(), c.hyperplane().representative()
                 .vertices().stream().map(v -> AffineCube.real(n).label(v)).toList(), c.vertex(),
-                h.orbitSize(), c.orbitSize(), pulledVerdict, contractedVerdict, core);
+                h.orbitSize(), c.orbitSize(), pulledVerdict, contractedVerdict, core, rankCore);
         AtomicFiles.writeJson(record, result.toJson());
         return result;
+    }
+
+    private CertifiedReduction.Settings pipelineSettings() {
+        return new CertifiedReduction.Settings(settings.seed(), settings.strategy(), settings.budget());
+    }
+
+    /** The file name of a pair's rank-n core certificate. */
+    static String rankCoreFile(String id) {
+        return id + ".rank-n.cert.json";
+    }
+
+    /**
+     * Searches a core of rank n of M'/O (deletions only) with the steered search of
+     * {@code reduce --rank n} under the per-pair time limit, and certifies a core found through the
+     * one certified pipeline (written and verified before it counts).
+     */
+    private RankCore rankCore(int n, String id, Path level, Subject subject, Verdict contractedVerdict)
+            throws IOException {
+        long start = System.nanoTime();
+        RankCoreSearch search = settings.rankCores().orElseThrow();
+        int rank = subject.matroid().rank();
+        RankCore out;
+        if (contractedVerdict instanceof Verdict.Orientable) {
+            out = new RankCore.NoneExists("M'/O is orientable, so no minor of it is non-orientable");
+        } else if (rank < CoreConstraints.SMALLEST_CORE_RANK) {
+            out = new RankCore.NoneExists("M'/O has rank " + rank + ", and every matroid of rank at most 2 is orientable");
+        } else {
+            CertifiedReduction.Settings pipeline = pipelineSettings();
+            SteeredSearch.Result r = new SteeredSearch(pipeline.search(subject), new CoreConstraints(OptionalInt.of(rank),
+                    List.of(), List.of()), search.millisPerPair(), Progress.SILENT).search(subject.matroid());
+            if (r instanceof SteeredSearch.Found f) {
+                Path file = level.resolve(rankCoreFile(id));
+                CertifiedReduction.Outcome o = CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()),
+                        settings.budget(), file);
+                out = o instanceof CertifiedReduction.Unknown u
+                        ? new RankCore.Unknown("certifying the core found ran out of budget: " + u.reason(),
+                                search.millisPerPair())
+                        : found(f.core().core(), file.getFileName().toString());
+            } else if (r instanceof SteeredSearch.NoneExists none) {
+                out = new RankCore.NoneExists(none.enumerated());
+            } else {
+                out = new RankCore.Unknown(((SteeredSearch.Unknown) r).reason(), search.millisPerPair());
+            }
+        }
+        listener.line("n = " + n + ": " + id + ": rank-n core " + out.text() + " (" + millis(start) + " ms)");
+        return out;
+    }
+
+    /**
+     * An earlier pair's rank-n core outcome that stands: a core whose certificate still verifies
+     * and records M'/O, this seed and strategy (described afresh from the certificate); "none
+     * exists"; or unknown under a limit this run's does not exceed. Empty when it must be searched.
+     */
+    private Optional<RankCore> reusableRankCore(Optional<RankCore> earlier, Path level, CubeConstruction contracted)
+            throws IOException {
+        if (earlier.isEmpty()) {
+            return Optional.empty();
+        }
+        RankCore r = earlier.get();
+        if (r instanceof RankCore.Found f) {
+            if (!certified(new Verdict.NonOrientable(f.certificate()), level, contracted)) {
+                return Optional.empty();
+            }
+            return Optional.of(found(RecordedCertificate.read(level.resolve(f.certificate())).core(),
+                    f.certificate()));
+        }
+        if (r instanceof RankCore.Unknown u && !settings.rankCores().orElseThrow().coveredBy(u.millis())) {
+            return Optional.empty();
+        }
+        return earlier;
+    }
+
+    private static RankCore.Found found(ExplicitMatroid m, String file) {
+        return new RankCore.Found(m.size(), m.rank(), m.basisCount(), m.labels(),
+                Catalogue.identify(m).map(NamedMatroid::symbol), file);
     }
 
     /** Certifies, writes and verifies through the one certified pipeline. */
@@ -326,7 +431,7 @@ public final class SweepRun {
         ExplicitMatroid m = RecordedCertificate.read(level.resolve(earlier.contractedVerdict().file())).core();
         return Optional.of(new PairResult(earlier.n(), index, earlier.normal(), earlier.offset(), earlier.hyperplane(),
                 earlier.pulled(), earlier.hyperplaneOrbit(), earlier.orbitSize(), earlier.pulledVerdict(),
-                earlier.contractedVerdict(), Optional.of(core(m))));
+                earlier.contractedVerdict(), Optional.of(core(m)), earlier.rankCore()));
     }
 
     private static PairResult.Core core(ExplicitMatroid m) {

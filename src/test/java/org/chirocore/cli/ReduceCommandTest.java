@@ -92,6 +92,26 @@ class ReduceCommandTest {
         assertEquals(a.requireString("sha256"), b.requireString("sha256"));
     }
 
+    /**
+     * With --orbit-witnesses the Fano core, whose automorphism group PGL(3, 2) is transitive on its points
+     * (common practice; checked by brute force in check.OrbitWitnessTest), states one element's witnesses by
+     * their signs and transports the other six elements'; the same run writes the same content.
+     */
+    @Test
+    void orbitWitnessesAreDeterministicAndTransportSixOfSevenElements() throws IOException {
+        String[] args = {"reduce", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--orbit-witnesses",
+            "--out", out("o1.json")};
+        CliRun run = CliRun.of(args);
+        assertEquals(0, run.exit(), run.err());
+        assertTrue(run.out().contains("witnesses: 14 (every single-element deletion and contraction is orientable; "
+                + "2 by signs, 12 transported by automorphisms of the core)"), run.out());
+        args[args.length - 1] = out("o2.json");
+        assertEquals(0, CliRun.of(args).exit());
+        assertEquals(read(dir.resolve("o1.json")).require("content").toText(), read(dir.resolve("o2.json")).require("content").toText());
+        Json.Arr entries = read(dir.resolve("o1.json")).requireObject("content").requireArray("minimality");
+        assertEquals(6, entries.elements().stream().filter(e -> ((Json.Obj) e).require("deletion") instanceof Json.Obj).count());
+    }
+
     @Test
     void fileSourceNamesTheDigestOfTheFile() throws IOException, NoSuchAlgorithmException {
         Path f7 = OrientCommandTest.matrixFile(dir, "f7.json", "GF(2)");

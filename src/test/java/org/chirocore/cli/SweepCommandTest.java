@@ -27,6 +27,12 @@ class SweepCommandTest {
         assertTrue(run.err().contains("n = 3: pair 1 of 1 n3_a1-1-1_b1_o111: pulled non-orientable, contracted "
                 + "non-orientable, core 7 elements rank 3 (F7)"), run.err());
         assertTrue(Files.exists(out.resolve("sweep.json")) && Files.exists(out.resolve("sweep.md")));
+        // with the core of rank n: the 3-cube's M'/O is the Fano plane itself (docs/sweep.md)
+        CliRun rank = CliRun.of("sweep", "--n", "3", "--rank-n-cores", "--out", dir.resolve("r").toString());
+        assertEquals(0, rank.exit(), rank.err());
+        assertTrue(rank.out().contains("n = 3: cores of rank 3: 1 found (certified and verified), 0 none exists, 0 unknown "
+                + "(limit: 120 s per pair)"), rank.out());
+        assertTrue(Files.exists(dir.resolve("r/n=3/n3_a1-1-1_b1_o111.rank-n.cert.json")));
         CliRun merged = CliRun.of("sweep-merge", out.toString(), "--out", dir.resolve("m").toString());
         assertEquals(0, merged.exit(), merged.err());
         assertTrue(Files.exists(dir.resolve("m/n=3/n3_a1-1-1_b1_o111.pulled.cert.json")));
@@ -50,6 +56,14 @@ class SweepCommandTest {
         assertEquals(2, low.exit());
         assertTrue(low.err().contains("--n must lie within 2.."), low.err());
         assertEquals(2, CliRun.of("sweep", "--n", "3", "--shard", "2/2", "--out", dir.toString()).exit());
+        CliRun alone = CliRun.of("sweep", "--n", "3", "--rank-n-time", "5", "--out", dir.resolve("a").toString());
+        assertEquals(2, alone.exit());
+        assertTrue(alone.err().contains("--rank-n-time applies only with --rank-n-cores"), alone.err());
+        CliRun negative = CliRun.of("sweep", "--n", "3", "--rank-n-cores", "--rank-n-time", "-1", "--out",
+                dir.resolve("b").toString());
+        assertEquals(2, negative.exit());
+        assertTrue(negative.err().contains("--rank-n-time must be"), negative.err());
+        assertTrue(Files.notExists(dir.resolve("a")) && Files.notExists(dir.resolve("b")), "refused before any output");
         CliRun missing = CliRun.of("sweep-merge", dir.resolve("nothing").toString(), "--out", dir.toString());
         assertEquals(2, missing.exit());
         assertTrue(missing.err().contains("sweep.json: is missing"), missing.err());

@@ -14,6 +14,7 @@ import org.chirocore.check.CertificateVerifier;
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
 import org.chirocore.orient.Budget;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -97,6 +98,22 @@ class FamilyPredictionTest {
         }
         FamilyPrediction.Refuted six = assertInstanceOf(FamilyPrediction.Refuted.class, outcomes.get(1));
         assertEquals("the predicted minor is orientable", six.reason());
+    }
+
+    /**
+     * The shipped rule at the top of its range: at n = 15 its candidate is a core isomorphic to F7
+     * (Oxley, Matroid Theory, 2nd ed., Example 1.5.7), certified and verified, with the verifier
+     * rebuilding the pulled 15-cube; at n = 16 the candidate is orientable.
+     */
+    @Tag("slow")
+    @Test
+    void theShippedRuleIsConfirmedAtFifteenAndRefutedAtSixteen() throws IOException {
+        List<FamilyPrediction.Outcome> outcomes = check(Path.of("families/corner.rule.json"), 15, 16);
+        FamilyPrediction.Confirmed fifteen = assertInstanceOf(FamilyPrediction.Confirmed.class, outcomes.get(0));
+        assertTrue(CertificateVerifier.verify(dir.resolve(fifteen.certificate())).passed());
+        assertTrue(new HyperplaneIsomorphismInspector(fifteen.facts().core(), NamedMatroids.fano()).find().isPresent());
+        FamilyPrediction.Refuted sixteen = assertInstanceOf(FamilyPrediction.Refuted.class, outcomes.get(1));
+        assertEquals("the predicted minor is orientable", sixteen.reason());
     }
 
     @Test

@@ -1,5 +1,6 @@
 package org.chirocore.matroid;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -194,5 +195,49 @@ class PulledMatroidTest {
         InvalidHyperplaneException e = assertThrows(InvalidHyperplaneException.class,
                 () -> PulledMatroid.pull(cube, cube.indicesOf(List.of("000", "100", "010")), cube.indexOf("111")));
         assertTrue(e.getMessage().contains("110 lies in its closure"), e.getMessage());
+    }
+    /**
+     * Closures in the pulled 4-cube, in minors of it (contracting and deleting random sets) and in
+     * minors of minors agree with the definition rank(S ∪ {e}) = rank(S) evaluated by rank queries,
+     * at every rank of S (at rank r − 1 and r the pulled matroid's own rule applies).
+     */
+    @Test
+    void closuresInPulledCubesAndTheirMinorsAgreeWithRankQueries() {
+        AffineCube cube = AffineCube.real(4);
+        PulledMatroid pulled = PulledMatroid.pull(cube, unitVectors(cube), allOnes(cube));
+        Random random = new Random(16);
+        for (int trial = 0; trial < 100; trial++) {
+            Matroid m = pulled;
+            for (int level = 0; level < trial % 3; level++) {
+                int[] contracted = ElementSets.elements(random.nextLong() & random.nextLong() & ElementSets.allMask(m.size()));
+                int[] deleted = Arrays.stream(ElementSets.elements(random.nextLong() & random.nextLong()
+                        & ElementSets.allMask(m.size()))).filter(e -> !ElementSets.contains(contracted, e)).toArray();
+                m = new Minor(m, contracted, deleted);
+            }
+            int[] set = ElementSets.elements(random.nextLong() & random.nextLong() & ElementSets.allMask(m.size()));
+            int[] candidates = ElementSets.range(m.size());
+            assertArrayEquals(new MatrixMatroidTest.RankOnly(m).inClosure(set, candidates), m.inClosure(set, candidates),
+                    "trial " + trial);
+        }
+    }
+
+    /** Simplifying a contracted pulled 5-cube with closure queries keeps the first element of each parallel class. */
+    @Test
+    void simplificationKeepsTheFirstElementOfEachParallelClass() {
+        AffineCube cube = AffineCube.real(5);
+        PulledMatroid pulled = PulledMatroid.pull(cube, unitVectors(cube), allOnes(cube));
+        Matroid m = new Minor(pulled, cube.indicesOf(List.of("11111", "10000", "01000")), new int[0]);
+        int[] kept = Simplification.representatives(m);
+        for (int e = 0; e < m.size(); e++) {
+            int first = e;
+            for (int f = 0; f < e; f++) {
+                if (m.rank(new int[] {f}) == 1 && m.rank(new int[] {f, e}) == 1) {
+                    first = Math.min(first, f);
+                }
+            }
+            boolean keep = m.rank(new int[] {e}) == 1 && first == e;
+            assertEquals(keep, ElementSets.contains(kept, e), m.labels().get(e));
+        }
+        assertTrue(kept.length < m.size() - 1, "the contraction has parallel elements: " + kept.length);
     }
 }

@@ -27,7 +27,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  * through {@link CertifiedReduction} with the settings it records (seed 0, contract-first; see
  * certificates/make.sh and families/corner/table.json) and its hashed content must be
  * byte-identical, which the equal content digest states. The small ones run by default, the
- * larger cubes (n = 7..10, a few seconds each) under the {@code slow} tag.
+ * larger cubes (n = 7..16, from a few seconds to about 15 s of CPU each) under the {@code slow} tag.
  */
 class StoredCertificatesRegenerateTest {
     private static final CertifiedReduction PIPELINE = new CertifiedReduction(
@@ -53,7 +53,7 @@ class StoredCertificatesRegenerateTest {
     }
 
     static Stream<Arguments> largeFamilyMembers() {
-        return Stream.of(7, 8, 9, 10).map(Arguments::of);
+        return Stream.of(7, 8, 9, 10, 11, 12, 13, 14, 15, 16).map(Arguments::of);
     }
 
     @ParameterizedTest(name = "certificates/{0}.cert.json")

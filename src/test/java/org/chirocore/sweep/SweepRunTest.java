@@ -163,7 +163,8 @@ class SweepRunTest {
         assertTrue(construction.getMessage().contains("another construction"), construction.getMessage());
     }
 
-    private static Path copy(Path from, Path to) throws IOException {
+    /** A copy of a sweep directory, to be tampered with. */
+    static Path copy(Path from, Path to) throws IOException {
         try (var walk = Files.walk(from)) {
             for (Path p : walk.toList()) {
                 Path target = to.resolve(from.relativize(p).toString());

@@ -43,6 +43,25 @@ final class BasisTable {
         return canonical[position];
     }
 
+    /** The set at canonical position {@code position}, as its elements in increasing order. */
+    int[] elements(int position) {
+        long mask = canonical[position];
+        int[] out = new int[Long.bitCount(mask)];
+        for (int i = 0; i < out.length; i++, mask &= mask - 1) {
+            out[i] = Long.numberOfTrailingZeros(mask);
+        }
+        return out;
+    }
+
+    /** The canonical position of the set with the increasing elements {@code sorted} (each below 64), or −1 when it is not in the family. */
+    int positionOf(int[] sorted) {
+        long mask = 0;
+        for (int e : sorted) {
+            mask |= 1L << e;
+        }
+        return positionOf(mask);
+    }
+
     /** The canonical position of {@code mask}, or −1 when it is not in the family. */
     int positionOf(long mask) {
         int k = Arrays.binarySearch(numeric, mask);

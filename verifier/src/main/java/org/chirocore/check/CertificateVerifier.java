@@ -14,9 +14,12 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import java.util.zip.GZIPInputStream;
 
 import org.chirocore.check.ParsedCertificate.Relation;
@@ -254,6 +257,8 @@ public final class CertificateVerifier {
         private final Optional<Path> input;
         private final int n;
         private BasisTable core;
+        /** The stated automorphisms already checked, as {@code Arrays.toString} of their images. */
+        private final Set<String> checkedAutomorphisms = new HashSet<>();
         private Cnf cnf;
 
         Verification(ParsedCertificate c, Path baseDir, Optional<Path> input) {
@@ -421,28 +426,91 @@ public final class CertificateVerifier {
             return outcome;
         }
 
-        /** Each witness has one sign per basis of its minor and satisfies all its 3-term relations ([BLSWZ, Thm. 3.6.2]). */
+        /**
+         * Each explicit witness has one sign per basis of its minor and satisfies all its 3-term
+         * relations ([BLSWZ, Thm. 3.6.2]); each transported one refers to an explicit witness of
+         * the same kind through a stated automorphism (docs/verifier.md, "Witnesses by symmetry").
+         */
         String minimality() throws Failure {
             long work = 0;
+            int transported = 0;
             for (int e = 0; e < n; e++) {
-                work = Math.addExact(work, Relations.evaluations(core, e));
+                Witness w = c.witnesses().get(e);
+                if (w.deletion() instanceof JsonTree.Str || w.contraction() instanceof JsonTree.Str) {
+                    work = Math.addExact(work, Relations.evaluations(core, e));
+                }
+                transported += (TransportedWitness.isTransported(w.deletion()) ? 1 : 0) + (TransportedWitness.isTransported(w.contraction()) ? 1 : 0);
             }
             if (work > VerifierLimits.MAX_WITNESS_RELATIONS) {
                 throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
                         + VerifierLimits.MAX_WITNESS_RELATIONS + "; not checked");
+            }
+            // per transported witness: one lookup per basis of its minor, and at most one per basis of the core for its automorphism
+            long lookups = 2L * transported * core.count();
+            if (lookups > VerifierLimits.MAX_TRANSPORT_LOOKUPS) {
+                throw new Failure("the transported witnesses need " + lookups + " basis lookups, more than the verifier's limit of "
+                        + VerifierLimits.MAX_TRANSPORT_LOOKUPS + "; not checked");
             }
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
                 if (!w.element().equals(c.labels().get(e))) {
                     throw new Failure("minimality[" + e + "] is for element \"" + w.element() + "\", expected \"" + c.labels().get(e) + "\"");
                 }
-                witness(core.deletion(e), w.deletion(), "the deletion witness of " + w.element());
-                witness(core.contraction(e), w.contraction(), "the contraction witness of " + w.element());
+                witness(e, false, w.deletion(), "the deletion witness of " + w.element());
+                witness(e, true, w.contraction(), "the contraction witness of " + w.element());
             }
-            return 2 * n + " witnesses orient every single-element deletion and contraction";
+            return 2 * n + " witnesses orient every single-element deletion and contraction (" + (2 * n - transported) + " by signs, "
+                    + transported + " transported" + (transported == 0 ? "" : " by " + checkedAutomorphisms.size() + " stated automorphisms") + ")";
         }
 
-        private static void witness(BasisTable minor, String signs, String what) throws Failure {
+        /**
+         * Checks the witness of the minor at e (core/e when {@code contraction}, else core\e),
+         * dispatching on its form: a sign string, or an object naming its kind.
+         */
+        private void witness(int e, boolean contraction, JsonTree.Value witness, String what) throws Failure {
+            BasisTable minor = contraction ? core.contraction(e) : core.deletion(e);
+            if (witness instanceof JsonTree.Str s) {
+                Optional<String> bad = Relations.violated(minor, signs(minor, s.value(), what));
+                if (bad.isPresent()) {
+                    throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
+                }
+            } else if (TransportedWitness.isTransported(witness)) {
+                transported(e, contraction, minor, TransportedWitness.Stated.read((JsonTree.Obj) witness, what), what);
+            } else {
+                throw new Failure(what + " is an object without \"image\"; a witness is a sign string or {\"image\": label, \"under\": [...]}");
+            }
+        }
+
+        /**
+         * A transported witness: its image f names a core element whose witness of the same kind
+         * is a sign string, its permutation σ is an automorphism of the core with σ(f) = e, and the
+         * relabelled signs have the minor's bases as support.
+         */
+        private void transported(int e, boolean contraction, BasisTable minor, TransportedWitness.Stated t, String what) throws Failure {
+            int f = c.labels().indexOf(t.image());
+            if (f < 0) {
+                throw new Failure(what + " is transported from \"" + Escaping.printable(t.image()) + "\", which is not a core element");
+            }
+            Witness source = c.witnesses().get(f);
+            if (!((contraction ? source.contraction() : source.deletion()) instanceof JsonTree.Str signs)) {
+                throw new Failure(what + " is transported from the " + (contraction ? "contraction" : "deletion") + " witness of "
+                        + Escaping.printable(t.image()) + ", which is not given by its signs (a transported witness must refer to an "
+                        + "explicit one)");
+            }
+            if (checkedAutomorphisms.add(Arrays.toString(t.under()))) {
+                TransportedWitness.checkAutomorphism(core, t.under(), what);
+            }
+            if (t.under()[f] != e) {
+                throw new Failure(what + ": the permutation " + Arrays.toString(t.under()) + " maps its image " + f + " (\""
+                        + Escaping.printable(t.image()) + "\") to " + t.under()[f] + ", not to " + e);
+            }
+            BasisTable from = contraction ? core.contraction(f) : core.deletion(f);
+            String sourceWhat = "the " + (contraction ? "contraction" : "deletion") + " witness of " + Escaping.printable(t.image());
+            TransportedWitness.transport(from, f, signs(from, signs.value(), sourceWhat), minor, e, t.under(), what);
+        }
+
+        /** The signs of a sign string, one per basis of {@code minor}: +1 for '+', −1 for '-'. */
+        private static int[] signs(BasisTable minor, String signs, String what) throws Failure {
             if (signs.length() != minor.count()) {
                 throw new Failure(what + " has " + signs.length() + " signs; the minor has " + minor.count() + " bases");
             }
@@ -454,10 +522,7 @@ public final class CertificateVerifier {
                 }
                 values[i] = s == '+' ? 1 : -1;
             }
-            Optional<String> bad = Relations.violated(minor, values);
-            if (bad.isPresent()) {
-                throw new Failure(what + ": " + bad.get() + " (elements numbered in the minor)");
-            }
+            return values;
         }
 
         String provenance() throws ProvenanceCheck.Mismatch, Skipped, IOException {

@@ -27,8 +27,11 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         }
     }
 
-    /** One minimality entry: the element's label and the sign strings of core\e and core/e. */
-    record Witness(String element, String deletion, String contraction) {
+    /**
+     * One minimality entry: the element's label and the witnesses of core\e and core/e, each a
+     * sign string or an object naming its kind (checked by the minimality check).
+     */
+    record Witness(String element, JsonTree.Value deletion, JsonTree.Value contraction) {
     }
 
     /**
@@ -107,7 +110,8 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         return out;
     }
 
-    private static int[] ints(JsonTree.Arr array, String what) {
+    /** An array of at most 64 ints. */
+    static int[] ints(JsonTree.Arr array, String what) {
         if (array.size() > VerifierLimits.MAX_ELEMENTS) {
             throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + VerifierLimits.MAX_ELEMENTS + " are allowed");
         }
@@ -144,9 +148,18 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
             String what = "content.minimality[" + i + "]";
             JsonTree.Obj w = array.get(i).asObject(what);
             w.requireOnly(List.of("element", "deletion", "contraction"));
-            out.add(new Witness(w.require("element").asString(what + ".element"), w.require("deletion").asString(what + ".deletion"),
-                    w.require("contraction").asString(what + ".contraction")));
+            out.add(new Witness(w.require("element").asString(what + ".element"), witness(w, "deletion", what),
+                    witness(w, "contraction", what)));
         }
         return out;
+    }
+
+    /** A witness member: a sign string or an object. */
+    private static JsonTree.Value witness(JsonTree.Obj entry, String name, String what) {
+        JsonTree.Value v = entry.require(name);
+        if (!(v instanceof JsonTree.Str) && !(v instanceof JsonTree.Obj)) {
+            throw new JsonTree.Mistyped(what + "." + name + " must be a sign string or an object, found " + v.kind());
+        }
+        return v;
     }
 }

@@ -20,8 +20,8 @@ import java.util.function.ToIntFunction;
  * onto H, optionally contracted at O; a given matroid is read from {@code --input}. Then the core
  * must be exactly M/C\D (rank_{M/C\D}(S) = rank_M(S ∪ C) − rank_M(C), [Ox, Prop. 3.1.6]). Cost: one
  * rank evaluation per r-subset of the core's ground set, plus the general-position test. Subsets
- * of a cube's ground set (up to 2^10 vertices) are BitSets; a given matroid and the core have at
- * most 64 elements.
+ * of a cube's ground set (up to 2^16 vertices, {@link VerifierLimits#MAX_CUBE}) are BitSets; a
+ * given matroid and the core have at most 64 elements.
  */
 final class ProvenanceCheck {
     /** A rejected provenance; the message says what does not match. */

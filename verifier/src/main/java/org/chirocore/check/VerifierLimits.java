@@ -27,6 +27,12 @@ final class VerifierLimits {
     static final long MAX_EXCHANGE_PAIRS = 12_000_000;
     /** Most 3-term relations evaluated over all minimality witnesses together. */
     static final long MAX_WITNESS_RELATIONS = 100_000_000L;
+    /**
+     * Most basis lookups for the witnesses transported by symmetry, counted as twice the core's
+     * basis count per transported witness (one lookup per basis of its minor, and at most one per
+     * basis of the core to check its automorphism).
+     */
+    static final long MAX_TRANSPORT_LOOKUPS = 100_000_000L;
     /** Largest cube dimension rebuilt: 2^16 vertices, as many as the producer builds. */
     static final int MAX_CUBE = 16;
     /**

@@ -1,0 +1,12 @@
+package org.chirocore.cert;
+
+/** Which forms the minimality witnesses of a certificate take. */
+public enum WitnessForms {
+    /** One sign per basis of each single-element minor (the default, as the stored certificates have). */
+    SIGNS,
+    /**
+     * Signs only for one element per orbit of the core's automorphism group; every other element's
+     * witnesses are its orbit representative's, transported by a stated automorphism ({@link ElementOrbits}).
+     */
+    ORBITS
+}
