@@ -4,7 +4,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 chirocore() { java -Xmx2g -jar target/chirocore.jar "$@"; }
-for f in fano fano-dual ag32 ag23-minus-point; do
+for f in fano fano-dual ag32 ag23-minus-point fano-in-70; do
   chirocore reduce "certificates/inputs/$f.json" --out "certificates/$f.cert.json"
 done
 for n in 3 4 5 6 7 8; do

@@ -8,7 +8,7 @@ import java.util.List;
 import org.chirocore.io.InputFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonValueException;
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.GpRelation;
@@ -83,8 +83,7 @@ public final class CertificateReader {
         List<Integer> normalised = new ArrayList<>();
         Json.Arr normalisedBases = proof.requireArray("normalised");
         for (int i = 0; i < normalisedBases.size(); i++) {
-            long mask = ElementSets.mask(ints(normalisedBases.get(i), "normalised[" + i + "]"));
-            int v = index.variable(mask);
+            int v = index.variable(ElementSet.of(ints(normalisedBases.get(i), "normalised[" + i + "]")));
             if (v == 0) {
                 throw new JsonValueException("normalised[" + i + "] is not a basis of the core");
             }
@@ -98,7 +97,7 @@ public final class CertificateReader {
             if (r.size() != 5) {
                 throw new JsonValueException(where + " must be [[X...], a, b, c, d]");
             }
-            relations.add(new GpRelation(ElementSets.mask(ints(r.get(0), where + "[0]")), r.get(1).asInt(where),
+            relations.add(new GpRelation(ElementSet.of(ints(r.get(0), where + "[0]")), r.get(1).asInt(where),
                     r.get(2).asInt(where), r.get(3).asInt(where), r.get(4).asInt(where)));
         }
         return new Claim(index, normalised, relations);

@@ -14,7 +14,6 @@ import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.Sha256;
 import org.chirocore.matroid.Construction;
-import org.chirocore.matroid.ElementSets;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.GpRelation;
 import org.chirocore.orient.Refutation;
@@ -181,7 +180,7 @@ public final class CertificateWriter {
         BasisIndex index = BasisIndex.of(c.core());
         List<Json> normalised = new ArrayList<>();
         for (int v : r.normalised()) {
-            normalised.add(Json.Arr.ofInts(ElementSets.elements(index.basis(v))));
+            normalised.add(Json.Arr.ofInts(index.basis(v).elements()));
         }
         List<Json> relations = new ArrayList<>();
         for (GpRelation g : r.relations()) {
@@ -201,7 +200,7 @@ public final class CertificateWriter {
 
     /** A relation as the certificate lists it: {@code [[x1, ...], a, b, c, d]}. */
     static Json.Arr relation(GpRelation g) {
-        return new Json.Arr(List.of(Json.Arr.ofInts(ElementSets.elements(g.x())), Json.Num.of(g.a()),
+        return new Json.Arr(List.of(Json.Arr.ofInts(g.x().elements()), Json.Num.of(g.a()),
                 Json.Num.of(g.b()), Json.Num.of(g.c()), Json.Num.of(g.d())));
     }
 

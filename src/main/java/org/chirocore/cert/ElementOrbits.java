@@ -5,7 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.search.marco.Symmetry;
@@ -100,13 +100,13 @@ record ElementOrbits(int[] representative, List<int[]> carrier) {
             image.add(new Signed(t, (byte) (sortWithSign(t) * source.sign(i))));
         }
         image.sort((a, b) -> Arrays.compare(a.basis(), b.basis()));
-        long[] masks = new long[image.size()];
+        List<ElementSet> sets = new ArrayList<>(image.size());
         byte[] signs = new byte[image.size()];
-        for (int i = 0; i < masks.length; i++) {
-            masks[i] = ElementSets.mask(image.get(i).basis());
+        for (int i = 0; i < signs.length; i++) {
+            sets.add(ElementSet.of(image.get(i).basis()));
             signs[i] = image.get(i).sign();
         }
-        return new Chirotope(labels, source.rank(), masks, signs);
+        return new Chirotope(labels, source.rank(), sets, signs);
     }
 
     /** Sorts {@code a} (distinct entries) in place; returns the sign of the sorting permutation. */

@@ -17,6 +17,7 @@ import org.chirocore.cert.Source;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Limits;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.pipeline.CertifiedReduction;
 import org.chirocore.pipeline.Subject;
@@ -90,7 +91,7 @@ final class EnumerateCommand implements Callable<Integer> {
         Subject input = inputs.choose();
         if (!SteeredSearch.explorable(input.matroid())) {
             throw new BadInputException("the matroid (rank " + input.matroid().rank() + " on " + input.matroid().size()
-                    + " elements) is too large to enumerate: at most 64 elements and " + SteeredSearch.EXPLORED_SUBSETS
+                    + " elements) is too large to enumerate: at most " + Limits.ENUMERATED_ELEMENTS + " elements and " + SteeredSearch.EXPLORED_SUBSETS
                     + " r-subsets", null);
         }
         ExplicitMatroid m = ExplicitMatroid.of(input.matroid());

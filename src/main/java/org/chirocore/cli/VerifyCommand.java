@@ -60,7 +60,7 @@ final class VerifyCommand implements Callable<Integer> {
         return exit;
     }
 
-    /** The core's name in the catalogue; a core the report model cannot hold (over 64 elements) is not named. */
+    /** The core's name in the catalogue; a core the report model cannot hold is not named. */
     private static String named(Path file) {
         try {
             return Format.named(Catalogue.identify(CertificateSummary.read(file).core()));

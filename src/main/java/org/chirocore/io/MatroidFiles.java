@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Collectors;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.InvalidMatroidException;
@@ -221,7 +222,7 @@ public final class MatroidFiles {
      * duplicates with messages that point at the item.
      */
     private static List<int[]> sets(Json.Arr list, String name, int n, int rank) {
-        Map<Long, Integer> firstIndex = new HashMap<>();
+        Map<ElementSet, Integer> firstIndex = new HashMap<>();
         List<int[]> out = new ArrayList<>(list.size());
         for (int i = 0; i < list.size(); i++) {
             String where = name + "[" + i + "]";
@@ -230,7 +231,7 @@ public final class MatroidFiles {
                 throw new JsonValueException(where + " has " + set.size() + " elements, but the rank is " + rank);
             }
             int[] elements = new int[rank];
-            long mask = 0;
+            ElementSet seen = ElementSet.EMPTY;
             for (int j = 0; j < rank; j++) {
                 int e = set.get(j).asInt(where + "[" + j + "]");
                 if (e < 0) {
@@ -240,13 +241,13 @@ public final class MatroidFiles {
                     throw new JsonValueException(where + " names element " + e + ", but there are only " + n
                             + " elements (0.." + (n - 1) + ")");
                 }
-                if ((mask & (1L << e)) != 0) {
+                if (seen.contains(e)) {
                     throw new JsonValueException(where + " repeats element " + e);
                 }
-                mask |= 1L << e;
+                seen = seen.with(e);
                 elements[j] = e;
             }
-            Integer earlier = firstIndex.putIfAbsent(mask, i);
+            Integer earlier = firstIndex.putIfAbsent(seen, i);
             if (earlier != null) {
                 throw new JsonValueException(where + " is the same set as " + name + "[" + earlier + "]");
             }

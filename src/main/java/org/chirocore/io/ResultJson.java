@@ -1,9 +1,11 @@
 package org.chirocore.io;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.MatrixMatroid;
 import org.chirocore.matroid.Realisation;
@@ -126,14 +128,15 @@ public final class ResultJson {
         Json.Obj o = json.asObject("the chirotope");
         o.requireOnly(List.of("labels", "rank", "bases", "signs"));
         List<String> labels = MatroidFiles.labels(o.require("labels"));
-        if (labels.size() > 64) {
-            throw new JsonValueException("a chirotope has at most 64 elements, but there are " + labels.size());
+        if (labels.size() > Limits.ELEMENTS) {
+            throw new JsonValueException("a chirotope has at most " + Limits.ELEMENTS + " elements, but there are "
+                    + labels.size());
         }
         int rank = o.requireInt("rank");
         Json.Arr basisArray = o.requireArray("bases");
-        long[] bases = new long[basisArray.size()];
+        List<ElementSet> bases = new ArrayList<>();
         int[] previous = null;
-        for (int i = 0; i < bases.length; i++) {
+        for (int i = 0; i < basisArray.size(); i++) {
             String where = "bases[" + i + "]";
             Json.Arr b = basisArray.get(i).asArray(where);
             int[] basis = new int[b.size()];
@@ -151,15 +154,15 @@ public final class ResultJson {
                 throw new JsonValueException(where + " does not come after bases[" + (i - 1)
                         + "] in lexicographic order");
             }
-            bases[i] = ElementSets.mask(basis);
+            bases.add(ElementSet.of(basis));
             previous = basis;
         }
         String signText = o.requireString("signs");
-        if (signText.length() != bases.length) {
+        if (signText.length() != bases.size()) {
             throw new JsonValueException("field \"signs\" has " + signText.length() + " signs, but there are "
-                    + bases.length + " bases");
+                    + bases.size() + " bases");
         }
-        byte[] signs = new byte[bases.length];
+        byte[] signs = new byte[bases.size()];
         for (int i = 0; i < signs.length; i++) {
             char c = signText.charAt(i);
             if (c != '+' && c != '-') {

@@ -72,7 +72,7 @@ public final class Catalogue {
      * The catalogue entry isomorphic to {@code m}, if any. Cost: one shape and, for entries of the
      * same shape, one isomorphism search each (see the class comment).
      *
-     * @throws InvalidMatroidException when {@code m} has more than 64 elements
+     * @throws InvalidMatroidException when {@code m} has more than {@link Limits#ELEMENTS} elements
      */
     public static Optional<NamedMatroid> identify(Matroid m) {
         MatroidShape shape = null;

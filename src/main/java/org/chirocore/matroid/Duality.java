@@ -57,8 +57,7 @@ public final class Duality {
                 return false;
             }
             if (primal instanceof ExplicitMatroid explicit) {
-                long ground = primal.size() == 64 ? -1L : (1L << primal.size()) - 1;
-                return explicit.isBasisMask(ground & ~ElementSets.mask(set));
+                return explicit.isBasis(ElementSet.range(primal.size()).minus(ElementSet.of(set)));
             }
             return primal.isBasis(complement(set));
         }

@@ -6,7 +6,9 @@ import java.util.StringJoiner;
 
 /**
  * Small helpers for subsets of a ground set written as strictly increasing index arrays, and
- * for the 64-bit masks used by explicit matroids. All methods are pure.
+ * for the 64-bit masks of the enumeration ({@code search.marco}, at most
+ * {@link Limits#ENUMERATED_ELEMENTS} elements); sets of any size are {@link ElementSet}s. All
+ * methods are pure.
  */
 public final class ElementSets {
     private ElementSets() {

@@ -10,31 +10,29 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * A matroid on at most 64 elements given by its list of bases. Construction checks the basis
+ * A matroid on at most {@link Limits#ELEMENTS} elements given by its list of bases. Construction checks the basis
  * axioms (non-empty family, equal sizes, basis exchange) and fails with an
  * {@link InvalidMatroidException} that names a failing item. Bases are kept in the canonical
  * order of the certificate format: sorted tuples in lexicographic order.
  *
- * <p>Rank queries cost O(|bases|); basis tests cost O(1). Immutable.
+ * <p>Bases are held as {@link ElementSet}s. Rank queries cost O(|bases|·n/64); basis tests cost
+ * one hash lookup. Immutable.
  */
 public final class ExplicitMatroid implements Matroid {
-    /** Largest ground set an explicit matroid holds: {@link Limits#ELEMENTS} (bases are 64-bit masks). */
+    /** Largest ground set an explicit matroid holds: {@link Limits#ELEMENTS}. */
     public static final int MAX_ELEMENTS = Limits.ELEMENTS;
 
     private final List<String> labels;
     private final int rank;
-    /** Bases as masks, in lexicographic order of their sorted element tuples. */
-    private final long[] bases;
-    private final Set<Long> basisSet;
+    /** The bases in lexicographic order of their sorted element tuples. */
+    private final ElementSet[] bases;
+    private final Set<ElementSet> basisSet;
 
-    private ExplicitMatroid(List<String> labels, int rank, long[] lexSortedBases) {
+    private ExplicitMatroid(List<String> labels, int rank, ElementSet[] lexSortedBases) {
         this.labels = List.copyOf(labels);
         this.rank = rank;
         this.bases = lexSortedBases;
-        this.basisSet = new HashSet<>();
-        for (long b : lexSortedBases) {
-            basisSet.add(b);
-        }
+        this.basisSet = new HashSet<>(Arrays.asList(lexSortedBases));
     }
 
     /**
@@ -50,18 +48,18 @@ public final class ExplicitMatroid implements Matroid {
             throw new TooLargeException(bases.size() + " bases are given; a matroid given by its bases has at most "
                     + Limits.EXPLICIT_SUBSETS + ".");
         }
-        Set<Long> seen = new HashSet<>();
-        List<Long> masks = new ArrayList<>();
+        Set<ElementSet> seen = new HashSet<>();
+        List<ElementSet> sets = new ArrayList<>();
         for (int[] b : bases) {
-            long m = checkedMask(labels.size(), rank, b, "basis");
+            ElementSet m = checkedSet(labels.size(), rank, b, "basis");
             if (seen.add(m)) {
-                masks.add(m);
+                sets.add(m);
             }
         }
-        if (masks.isEmpty()) {
+        if (sets.isEmpty()) {
             throw new InvalidMatroidException("The basis list is empty; a matroid has at least one basis.");
         }
-        ExplicitMatroid m = new ExplicitMatroid(labels, rank, lexSorted(masks));
+        ExplicitMatroid m = new ExplicitMatroid(labels, rank, lexSorted(sets));
         m.checkExchange();
         return m;
     }
@@ -75,15 +73,15 @@ public final class ExplicitMatroid implements Matroid {
     public static ExplicitMatroid fromNonBases(List<String> labels, int rank, Collection<int[]> nonBases) {
         checkGround(labels, rank);
         Limits.requireExplicit(labels.size(), rank, "The matroid");
-        Set<Long> excluded = new HashSet<>();
+        Set<ElementSet> excluded = new HashSet<>();
         for (int[] b : nonBases) {
-            excluded.add(checkedMask(labels.size(), rank, b, "non-basis"));
+            excluded.add(checkedSet(labels.size(), rank, b, "non-basis"));
         }
         List<int[]> bases = new ArrayList<>();
         int[] comb = ElementSets.range(rank);
         if (rank <= labels.size()) {
             do {
-                if (!excluded.contains(ElementSets.mask(comb))) {
+                if (!excluded.contains(ElementSet.of(comb))) {
                     bases.add(comb.clone());
                 }
             } while (ElementSets.nextCombination(comb, labels.size()));
@@ -92,7 +90,7 @@ public final class ExplicitMatroid implements Matroid {
     }
 
     /**
-     * Materialises any matroid on at most 64 elements by testing every {@code rank}-subset.
+     * Materialises any matroid on at most {@link Limits#ELEMENTS} elements by testing every {@code rank}-subset.
      * Costs C(size, rank) rank queries; the result is not re-checked, as a rank oracle is a
      * matroid by contract.
      */
@@ -101,14 +99,14 @@ public final class ExplicitMatroid implements Matroid {
             return e;
         }
         checkGround(m.labels(), m.rank());
-        List<Long> masks = new ArrayList<>();
+        List<ElementSet> sets = new ArrayList<>();
         int[] comb = ElementSets.range(m.rank());
         do {
             if (m.isBasis(comb)) {
-                masks.add(ElementSets.mask(comb));
+                sets.add(ElementSet.of(comb));
             }
         } while (ElementSets.nextCombination(comb, m.size()));
-        return new ExplicitMatroid(m.labels(), m.rank(), lexSorted(masks));
+        return new ExplicitMatroid(m.labels(), m.rank(), sets.toArray(ElementSet[]::new));
     }
 
     private static void checkGround(List<String> labels, int rank) {
@@ -125,31 +123,26 @@ public final class ExplicitMatroid implements Matroid {
         }
     }
 
-    private static long checkedMask(int n, int rank, int[] set, String what) {
+    private static ElementSet checkedSet(int n, int rank, int[] set, String what) {
         if (set.length != rank) {
             throw new InvalidMatroidException("The " + what + " " + Arrays.toString(set) + " has " + set.length
                     + " elements, but the rank is " + rank + ".");
         }
-        long m = 0;
         for (int e : set) {
             if (e < 0 || e >= n) {
                 throw new InvalidMatroidException("The " + what + " " + Arrays.toString(set) + " names element " + e
                         + ", outside 0.." + (n - 1) + ".");
             }
-            if ((m & (1L << e)) != 0) {
-                throw new InvalidMatroidException("The " + what + " " + Arrays.toString(set)
-                        + " repeats element " + e + ".");
-            }
-            m |= 1L << e;
+        }
+        ElementSet m = ElementSet.of(set);
+        if (m.size() != set.length) {
+            throw new InvalidMatroidException("The " + what + " " + Arrays.toString(set) + " repeats an element.");
         }
         return m;
     }
 
-    private static long[] lexSorted(List<Long> masks) {
-        return masks.stream()
-                .sorted((a, b) -> Arrays.compare(ElementSets.elements(a), ElementSets.elements(b)))
-                .mapToLong(Long::longValue)
-                .toArray();
+    private static ElementSet[] lexSorted(List<ElementSet> sets) {
+        return sets.stream().sorted(ElementSet.LEXICOGRAPHIC).toArray(ElementSet[]::new);
     }
 
     /**
@@ -161,64 +154,66 @@ public final class ExplicitMatroid implements Matroid {
      * Costs O(|bases|·r·n) lookups plus, per distinct F, the smaller of C(|F|, r) lookups and a scan.
      */
     private void checkExchange() {
-        long all = ElementSets.allMask(labels.size());
-        Set<Long> seenI = new HashSet<>();
-        Map<Long, long[]> exampleByF = new LinkedHashMap<>();
-        for (long b1 : bases) {
-            for (long xs = b1; xs != 0; xs &= xs - 1) {
-                long x = Long.lowestOneBit(xs);
-                long i = b1 & ~x;
+        ElementSet all = ElementSet.range(labels.size());
+        Set<ElementSet> seenI = new HashSet<>();
+        Map<ElementSet, Exchange> exampleByF = new LinkedHashMap<>();
+        for (ElementSet b1 : bases) {
+            for (int x : b1.elements()) {
+                ElementSet i = b1.without(x);
                 if (!seenI.add(i)) {
                     continue;
                 }
-                long k = 0;
-                for (long ys = all & ~i; ys != 0; ys &= ys - 1) {
-                    long y = Long.lowestOneBit(ys);
-                    if (basisSet.contains(i | y)) {
-                        k |= y;
+                int[] k = new int[labels.size()];
+                int count = 0;
+                for (int y = 0; y < labels.size(); y++) {
+                    if (!i.contains(y) && basisSet.contains(i.with(y))) {
+                        k[count++] = y;
                     }
                 }
-                exampleByF.putIfAbsent(all & ~k, new long[] {b1, x});
+                exampleByF.putIfAbsent(all.minus(ElementSet.of(Arrays.copyOf(k, count))), new Exchange(b1, x));
             }
         }
-        for (Map.Entry<Long, long[]> entry : exampleByF.entrySet()) {
-            long inside = basisInside(entry.getKey());
-            if (inside != 0) {
-                long b1 = entry.getValue()[0];
-                long x = entry.getValue()[1];
-                throw new InvalidMatroidException("Basis exchange fails: from basis "
-                        + Arrays.toString(ElementSets.elements(b1)) + " remove element "
-                        + Long.numberOfTrailingZeros(x) + "; no element of basis "
-                        + Arrays.toString(ElementSets.elements(inside)) + " completes it to a basis.");
+        for (Map.Entry<ElementSet, Exchange> entry : exampleByF.entrySet()) {
+            ElementSet inside = basisInside(entry.getKey());
+            if (inside != null) {
+                Exchange failing = entry.getValue();
+                throw new InvalidMatroidException("Basis exchange fails: from basis " + failing.basis()
+                        + " remove element " + failing.removed() + "; no element of basis " + inside
+                        + " completes it to a basis.");
             }
         }
     }
 
-    /** A basis contained in {@code f}, or 0 when there is none (rank ≥ 1). */
-    private long basisInside(long f) {
-        int[] elements = ElementSets.elements(f);
+    /** An exchange asked for: remove {@code removed} from {@code basis}. */
+    private record Exchange(ElementSet basis, int removed) {
+    }
+
+    /** A basis contained in {@code f}, or null when there is none (rank ≥ 1). */
+    private ElementSet basisInside(ElementSet f) {
+        int[] elements = f.elements();
         if (ElementSets.binomial(elements.length, rank) < bases.length) {
             int[] comb = ElementSets.range(rank);
             if (rank > elements.length) {
-                return 0;
+                return null;
             }
+            int[] picked = new int[rank];
             do {
-                long m = 0;
-                for (int c : comb) {
-                    m |= 1L << elements[c];
+                for (int c = 0; c < rank; c++) {
+                    picked[c] = elements[comb[c]];
                 }
+                ElementSet m = ElementSet.of(picked);
                 if (basisSet.contains(m)) {
                     return m;
                 }
             } while (ElementSets.nextCombination(comb, elements.length));
-            return 0;
+            return null;
         }
-        for (long b : bases) {
-            if ((b & ~f) == 0) {
+        for (ElementSet b : bases) {
+            if (b.isSubsetOf(f)) {
                 return b;
             }
         }
-        return 0;
+        return null;
     }
 
     @Override
@@ -233,10 +228,10 @@ public final class ExplicitMatroid implements Matroid {
 
     @Override
     public int rank(int[] set) {
-        long s = ElementSets.mask(set);
+        ElementSet s = ElementSet.of(set);
         int best = 0;
-        for (long b : bases) {
-            best = Math.max(best, Long.bitCount(b & s));
+        for (ElementSet b : bases) {
+            best = Math.max(best, b.intersectionSize(s));
             if (best == set.length) {
                 break;
             }
@@ -246,11 +241,11 @@ public final class ExplicitMatroid implements Matroid {
 
     @Override
     public boolean isBasis(int[] set) {
-        return set.length == rank && basisSet.contains(ElementSets.mask(set));
+        return set.length == rank && basisSet.contains(ElementSet.of(set));
     }
 
-    /** Whether the set given as a mask is a basis. */
-    public boolean isBasisMask(long set) {
+    /** Whether {@code set} is a basis. */
+    public boolean isBasis(ElementSet set) {
         return basisSet.contains(set);
     }
 
@@ -262,15 +257,15 @@ public final class ExplicitMatroid implements Matroid {
     /** The bases as sorted tuples, in lexicographic order (the certificate's canonical order). */
     public List<int[]> bases() {
         List<int[]> out = new ArrayList<>(bases.length);
-        for (long b : bases) {
-            out.add(ElementSets.elements(b));
+        for (ElementSet b : bases) {
+            out.add(b.elements());
         }
         return out;
     }
 
-    /** The bases as masks, in the same lexicographic order as {@link #bases()}. */
-    public long[] basisMasks() {
-        return bases.clone();
+    /** The bases as element sets, in the same lexicographic order as {@link #bases()}. */
+    public List<ElementSet> basisSets() {
+        return List.of(bases);
     }
 
     /** The same matroid with other labels (same count, distinct). */

@@ -38,7 +38,7 @@ import org.jgrapht.graph.SimpleGraph;
  * The bijection found is re-checked against the bases ({@link Isomorphism#isIsomorphism})
  * before it is returned.
  *
- * <p>Both matroids must have at most 64 elements. Stateless apart from its input; each call of
+ * <p>Both matroids must have at most {@link Limits#ELEMENTS} elements. Stateless apart from its input; each call of
  * {@link #find()} recomputes.
  */
 public final class HyperplaneIsomorphismInspector {
@@ -66,7 +66,7 @@ public final class HyperplaneIsomorphismInspector {
      * An isomorphism from the first matroid to the second, or empty when they are not
      * isomorphic.
      *
-     * @throws InvalidMatroidException when a matroid has more than 64 elements
+     * @throws InvalidMatroidException when a matroid has more than {@link Limits#ELEMENTS} elements
      * @throws IllegalStateException when the bijection read off the graph isomorphism fails the
      *     basis re-check (a defect in this class or in its input's rank oracle)
      */

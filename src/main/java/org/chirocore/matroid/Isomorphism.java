@@ -46,7 +46,7 @@ public record Isomorphism(List<Integer> image) {
      * is onto). Costs the materialisation of both matroids (C(n, r) rank queries each, none for
      * explicit matroids) plus O(|bases| · r).
      *
-     * @throws InvalidMatroidException when a matroid has more than 64 elements
+     * @throws InvalidMatroidException when a matroid has more than {@link Limits#ELEMENTS} elements
      */
     public boolean isIsomorphism(Matroid first, Matroid second) {
         if (first.size() != image.size() || second.size() != image.size() || first.rank() != second.rank()) {

@@ -16,8 +16,22 @@ public final class Limits {
      */
     public static final int CUBE_DIMENSION = 16;
 
-    /** Largest ground set whose bases are enumerated or stored (a basis is a 64-bit mask). */
-    public static final int ELEMENTS = 64;
+    /**
+     * Largest ground set of a matroid whose bases are enumerated or stored (an explicit matroid,
+     * a SAT encoding's basis index, a matroid file, a certificate's core). An {@link ElementSet}
+     * on it takes 16 words (128 bytes) instead of 1; what bounds the work is the number of
+     * r-subsets ({@link #EXPLICIT_SUBSETS}, {@link #INDEXED_SUBSETS}), which already stops rank 3
+     * at about 930 elements (C(930, 3) just under 2^27), and the relation scan, which the search
+     * bounds on its own; so larger ground sets would only be usable in rank 2.
+     */
+    public static final int ELEMENTS = 1024;
+
+    /**
+     * Largest ground set whose restrictions are enumerated ({@code search.marco}, the steered
+     * search) or whose enumeration's completeness is checked: those algorithms hold a set of
+     * elements as one 64-bit mask, and an enumeration over more elements would not finish anyway.
+     */
+    public static final int ENUMERATED_ELEMENTS = 64;
 
     /**
      * Largest C(n, r) of a matroid held as its list of bases: the r-subsets enumerated to read

@@ -29,7 +29,7 @@ public record MatroidShape(int elements, int rank, int bases, List<Integer> hype
      * The shape of {@code m}. Costs C(n, r) rank queries to count bases plus the hyperplane
      * enumeration of {@link Flats#hyperplanes} (about C(n, r − 1) rank queries).
      *
-     * @throws InvalidMatroidException when {@code m} has more than 64 elements
+     * @throws InvalidMatroidException when {@code m} has more than {@link Limits#ELEMENTS} elements
      */
     public static MatroidShape of(Matroid m) {
         return of(ExplicitMatroid.of(m), hyperplanes(m));

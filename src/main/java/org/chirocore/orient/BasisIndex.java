@@ -3,6 +3,7 @@ package org.chirocore.orient;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
@@ -13,7 +14,7 @@ import org.chirocore.matroid.Matroid;
  * of a subset's variable costs O(rank) through the colexicographic rank of the subset, which
  * indexes a table of C(size, rank) ints; building the index costs C(size, rank) basis tests.
  *
- * <p>Holds at most 64 elements and {@value #MAX_SUBSETS} candidate subsets. Immutable.
+ * <p>Holds at most {@link Limits#ELEMENTS} elements and {@value #MAX_SUBSETS} candidate subsets. Immutable.
  */
 public final class BasisIndex {
     /** Largest C(size, rank) for which the subset table is built: {@link Limits#INDEXED_SUBSETS}. */
@@ -22,7 +23,7 @@ public final class BasisIndex {
     private final List<String> labels;
     private final int size;
     private final int rank;
-    private final long[] bases;
+    private final ElementSet[] bases;
     private final int[] variableByColex;
     /** binomial[i][k] = C(i, k) for 0 ≤ i ≤ size, 0 ≤ k ≤ rank. */
     private final long[][] binomial;
@@ -35,7 +36,7 @@ public final class BasisIndex {
         if (size > Limits.ELEMENTS || subsets > MAX_SUBSETS) {
             throw new EnumerationLimitException("A matroid of rank " + rank + " on " + size + " elements has "
                     + (subsets == Long.MAX_VALUE ? "too many" : Long.toString(subsets)) + " candidate bases; at most "
-                    + MAX_SUBSETS + " on at most 64 elements are enumerated. Reduce it to a smaller minor first.");
+                    + MAX_SUBSETS + " on at most " + Limits.ELEMENTS + " elements are enumerated. Reduce it to a smaller minor first.");
         }
         this.binomial = new long[size + 1][rank + 1];
         for (int i = 0; i <= size; i++) {
@@ -45,21 +46,21 @@ public final class BasisIndex {
             }
         }
         this.variableByColex = new int[(int) subsets];
-        List<Long> found = new ArrayList<>();
+        List<ElementSet> found = new ArrayList<>();
         int[] comb = ElementSets.range(rank);
         do {
             if (m.isBasis(comb)) {
-                found.add(ElementSets.mask(comb));
+                found.add(ElementSet.of(comb));
                 variableByColex[colex(comb)] = found.size();
             }
         } while (ElementSets.nextCombination(comb, size));
-        this.bases = found.stream().mapToLong(Long::longValue).toArray();
+        this.bases = found.toArray(ElementSet[]::new);
     }
 
     /**
      * Enumerates the bases of {@code m}.
      *
-     * @throws EnumerationLimitException when {@code m} has more than 64 elements or more than
+     * @throws EnumerationLimitException when {@code m} has more than {@link Limits#ELEMENTS} elements or more than
      *     {@link #MAX_SUBSETS} candidate subsets
      */
     public static BasisIndex of(Matroid m) {
@@ -74,15 +75,39 @@ public final class BasisIndex {
         return (int) r;
     }
 
-    /** The variable (1-based) of the basis with this mask, or 0 when the set is not a basis. */
-    public int variable(long mask) {
-        if (Long.bitCount(mask) != rank) {
-            return 0;
-        }
+    /** The variable (1-based) of {@code set}, or 0 when it is not a basis. */
+    public int variable(ElementSet set) {
+        return variable(set.elements());
+    }
+
+    /**
+     * The variable (1-based) of the set with these elements in increasing order (all below
+     * {@link #size}), or 0 when it is not a basis.
+     */
+    public int variable(int[] sorted) {
+        boolean inside = sorted.length == 0 || (sorted[0] >= 0 && sorted[sorted.length - 1] < size);
+        return sorted.length == rank && inside ? variableByColex[colex(sorted)] : 0;
+    }
+
+    /**
+     * The variable of X ∪ {p, q} without building the set, for the relation scan's inner loop:
+     * {@code x} sorted, p < q outside X, |X| = rank − 2. The colexicographic rank adds C(e, i + 1)
+     * for the element e at position i; an element of X moves up one position per element of
+     * {p, q} below it.
+     */
+    int variable(int[] x, int p, int q) {
         long r = 0;
-        int i = 1;
-        for (long m = mask; m != 0; m &= m - 1) {
-            r += binomial[Long.numberOfTrailingZeros(m)][i++];
+        int below = 0;
+        for (int i = 0; i < x.length; i++) {
+            int e = x[i];
+            while (below < 2 && (below == 0 ? p : q) < e) {
+                r += binomial[below == 0 ? p : q][i + below + 1];
+                below++;
+            }
+            r += binomial[e][i + below + 1];
+        }
+        for (; below < 2; below++) {
+            r += binomial[below == 0 ? p : q][x.length + below + 1];
         }
         return variableByColex[(int) r];
     }
@@ -104,14 +129,14 @@ public final class BasisIndex {
         return bases.length;
     }
 
-    /** The basis of variable {@code v} (1-based), as a mask. */
-    public long basis(int v) {
+    /** The basis of variable {@code v} (1-based). */
+    public ElementSet basis(int v) {
         return bases[v - 1];
     }
 
-    /** All bases as masks, in lexicographic (variable) order. */
-    public long[] bases() {
-        return bases.clone();
+    /** All bases in lexicographic (variable) order. */
+    public List<ElementSet> bases() {
+        return List.of(bases);
     }
 
     /**
@@ -120,26 +145,26 @@ public final class BasisIndex {
      * lexicographic order), with their signs.
      *
      * @param signs one sign (+1 / −1) per variable, index v − 1
-     * @param active the mask of the restriction's elements; must have full rank
+     * @param active the restriction's elements; must have full rank
      */
-    public Chirotope chirotope(byte[] signs, long active) {
-        int[] kept = ElementSets.elements(active);
+    public Chirotope chirotope(byte[] signs, ElementSet active) {
+        int[] kept = active.elements();
         int[] newIndex = new int[size];
         List<String> names = new ArrayList<>();
         for (int i = 0; i < kept.length; i++) {
             newIndex[kept[i]] = i;
             names.add(labels.get(kept[i]));
         }
-        List<Long> outBases = new ArrayList<>();
+        List<ElementSet> outBases = new ArrayList<>();
         List<Byte> outSigns = new ArrayList<>();
         for (int v = 1; v <= bases.length; v++) {
-            long b = bases[v - 1];
-            if ((b & ~active) == 0) {
-                long renumbered = 0;
-                for (long m = b; m != 0; m &= m - 1) {
-                    renumbered |= 1L << newIndex[Long.numberOfTrailingZeros(m)];
+            ElementSet b = bases[v - 1];
+            if (b.isSubsetOf(active)) {
+                int[] renumbered = b.elements();
+                for (int i = 0; i < renumbered.length; i++) {
+                    renumbered[i] = newIndex[renumbered[i]];
                 }
-                outBases.add(renumbered);
+                outBases.add(ElementSet.of(renumbered));
                 outSigns.add(signs[v - 1]);
             }
         }
@@ -147,6 +172,6 @@ public final class BasisIndex {
         for (int i = 0; i < s.length; i++) {
             s[i] = outSigns.get(i);
         }
-        return new Chirotope(names, rank, outBases.stream().mapToLong(Long::longValue).toArray(), s);
+        return new Chirotope(names, rank, outBases, s);
     }
 }

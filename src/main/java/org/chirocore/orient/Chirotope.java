@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 
 /**
  * A sign assignment on the bases of a matroid: one sign (+1 or −1) for every basis, listed in
@@ -15,16 +15,16 @@ import org.chirocore.matroid.ElementSets;
 public final class Chirotope {
     private final List<String> labels;
     private final int rank;
-    private final long[] bases;
+    private final List<ElementSet> bases;
     private final byte[] signs;
 
     /**
-     * @param bases the bases as masks in canonical order
+     * @param bases the bases in canonical order
      * @param signs one sign (+1 or −1) per basis, in the same order
      */
-    public Chirotope(List<String> labels, int rank, long[] bases, byte[] signs) {
-        if (bases.length != signs.length) {
-            throw new IllegalArgumentException("A chirotope needs one sign per basis: " + bases.length + " bases, "
+    public Chirotope(List<String> labels, int rank, List<ElementSet> bases, byte[] signs) {
+        if (bases.size() != signs.length) {
+            throw new IllegalArgumentException("A chirotope needs one sign per basis: " + bases.size() + " bases, "
                     + signs.length + " signs.");
         }
         for (byte s : signs) {
@@ -34,7 +34,7 @@ public final class Chirotope {
         }
         this.labels = List.copyOf(labels);
         this.rank = rank;
-        this.bases = bases.clone();
+        this.bases = List.copyOf(bases);
         this.signs = signs.clone();
     }
 
@@ -48,12 +48,12 @@ public final class Chirotope {
 
     /** The number of bases (and signs). */
     public int size() {
-        return bases.length;
+        return bases.size();
     }
 
-    /** Basis {@code i} in canonical order, as a mask. */
-    public long basis(int i) {
-        return bases[i];
+    /** Basis {@code i} in canonical order. */
+    public ElementSet basis(int i) {
+        return bases.get(i);
     }
 
     /** The sign of basis {@code i}. */
@@ -63,9 +63,9 @@ public final class Chirotope {
 
     /** The bases in canonical order, as sorted tuples. */
     public List<int[]> bases() {
-        List<int[]> out = new ArrayList<>(bases.length);
-        for (long b : bases) {
-            out.add(ElementSets.elements(b));
+        List<int[]> out = new ArrayList<>(bases.size());
+        for (ElementSet b : bases) {
+            out.add(b.elements());
         }
         return out;
     }
@@ -77,12 +77,12 @@ public final class Chirotope {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Chirotope c && c.rank == rank && c.labels.equals(labels) && Arrays.equals(c.bases, bases)
+        return o instanceof Chirotope c && c.rank == rank && c.labels.equals(labels) && c.bases.equals(bases)
                 && Arrays.equals(c.signs, signs);
     }
 
     @Override
     public int hashCode() {
-        return Arrays.hashCode(signs) * 31 + Arrays.hashCode(bases);
+        return Arrays.hashCode(signs) * 31 + bases.hashCode();
     }
 }

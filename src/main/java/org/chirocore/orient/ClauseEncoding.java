@@ -3,6 +3,8 @@ package org.chirocore.orient;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.chirocore.matroid.ElementSet;
+
 /**
  * The clauses of a 3-term Grassmann–Plücker relation under the certificate encoding: variable v
  * true means χ(basis v) = +1; no auxiliary variables. A term s·χ(B1)·χ(B2) is +1 exactly when the
@@ -92,7 +94,8 @@ public final class ClauseEncoding {
      * a term whose two sets are not both bases is left out. Costs O(rank) per set.
      */
     public static List<Term> terms(BasisIndex index, GpRelation relation) {
-        long x = relation.x();
+        ElementSet x = relation.x();
+        int[] xs = x.elements();
         int[][] pairs = {
             {relation.a(), relation.b()}, {relation.c(), relation.d()},
             {relation.a(), relation.c()}, {relation.b(), relation.d()},
@@ -103,8 +106,8 @@ public final class ClauseEncoding {
         for (int t = 0; t < 3; t++) {
             int[] p = pairs[2 * t];
             int[] q = pairs[2 * t + 1];
-            int v1 = index.variable(x | (1L << p[0]) | (1L << p[1]));
-            int v2 = index.variable(x | (1L << q[0]) | (1L << q[1]));
+            int v1 = index.variable(xs, p[0], p[1]);
+            int v2 = index.variable(xs, q[0], q[1]);
             if (v1 != 0 && v2 != 0) {
                 out.add(new Term(termSign[t] * permutationSign(x, p[0], p[1]) * permutationSign(x, q[0], q[1]), v1, v2));
             }
@@ -143,12 +146,7 @@ public final class ClauseEncoding {
      * The sign of the permutation sorting the tuple (x, p, q), x the sorted tuple of X and p < q
      * outside X: moving p, then q, into place passes every element of X above each of them.
      */
-    static int permutationSign(long x, int p, int q) {
-        return ((above(x, p) + above(x, q)) & 1) == 0 ? 1 : -1;
-    }
-
-    /** The number of elements of X greater than {@code e}. */
-    static int above(long x, int e) {
-        return Long.bitCount(x >>> e >>> 1);
+    static int permutationSign(ElementSet x, int p, int q) {
+        return ((x.countAbove(p) + x.countAbove(q)) & 1) == 0 ? 1 : -1;
     }
 }

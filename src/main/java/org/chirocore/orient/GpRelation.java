@@ -1,8 +1,6 @@
 package org.chirocore.orient;
 
-import java.util.Arrays;
-
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 
 /**
  * A 3-term Grassmann–Plücker relation (X; a, b, c, d) of a rank-r chirotope: X an (r−2)-set and
@@ -11,27 +9,26 @@ import org.chirocore.matroid.ElementSets;
  * include both +1 and −1 ([BLSWZ, §3.5–3.6]). Sorting a, b, c, d loses nothing: permuting them
  * permutes the terms up to a common sign (common practice).
  *
- * @param x the mask of X
+ * @param x the set X
  */
-public record GpRelation(long x, int a, int b, int c, int d) {
+public record GpRelation(ElementSet x, int a, int b, int c, int d) {
     public GpRelation {
         if (!(a < b && b < c && c < d)) {
             throw new IllegalArgumentException("A relation needs a < b < c < d, got " + a + ", " + b + ", " + c + ", "
                     + d + ".");
         }
-        long abcd = (1L << a) | (1L << b) | (1L << c) | (1L << d);
-        if ((x & abcd) != 0) {
+        if (x.contains(a) || x.contains(b) || x.contains(c) || x.contains(d)) {
             throw new IllegalArgumentException("The elements a, b, c, d of a relation must lie outside X.");
         }
     }
 
-    /** The mask of all elements the relation mentions, X ∪ {a, b, c, d}. */
-    public long support() {
-        return x | (1L << a) | (1L << b) | (1L << c) | (1L << d);
+    /** All elements the relation mentions, X ∪ {a, b, c, d}. */
+    public ElementSet support() {
+        return x.union(ElementSet.of(a, b, c, d));
     }
 
     @Override
     public String toString() {
-        return "(X=" + Arrays.toString(ElementSets.elements(x)) + "; " + a + ", " + b + ", " + c + ", " + d + ")";
+        return "(X=" + x + "; " + a + ", " + b + ", " + c + ", " + d + ")";
     }
 }

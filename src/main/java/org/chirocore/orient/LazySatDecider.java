@@ -1,6 +1,6 @@
 package org.chirocore.orient;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.Matroid;
 
 /**
@@ -20,7 +20,7 @@ public final class LazySatDecider implements OrientabilityDecider {
     public Orientability decide(Matroid m) {
         BasisIndex index = BasisIndex.of(m);
         OrientationSession session = new OrientationSession(index, false, budget);
-        long all = ElementSets.allMask(m.size());
+        ElementSet all = ElementSet.range(m.size());
         OrientationSession.Outcome outcome = session.solve(all);
         SolveStats stats = session.stats();
         if (outcome instanceof OrientationSession.Satisfiable s) {

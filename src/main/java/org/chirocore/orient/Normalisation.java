@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
 
+import org.chirocore.matroid.ElementSet;
+
 /**
  * The bases whose sign may be fixed to +1 without loss of generality: reorienting a set A
  * multiplies χ(B) by (−1)^{|A∩B|} and −χ is a chirotope too, so any sign pattern on a family S
@@ -22,14 +24,14 @@ public final class Normalisation {
         if (index.basisCount() == 0) {
             return new int[0];
         }
-        long b0 = index.basis(1);
+        ElementSet b0 = index.basis(1);
         out.add(1);
         for (int e = 0; e < index.size(); e++) {
-            if ((b0 & (1L << e)) != 0) {
+            if (b0.contains(e)) {
                 continue;
             }
-            for (long fs = b0; fs != 0; fs &= fs - 1) {
-                int v = index.variable((b0 & ~Long.lowestOneBit(fs)) | (1L << e));
+            for (int f : b0.elements()) {
+                int v = index.variable(b0.without(f).with(e));
                 if (v != 0) {
                     out.add(v);
                     break;
@@ -46,13 +48,14 @@ public final class Normalisation {
     /** Whether the vectors (1, 1_B) for the given variables' bases are linearly independent over GF(2). */
     public static boolean independentOverGf2(BasisIndex index, int[] variables) {
         List<BitSet> rows = new ArrayList<>();
+        int n = index.size();
         for (int v : variables) {
-            BitSet row = BitSet.valueOf(new long[] {index.basis(v)});
-            row.set(64);
+            BitSet row = index.basis(v).toBitSet();
+            row.set(n);
             rows.add(row);
         }
         int rank = 0;
-        for (int bit = 0; bit <= 64 && rank < rows.size(); bit++) {
+        for (int bit = 0; bit <= n && rank < rows.size(); bit++) {
             int pivot = -1;
             for (int i = rank; i < rows.size(); i++) {
                 if (rows.get(i).get(bit)) {

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 
 import org.sat4j.core.VecInt;
 import org.sat4j.minisat.SolverFactory;
@@ -48,7 +48,7 @@ public final class OrientationSession {
      * No chirotope: the active elements in {@code needed} already admit none (with selectors;
      * without, {@code needed} is the whole active set).
      */
-    public record Unsatisfiable(long needed) implements Outcome {
+    public record Unsatisfiable(ElementSet needed) implements Outcome {
     }
 
     /** The budget ran out. */
@@ -127,7 +127,7 @@ public final class OrientationSession {
             added.add(relation);
         }
         relations++;
-        int[] guard = selectors ? ElementSets.elements(relation.support()) : new int[0];
+        int[] guard = selectors ? relation.support().elements() : new int[0];
         for (int[] c : ClauseEncoding.clauses(index, relation)) {
             int[] clause = Arrays.copyOf(c, c.length + guard.length);
             for (int i = 0; i < guard.length; i++) {
@@ -141,14 +141,13 @@ public final class OrientationSession {
      * Looks for a chirotope of the restriction to {@code active}, which must have full rank (all
      * elements when the session has no selectors).
      */
-    public Outcome solve(long active) {
-        long all = ElementSets.allMask(index.size());
-        if (!selectors && active != all) {
+    public Outcome solve(ElementSet active) {
+        if (!selectors && !active.equals(ElementSet.range(index.size()))) {
             throw new IllegalArgumentException("A session without selectors decides the whole matroid only.");
         }
         IVecInt assumptions = new VecInt();
         if (selectors) {
-            for (int e : ElementSets.elements(active)) {
+            for (int e : active.elements()) {
                 assumptions.push(selector(e));
             }
         }
@@ -195,15 +194,13 @@ public final class OrientationSession {
         return c instanceof Number n ? n.longValue() : 0;
     }
 
-    private long neededElements() {
+    private ElementSet neededElements() {
         IVecInt explanation = solver.unsatExplanation();
-        long needed = 0;
-        if (explanation != null) {
-            for (int i = 0; i < explanation.size(); i++) {
-                needed |= 1L << (Math.abs(explanation.get(i)) - index.basisCount() - 1);
-            }
+        int[] needed = new int[explanation == null ? 0 : explanation.size()];
+        for (int i = 0; i < needed.length; i++) {
+            needed[i] = Math.abs(explanation.get(i)) - index.basisCount() - 1;
         }
-        return needed;
+        return ElementSet.of(needed);
     }
 
     private byte[] signsOfModel() {

@@ -1,9 +1,13 @@
 package org.chirocore.orient;
 
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Realisation;
 
@@ -77,35 +81,32 @@ public final class RealisationCheck {
      * The determinant signs of a realisation as a chirotope (one sign per basis, canonical order):
      * the witness in sign form, for files that want it.
      *
-     * @throws EnumerationLimitException over {@link #MAX_SUBSETS} subsets or 64 elements
+     * @throws EnumerationLimitException over {@link #MAX_SUBSETS} subsets or {@link Limits#ELEMENTS} elements
      */
     public static Chirotope chirotope(Realisation witness) {
         requireEnumerable(witness.size(), witness.rank());
-        long[][] bases = {new long[1024]};
+        List<ElementSet> bases = new ArrayList<>();
         byte[][] signs = {new byte[1024]};
-        int[] count = new int[1];
         witness.forEachSign((subset, sign) -> {
             if (sign != 0) {
-                if (count[0] == bases[0].length) {
-                    bases[0] = Arrays.copyOf(bases[0], 2 * count[0]);
-                    signs[0] = Arrays.copyOf(signs[0], 2 * count[0]);
+                if (bases.size() == signs[0].length) {
+                    signs[0] = Arrays.copyOf(signs[0], 2 * bases.size());
                 }
-                bases[0][count[0]] = ElementSets.mask(subset);
-                signs[0][count[0]++] = (byte) sign;
+                signs[0][bases.size()] = (byte) sign;
+                bases.add(ElementSet.of(subset));
             }
             return true;
         });
-        return new Chirotope(witness.labels(), witness.rank(), Arrays.copyOf(bases[0], count[0]),
-                Arrays.copyOf(signs[0], count[0]));
+        return new Chirotope(witness.labels(), witness.rank(), bases, Arrays.copyOf(signs[0], bases.size()));
     }
 
     private static void requireEnumerable(int size, int rank) {
         long subsets = ElementSets.binomial(size, rank);
-        if (subsets > MAX_SUBSETS || size > 64) {
+        if (subsets > MAX_SUBSETS || size > Limits.ELEMENTS) {
             throw new EnumerationLimitException("A realisation of rank " + rank + " on " + size + " elements has "
                     + (subsets == Long.MAX_VALUE ? "too many" : String.format("%,d", subsets)) + " " + rank
                     + "-subsets; checking it enumerates every one, and at most " + String.format("%,d", MAX_SUBSETS)
-                    + " on at most 64 elements are enumerated.");
+                    + " on at most " + Limits.ELEMENTS + " elements are enumerated.");
         }
     }
 }

@@ -2,7 +2,7 @@ package org.chirocore.orient;
 
 import java.util.Arrays;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.Matroid;
 
 /**
@@ -45,7 +45,7 @@ public final class RefutationSearch {
         BasisIndex index = BasisIndex.of(m);
         DratLog log = new DratLog();
         OrientationSession session = new OrientationSession(index, budget, log);
-        long all = ElementSets.allMask(m.size());
+        ElementSet all = ElementSet.range(m.size());
         OrientationSession.Outcome outcome = session.solve(all);
         if (outcome instanceof OrientationSession.Satisfiable s) {
             return new Orientable(WitnessCheck.checked(m, index.chirotope(s.signs(), all)));

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 
 /**
@@ -36,9 +37,9 @@ final class RelationScan {
      *
      * @param signs one sign per variable, index v − 1
      */
-    List<GpRelation> violated(byte[] signs, long active, int limit, int perX) {
+    List<GpRelation> violated(byte[] signs, ElementSet active, int limit, int perX) {
         List<GpRelation> out = new ArrayList<>();
-        int[] elements = ElementSets.elements(active);
+        int[] elements = active.elements();
         int n = elements.length;
         int k = rank - 2;
         if (k < 0 || n < rank + 2) {
@@ -46,10 +47,10 @@ final class RelationScan {
         }
         ensureTables(n);
         int[] comb = ElementSets.range(k);
+        int[] x = new int[k];
         do {
-            long x = 0;
-            for (int i : comb) {
-                x |= 1L << elements[i];
+            for (int i = 0; i < k; i++) {
+                x[i] = elements[comb[i]];
             }
             int m = tabulate(signs, x, elements);
             if (m >= 4) {
@@ -93,7 +94,7 @@ final class RelationScan {
         long total = 0;
         int[] comb = ElementSets.range(k);
         do {
-            int m = tabulate(signs, ElementSets.mask(comb), elements);
+            int m = tabulate(signs, comb, elements);
             total += tallyX(m, involved, violated);
         } while (ElementSets.nextCombination(comb, n));
         return total;
@@ -141,25 +142,27 @@ final class RelationScan {
         violated[variable - 1] += bad;
     }
     /**
-     * Fills {@code table[i][j]} = χ(x, rest[i], rest[j]) for the elements outside X that are not
-     * loops of M/X, and returns how many there are.
+     * Fills {@code table[i][j]} = χ(x, rest[i], rest[j]) for the elements outside X (sorted
+     * {@code x}, a subset of the sorted {@code elements}) that are not loops of M/X, and returns
+     * how many there are.
      */
-    private int tabulate(byte[] signs, long x, int[] elements) {
-        int m = 0;
-        for (int e : elements) {
-            if ((x & (1L << e)) == 0) {
-                rest[m++] = e;
-            }
-        }
+    private int tabulate(byte[] signs, int[] x, int[] elements) {
         // parity[i]: parity of the number of elements of X above rest[i]; moving p then q behind
         // the sorted x costs that many transpositions each.
-        for (int i = 0; i < m; i++) {
-            parity[i] = ClauseEncoding.above(x, rest[i]) & 1;
+        int m = 0;
+        int inX = 0;
+        for (int e : elements) {
+            if (inX < x.length && x[inX] == e) {
+                inX++;
+            } else {
+                parity[m] = (x.length - inX) & 1;
+                rest[m++] = e;
+            }
         }
         for (int i = 0; i < m; i++) {
             table[i][i] = 0;
             for (int j = i + 1; j < m; j++) {
-                int v = index.variable(x | (1L << rest[i]) | (1L << rest[j]));
+                int v = index.variable(x, rest[i], rest[j]);
                 int value = v == 0 ? 0 : ((parity[i] ^ parity[j]) == 0 ? signs[v - 1] : -signs[v - 1]);
                 table[i][j] = value;
                 table[j][i] = -value;
@@ -194,8 +197,9 @@ final class RelationScan {
     }
 
     /** Scans the 4-subsets of rest[0..m) until {@code out} holds {@code limit} relations. */
-    private void scan(long x, int m, List<GpRelation> out, int limit) {
+    private void scan(int[] x, int m, List<GpRelation> out, int limit) {
         int[][] t = table;
+        ElementSet xSet = null;
         for (int a = 0; a < m; a++) {
             int[] ta = t[a];
             for (int b = a + 1; b < m; b++) {
@@ -212,7 +216,8 @@ final class RelationScan {
                         int pos = (t1 > 0 ? 1 : 0) + (t2 > 0 ? 1 : 0) + (t3 > 0 ? 1 : 0);
                         int neg = (t1 < 0 ? 1 : 0) + (t2 < 0 ? 1 : 0) + (t3 < 0 ? 1 : 0);
                         if ((pos == 0) != (neg == 0)) {
-                            out.add(new GpRelation(x, rest[a], rest[b], rest[c], rest[d]));
+                            xSet = xSet == null ? ElementSet.of(x) : xSet;
+                            out.add(new GpRelation(xSet, rest[a], rest[b], rest[c], rest[d]));
                             if (out.size() >= limit) {
                                 return;
                             }

@@ -2,7 +2,7 @@ package org.chirocore.orient;
 
 import java.util.Arrays;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Realisation;
 
@@ -45,7 +45,7 @@ public final class RepairingDecider implements OrientabilityDecider {
             byte[] signs = new byte[index.basisCount()];
             Arrays.fill(signs, (byte) 1);
             r.forEachSign((subset, sign) -> {
-                int v = index.variable(ElementSets.mask(subset));
+                int v = index.variable(subset);
                 if (v != 0 && sign != 0) {
                     signs[v - 1] = (byte) sign;
                 }
@@ -62,7 +62,7 @@ public final class RepairingDecider implements OrientabilityDecider {
         LocalRepair.Outcome repaired = LocalRepair.repair(index, start.signs(index));
         if (repaired.signs().isPresent()) {
             Chirotope witness = WitnessCheck.checked(m,
-                    index.chirotope(repaired.signs().get(), ElementSets.allMask(m.size())));
+                    index.chirotope(repaired.signs().get(), ElementSet.range(m.size())));
             return new Orientability.Orientable(witness, new SolveStats(index.basisCount(), 0, 0, repaired.passes(), 0,
                     System.currentTimeMillis() - started));
         }

@@ -1,9 +1,10 @@
 package org.chirocore.orient;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 
 import org.sat4j.core.VecInt;
 import org.sat4j.minisat.SolverFactory;
@@ -12,8 +13,7 @@ import org.sat4j.specs.ISolver;
 import org.sat4j.specs.TimeoutException;
 
 /**
- * The map of a MARCO-style enumeration: the subsets of a ground set of at most 64 elements that
- * are still unexplored, kept as a CNF over one variable per element (true = the element is in
+ * The map of a MARCO-style enumeration: the subsets of a ground set that are still unexplored, kept as a CNF over one variable per element (true = the element is in
  * the subset). Exploring a set T whose subsets are all known (T orientable) adds the clause "some
  * element outside T"; exploring a set U whose supersets are all known (U non-orientable) adds
  * "some element of U is missing". A seed is any model, extended greedily to a maximal one (adding
@@ -28,8 +28,8 @@ public final class UnexploredSubsets {
     public sealed interface Next {
     }
 
-    /** An unexplored set, maximal among the unexplored ones, as a mask. */
-    public record Seed(long set) implements Next {
+    /** An unexplored set, maximal among the unexplored ones. */
+    public record Seed(ElementSet set) implements Next {
     }
 
     /** Every subset allowed by the map has been explored. */
@@ -41,9 +41,9 @@ public final class UnexploredSubsets {
     }
 
     private final int size;
-    private final long allowed;
+    private final ElementSet allowed;
     private final ISolver solver;
-    private final List<Long> supersetsBlocked = new ArrayList<>();
+    private final List<ElementSet> supersetsBlocked = new ArrayList<>();
     private boolean contradiction;
     private int calls;
     /** The largest size a seed may have (the ground set's size until {@link #limitSize} lowers it). */
@@ -52,25 +52,25 @@ public final class UnexploredSubsets {
     /**
      * A map of the subsets T of {0, …, size − 1} with {@code required} ⊆ T ⊆ {@code allowed}.
      *
-     * @throws IllegalArgumentException when size is outside 0..64 or required is not inside allowed
+     * @throws IllegalArgumentException when size is negative or required is not inside allowed
      */
-    public UnexploredSubsets(int size, long allowed, long required) {
-        if (size < 0 || size > 64) {
-            throw new IllegalArgumentException("A subset map holds 0 to 64 elements, not " + size + ".");
+    public UnexploredSubsets(int size, ElementSet allowed, ElementSet required) {
+        if (size < 0) {
+            throw new IllegalArgumentException("A subset map needs a size of at least 0, not " + size + ".");
         }
-        if ((required & ~allowed) != 0) {
-            throw new IllegalArgumentException("The required elements " + Long.toBinaryString(required)
-                    + " are not all allowed (" + Long.toBinaryString(allowed) + ").");
+        if (!required.isSubsetOf(allowed)) {
+            throw new IllegalArgumentException("The required elements " + required + " are not all allowed ("
+                    + allowed + ").");
         }
         this.size = size;
-        this.allowed = allowed & ElementSets.allMask(size);
+        this.allowed = allowed.intersection(ElementSet.range(size));
         this.cap = size;
         this.solver = SolverFactory.newDefault();
         solver.newVar(Math.max(size, 1));
         for (int e = 0; e < size; e++) {
-            if ((this.allowed & (1L << e)) == 0) {
+            if (!this.allowed.contains(e)) {
                 add(new int[] {-(e + 1)});
-            } else if ((required & (1L << e)) != 0) {
+            } else if (required.contains(e)) {
                 add(new int[] {e + 1});
             }
         }
@@ -92,12 +92,12 @@ public final class UnexploredSubsets {
     }
 
     /** Marks every subset of {@code set} explored. */
-    public void blockSubsets(long set) {
-        add(literals(allowed & ~set, 1));
+    public void blockSubsets(ElementSet set) {
+        add(literals(allowed.minus(set), 1));
     }
 
     /** Marks every superset of {@code set} explored. */
-    public void blockSupersets(long set) {
+    public void blockSupersets(ElementSet set) {
         supersetsBlocked.add(set);
         add(literals(set, -1));
     }
@@ -119,8 +119,8 @@ public final class UnexploredSubsets {
         }
     }
 
-    private static int[] literals(long set, int sign) {
-        int[] elements = ElementSets.elements(set);
+    private static int[] literals(ElementSet set, int sign) {
+        int[] elements = set.elements();
         int[] clause = new int[elements.length];
         for (int i = 0; i < elements.length; i++) {
             clause[i] = sign * (elements[i] + 1);
@@ -153,24 +153,29 @@ public final class UnexploredSubsets {
         } catch (TimeoutException e) {
             return new OutOfBudget("the map of unexplored sets could not be solved within the budget");
         }
-        long set = 0;
+        int[] model = new int[size];
+        int count = 0;
         for (int e = 0; e < size; e++) {
             if (solver.model(e + 1)) {
-                set |= 1L << e;
+                model[count++] = e;
             }
         }
+        ElementSet set = ElementSet.of(Arrays.copyOf(model, count));
         for (int e : order) {
-            long bigger = set | (1L << e);
-            if ((allowed & (1L << e)) != 0 && bigger != set && Long.bitCount(bigger) <= cap && !containsBlocked(bigger)) {
-                set = bigger;
+            if (allowed.contains(e) && !set.contains(e) && count < cap) {
+                ElementSet bigger = set.with(e);
+                if (!containsBlocked(bigger)) {
+                    set = bigger;
+                    count++;
+                }
             }
         }
         return new Seed(set);
     }
 
-    private boolean containsBlocked(long set) {
-        for (long u : supersetsBlocked) {
-            if ((u & ~set) == 0) {
+    private boolean containsBlocked(ElementSet set) {
+        for (ElementSet u : supersetsBlocked) {
+            if (u.isSubsetOf(set)) {
                 return true;
             }
         }

@@ -1,10 +1,9 @@
 package org.chirocore.orient;
 
-import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.Matroid;
 
 /**
@@ -31,14 +30,13 @@ public final class WitnessCheck {
         }
         byte[] signs = new byte[index.basisCount()];
         for (int i = 0; i < witness.size(); i++) {
-            if (witness.basis(i) != index.basis(i + 1)) {
-                return Optional.of("Signed set " + Arrays.toString(ElementSets.elements(witness.basis(i)))
-                        + " is not basis number " + (i + 1) + " in canonical order, "
-                        + Arrays.toString(ElementSets.elements(index.basis(i + 1))) + ".");
+            if (!witness.basis(i).equals(index.basis(i + 1))) {
+                return Optional.of("Signed set " + witness.basis(i) + " is not basis number " + (i + 1)
+                        + " in canonical order, " + index.basis(i + 1) + ".");
             }
             signs[i] = (byte) witness.sign(i);
         }
-        long all = ElementSets.allMask(m.size());
+        ElementSet all = ElementSet.range(m.size());
         List<GpRelation> violated = new RelationScan(index).violated(signs, all, 1, 1);
         return violated.isEmpty() ? Optional.empty()
                 : Optional.of("The signs violate the 3-term Grassmann-Pluecker relation " + violated.get(0) + ".");

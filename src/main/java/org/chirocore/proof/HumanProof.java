@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.ClauseEncoding;
@@ -49,8 +50,8 @@ public final class HumanProof {
         }
         int[] xs = ElementSets.range(k);
         do {
-            long x = ElementSets.mask(xs);
-            int[] rest = ElementSets.elements(ElementSets.allMask(n) & ~x);
+            ElementSet x = ElementSet.of(xs);
+            int[] rest = ElementSet.range(n).minus(x).elements();
             int[] q = ElementSets.range(4);
             do {
                 GpRelation r = new GpRelation(x, rest[q[0]], rest[q[1]], rest[q[2]], rest[q[3]]);

@@ -5,7 +5,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.stream.Collectors;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.ClauseEncoding;
 import org.chirocore.orient.ClauseEncoding.Term;
@@ -77,7 +77,7 @@ final class ProofText {
 
     /** "Relation (X; a, b, c, d): <its statement>". */
     private String relation(GpRelation r, List<Term> terms) {
-        String name = "Relation (" + labels(r.x()) + (r.x() == 0 ? "" : "; ") + label(r.a()) + ", " + label(r.b()) + ", "
+        String name = "Relation (" + labels(r.x()) + (r.x().isEmpty() ? "" : "; ") + label(r.a()) + ", " + label(r.b()) + ", "
                 + label(r.c()) + ", " + label(r.d()) + ")";
         if (terms.size() == 2) {
             Term t = terms.get(0);
@@ -111,8 +111,8 @@ final class ProofText {
         return "χ(" + labels(index.basis(v)) + ")";
     }
 
-    private String labels(long mask) {
-        return Arrays.stream(ElementSets.elements(mask)).mapToObj(this::label).collect(Collectors.joining(","));
+    private String labels(ElementSet set) {
+        return Arrays.stream(set.elements()).mapToObj(this::label).collect(Collectors.joining(","));
     }
 
     private String label(int e) {

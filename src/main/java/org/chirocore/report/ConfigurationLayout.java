@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
+import org.chirocore.matroid.ElementSet;
+
 /**
  * Places a rank-3 configuration in the plane the way a geometer draws it: as many lines as
  * possible straight. The points get rational coordinates (homogeneous integers), found by a
@@ -153,7 +155,7 @@ final class ConfigurationLayout {
 
     private final int k;
     private final List<int[]> lines;
-    private final long[] lineMask;
+    private final ElementSet[] lineSets;
     /** lineOf[a][b]: the line through a and b, or −1. */
     private final int[][] lineOf;
     private long nodes;
@@ -166,14 +168,14 @@ final class ConfigurationLayout {
     private ConfigurationLayout(int k, List<int[]> lines) {
         this.k = k;
         this.lines = lines;
-        this.lineMask = new long[lines.size()];
+        this.lineSets = new ElementSet[lines.size()];
         this.lineOf = new int[k][k];
         for (int[] row : lineOf) {
             Arrays.fill(row, -1);
         }
         for (int l = 0; l < lines.size(); l++) {
+            lineSets[l] = ElementSet.of(lines.get(l));
             for (int a : lines.get(l)) {
-                lineMask[l] |= 1L << a;
                 for (int b : lines.get(l)) {
                     if (a != b) {
                         lineOf[a][b] = l;
@@ -220,7 +222,7 @@ final class ConfigurationLayout {
         for (int e = 0; e < k; e++) {
             boolean[] r = all.clone();
             for (int l = 0; l < n; l++) {
-                r[l] = (lineMask[l] >>> e & 1) == 0;
+                r[l] = !lineSets[l].contains(e);
             }
             out.add(r);
         }
@@ -264,7 +266,7 @@ final class ConfigurationLayout {
         }
         for (int l = 0; l < lines.size(); l++) {
             for (int e = 0; e < k; e++) {
-                if ((lineMask[l] >>> e & 1) == 0) {
+                if (!lineSets[l].contains(e)) {
                     q = Math.min(q, 2 * layout.paths().get(l).distance(p[e][0], p[e][1]));
                 }
             }
@@ -286,10 +288,10 @@ final class ConfigurationLayout {
                 long determined = 0;
                 long touching = 0;
                 for (int l = 0; l < lines.size(); l++) {
-                    if (required[l] && (lineMask[l] >>> e & 1) != 0) {
+                    if (required[l] && lineSets[l].contains(e)) {
                         int placed = 0;
                         for (int j = 0; j < i; j++) {
-                            placed += (int) (lineMask[l] >>> order[j] & 1);
+                            placed += lineSets[l].contains(order[j]) ? 1 : 0;
                         }
                         determined += placed >= 2 ? 1 : 0;
                         touching += 1;
@@ -349,12 +351,12 @@ final class ConfigurationLayout {
         List<long[]> through = new ArrayList<>();
         List<long[][]> pairs = new ArrayList<>();
         for (int l = 0; l < lines.size(); l++) {
-            if (!required[l] || (lineMask[l] >>> p & 1) == 0) {
+            if (!required[l] || !lineSets[l].contains(p)) {
                 continue;
             }
             long[] a = null;
             for (int i = 0; i < depth; i++) {
-                if ((lineMask[l] >>> order[i] & 1) != 0) {
+                if (lineSets[l].contains(order[i])) {
                     if (a == null) {
                         a = at[order[i]];
                     } else {
@@ -420,7 +422,7 @@ final class ConfigurationLayout {
         for (int i = 0; i < depth; i++) {
             for (int j = i + 1; j < depth; j++) {
                 int l = lineOf[order[i]][order[j]];
-                boolean onLine = l >= 0 && (lineMask[l] >>> p & 1) != 0;
+                boolean onLine = l >= 0 && lineSets[l].contains(p);
                 Long d = Homogeneous.detOrNull(at[order[i]], at[order[j]], q);
                 if (d == null || (onLine ? required[l] && d != 0 : d == 0)) {
                     return false;
@@ -518,7 +520,7 @@ final class ConfigurationLayout {
                 return false;
             }
             for (int e = 0; e < k; e++) {
-                if ((lineMask[l] >>> e & 1) == 0 && path.distance(p[e][0], p[e][1]) < CLEARANCE) {
+                if (!lineSets[l].contains(e) && path.distance(p[e][0], p[e][1]) < CLEARANCE) {
                     return false;
                 }
             }

@@ -3,7 +3,7 @@ package org.chirocore.search;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.BasisIndex;
@@ -47,7 +47,7 @@ public final class MinimalityDecider {
      * @param needed the elements of M − e whose relations the refutation of M\e used: M restricted
      *     to them is non-orientable as well
      */
-    public record NonOrientableDeletion(int element, long needed) implements Result {
+    public record NonOrientableDeletion(int element, ElementSet needed) implements Result {
     }
 
     /**
@@ -107,17 +107,16 @@ public final class MinimalityDecider {
         List<Operation> phases = strategy == Strategy.CONTRACT_FIRST
                 ? List.of(Operation.CONTRACTION, Operation.DELETION)
                 : List.of(Operation.DELETION, Operation.CONTRACTION);
-        long all = ElementSets.allMask(m.size());
         for (Operation op : phases) {
             for (int e : order) {
                 int[] single = {e};
-                int[] rest = ElementSets.elements(all & ~(1L << e));
+                ElementSet rest = ElementSet.range(m.size()).without(e);
                 boolean loop = m.rank(single) == 0;
-                boolean coloop = m.rank(rest) < m.rank();
+                boolean coloop = m.rank(rest.elements()) < m.rank();
                 progress.report((op == Operation.DELETION ? "deleting " : "contracting ") + m.labels().get(e),
                         m.size(), m.rank(), decisions);
                 if (op == Operation.DELETION && !coloop) {
-                    OrientationSession.Outcome o = session.solve(all & ~(1L << e));
+                    OrientationSession.Outcome o = session.solve(rest);
                     decisions++;
                     if (o instanceof OrientationSession.OutOfBudget b) {
                         return new Unknown(b.reason());
@@ -125,7 +124,7 @@ public final class MinimalityDecider {
                     if (o instanceof OrientationSession.Unsatisfiable u) {
                         return new NonOrientableDeletion(e, u.needed());
                     }
-                    Chirotope w = session.index().chirotope(((OrientationSession.Satisfiable) o).signs(), all & ~(1L << e));
+                    Chirotope w = session.index().chirotope(((OrientationSession.Satisfiable) o).signs(), rest);
                     deletion[e] = WitnessCheck.checked(new Minor(m, new int[0], single), w);
                 } else if (op == Operation.CONTRACTION && !loop) {
                     ExplicitMatroid minor = ExplicitMatroid.of(new Minor(m, single, new int[0]));

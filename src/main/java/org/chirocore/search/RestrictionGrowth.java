@@ -5,6 +5,7 @@ import java.util.Collections;
 import java.util.List;
 import java.util.Random;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Flats;
@@ -75,10 +76,10 @@ final class RestrictionGrowth {
             Minor restriction = Minor.restriction(m, s);
             BasisIndex index = BasisIndex.of(restriction);
             OrientationSession.Outcome outcome = new OrientationSession(index, true, budget)
-                    .solve(ElementSets.allMask(s.length));
+                    .solve(ElementSet.range(s.length));
             decisions++;
             if (outcome instanceof OrientationSession.Unsatisfiable u) {
-                int[] needed = ElementSets.elements(u.needed());
+                int[] needed = u.needed().elements();
                 int[] out = new int[needed.length];
                 for (int i = 0; i < needed.length; i++) {
                     out[i] = s[needed[i]];

@@ -9,8 +9,10 @@ import java.util.Optional;
 import java.util.Random;
 import java.util.Set;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
 import org.chirocore.orient.BasisIndex;
@@ -287,10 +289,10 @@ public final class SteeredSearch {
             tally.deadEnds++;
             MinimalityDecider.NonOrientableContraction c = (MinimalityDecider.NonOrientableContraction) result;
             OrientationSession.Outcome o = new OrientationSession(BasisIndex.of(c.minor()), true, budget)
-                    .solve(ElementSets.allMask(c.minor().size()));
+                    .solve(ElementSet.range(c.minor().size()));
             tally.decisions++;
             if (o instanceof OrientationSession.Unsatisfiable u) {
-                List<String> blocked = new ArrayList<>(labels(c.minor(), ElementSets.elements(u.needed())));
+                List<String> blocked = new ArrayList<>(labels(c.minor(), u.needed().elements()));
                 blocked.add(core.labels().get(c.element()));
                 explorer.exclude(ElementSets.mask(indices(space, blocked)));
             }
@@ -299,12 +301,13 @@ public final class SteeredSearch {
     }
 
     /**
-     * Whether the restrictions of {@code m} are explored directly: at most 64 elements and
+     * Whether the restrictions of {@code m} are explored directly: at most
+     * {@link Limits#ENUMERATED_ELEMENTS} elements (the enumeration's sets are 64-bit masks) and
      * {@link #EXPLORED_SUBSETS} r-subsets (the selector session's basis index; its relations are
      * generated lazily, so the scan size matters less than for a single decision).
      */
     public static boolean explorable(Matroid m) {
-        return m.size() <= ExplicitMatroid.MAX_ELEMENTS && ElementSets.binomial(m.size(), m.rank()) <= EXPLORED_SUBSETS;
+        return m.size() <= Limits.ENUMERATED_ELEMENTS && ElementSets.binomial(m.size(), m.rank()) <= EXPLORED_SUBSETS;
     }
 
     private boolean outOfTime(Tally tally) {

@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.Random;
 import java.util.Set;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -85,7 +86,7 @@ public final class UnsatCoreSearch implements CoreSearch {
         while (true) {
             progress.report("minimising", current.size(), current.rank(), run.decisions);
             OrientationSession session = new OrientationSession(BasisIndex.of(current), true, settings.budget());
-            long all = ElementSets.allMask(current.size());
+            ElementSet all = ElementSet.range(current.size());
             OrientationSession.Outcome outcome = session.solve(all);
             run.decisions++;
             if (outcome instanceof OrientationSession.OutOfBudget o) {
@@ -99,8 +100,8 @@ public final class UnsatCoreSearch implements CoreSearch {
                 return new SearchResult.Orientable(WitnessCheck.checked(current, witness));
             }
             first = false;
-            long needed = ((OrientationSession.Unsatisfiable) outcome).needed();
-            if (needed != all) {
+            ElementSet needed = ((OrientationSession.Unsatisfiable) outcome).needed();
+            if (!needed.equals(all)) {
                 current = restrict(current, needed, run);
                 continue;
             }
@@ -126,7 +127,7 @@ public final class UnsatCoreSearch implements CoreSearch {
 
     /**
      * Whether all r-subsets of {@code m} and one scan of its relations are cheap enough to do
-     * directly: at most 64 elements, {@link #DIRECT_LIMIT} r-subsets or a rank of at most 3, and
+     * directly: at most {@link ExplicitMatroid#MAX_ELEMENTS} elements, {@link #DIRECT_LIMIT} r-subsets or a rank of at most 3, and
      * at most {@link #SCAN_LIMIT} relation index combinations.
      */
     static boolean enumerable(Matroid m) {
@@ -215,13 +216,13 @@ public final class UnsatCoreSearch implements CoreSearch {
     }
 
     /** The restriction of {@code m} to the elements of {@code kept}, recording the deleted labels. */
-    private static ExplicitMatroid restrict(ExplicitMatroid m, long kept, Run run) {
+    private static ExplicitMatroid restrict(ExplicitMatroid m, ElementSet kept, Run run) {
         for (int e = 0; e < m.size(); e++) {
-            if ((kept & (1L << e)) == 0) {
+            if (!kept.contains(e)) {
                 run.deleted.add(m.labels().get(e));
             }
         }
-        ExplicitMatroid next = ExplicitMatroid.of(Minor.restriction(m, ElementSets.elements(kept)));
+        ExplicitMatroid next = ExplicitMatroid.of(Minor.restriction(m, kept.elements()));
         if (next.rank() != m.rank()) {
             throw new IllegalStateException("Deleting the elements no relation needed lowered the rank.");
         }

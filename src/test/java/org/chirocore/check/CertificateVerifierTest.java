@@ -225,8 +225,8 @@ class CertificateVerifierTest {
     @Test
     void aRelationWithExactlyOneNonZeroTermIsFoundOnANonMatroid() {
         // {01, 23} is no matroid (basis exchange fails), so a matroid core never gets here; the check still exists
-        BasisTable t = new BasisTable(4, 2, new long[] {0b0011, 0b1100});
-        assertEquals(1, Relations.nonZero(Relations.terms(t, 0, 0, 1, 2, 3)).size());
+        BasisTable t = new BasisTable(4, 2, List.of(new int[] {0, 1}, new int[] {2, 3}));
+        assertEquals(1, Relations.nonZero(Relations.terms(t, new int[0], 0, 1, 2, 3)).size());
         assertTrue(t.exchangeDefect().isPresent());
     }
 
@@ -246,7 +246,7 @@ class CertificateVerifierTest {
         // F7 (element k+1 is the binary vector of k+1) plus its line {1, 2, 3} is the relaxation of a circuit-hyperplane: a matroid (Oxley §1.5), but no longer the core
         List<Json> bases = new ArrayList<>(array(fano, "content", "core", "bases").elements());
         int at = 0;
-        while (at < bases.size() && BasisTable.lexLess(mask(bases.get(at)), 0b0111)) {
+        while (at < bases.size() && java.util.Arrays.compare(elements(bases.get(at)), new int[] {0, 1, 2}) < 0) {
             at++;
         }
         bases.add(at, ints(0, 1, 2));
@@ -255,10 +255,15 @@ class CertificateVerifierTest {
         assertRejected(r, CertificateVerifier.MINIMALITY, "signs; the minor has");
     }
 
+    static int[] elements(Json set) {
+        return ((Json.Arr) set).elements().stream().mapToInt(e -> e.asInt("e")).toArray();
+    }
+
+    /** A set of a small test core as a bit mask. */
     static long mask(Json set) {
         long m = 0;
-        for (Json e : ((Json.Arr) set).elements()) {
-            m |= 1L << e.asInt("e");
+        for (int e : elements(set)) {
+            m |= 1L << e;
         }
         return m;
     }
@@ -373,18 +378,19 @@ class CertificateVerifierTest {
     @Test
     void absurdlyLongArray() {
         List<String> labels = new ArrayList<>();
-        for (int i = 0; i < 100; i++) {
+        for (int i = 0; i < VerifierLimits.MAX_ELEMENTS + 1; i++) {
             labels.add("e" + i);
         }
         assertRejected(verify(tamper(fano, Json.Arr.ofStrings(labels), "core", "labels")), CertificateVerifier.FORMAT,
-                "core.labels has 100 elements; at most 64 are allowed");
+                "core.labels has " + labels.size() + " elements; at most " + VerifierLimits.MAX_ELEMENTS + " are allowed");
     }
 
     @Test
     void tooManyNormalisedBases() {
-        List<Json> many = java.util.Collections.nCopies(70, ints(0, 1, 2));
+        int tooMany = VerifierLimits.MAX_ELEMENTS + 2;
+        List<Json> many = java.util.Collections.nCopies(tooMany, ints(0, 1, 2));
         assertRejected(verify(tamper(fano, new Json.Arr(many), "nonOrientability", "normalised")), CertificateVerifier.FORMAT,
-                "nonOrientability.normalised has 70 entries; at most 65 are allowed");
+                "nonOrientability.normalised has " + tooMany + " entries; at most " + (VerifierLimits.MAX_ELEMENTS + 1) + " are allowed");
     }
 
     @Test

@@ -20,6 +20,8 @@ class LimitsAgreementTest {
     @Test
     void theVerifierHoldsEveryCoreTheProducerCertifies() {
         assertEquals(org.chirocore.matroid.Limits.ELEMENTS, VerifierLimits.MAX_ELEMENTS);
+        assertEquals(org.chirocore.matroid.Limits.ENUMERATED_ELEMENTS, VerifierLimits.MAX_ENUMERATED_ELEMENTS,
+                "the verifier checks the completeness of every enumeration the producer runs");
         assertTrue(VerifierLimits.MAX_CANDIDATES >= org.chirocore.matroid.Limits.EXPLICIT_SUBSETS,
                 "a core the producer holds as its bases must be rebuildable by the verifier");
         assertTrue(VerifierLimits.MAX_BASES >= org.chirocore.matroid.Limits.EXPLICIT_SUBSETS,

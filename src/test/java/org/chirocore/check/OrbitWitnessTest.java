@@ -216,13 +216,7 @@ class OrbitWitnessTest {
     }
 
     private static BasisTable table(ParsedCertificate parsed) {
-        long[] masks = new long[parsed.bases().size()];
-        for (int i = 0; i < masks.length; i++) {
-            for (int x : parsed.bases().get(i)) {
-                masks[i] |= 1L << x;
-            }
-        }
-        return new BasisTable(parsed.labels().size(), parsed.rank(), masks);
+        return new BasisTable(parsed.labels().size(), parsed.rank(), parsed.bases());
     }
 
     private static int[] values(String signs) {

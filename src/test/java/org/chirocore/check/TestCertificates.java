@@ -15,6 +15,7 @@ import org.chirocore.io.Json;
 import org.chirocore.io.MatroidFiles;
 import org.chirocore.matroid.CubeConstruction;
 import org.chirocore.matroid.ElementSets;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
@@ -101,13 +102,12 @@ final class TestCertificates {
         int r = index.rank();
         int[] x = ElementSets.range(r - 2);
         do {
-            long xm = ElementSets.mask(x);
+            ElementSet xm = ElementSet.of(x);
             for (int a = 0; a < n; a++) {
                 for (int b = a + 1; b < n; b++) {
                     for (int c = b + 1; c < n; c++) {
                         for (int d = c + 1; d < n; d++) {
-                            long abcd = 1L << a | 1L << b | 1L << c | 1L << d;
-                            if ((abcd & xm) == 0 && !ClauseEncoding.clauses(index, new GpRelation(xm, a, b, c, d)).isEmpty()) {
+                            if (ElementSet.of(a, b, c, d).intersectionSize(xm) == 0 && !ClauseEncoding.clauses(index, new GpRelation(xm, a, b, c, d)).isEmpty()) {
                                 out.add(new GpRelation(xm, a, b, c, d));
                             }
                         }
@@ -159,16 +159,16 @@ final class TestCertificates {
         int[] fixed = Normalisation.fixedVariables(index);
         List<GpRelation> relations = allRelations(index);
         List<Json> bases = new ArrayList<>();
-        for (long b : index.bases()) {
-            bases.add(Json.Arr.ofInts(ElementSets.elements(b)));
+        for (ElementSet b : index.bases()) {
+            bases.add(Json.Arr.ofInts(b.elements()));
         }
         List<Json> normalised = new ArrayList<>();
         for (int v : fixed) {
-            normalised.add(Json.Arr.ofInts(ElementSets.elements(index.basis(v))));
+            normalised.add(Json.Arr.ofInts(index.basis(v).elements()));
         }
         List<Json> rels = new ArrayList<>();
         for (GpRelation r : relations) {
-            rels.add(new Json.Arr(List.of(Json.Arr.ofInts(ElementSets.elements(r.x())), Json.Num.of(r.a()), Json.Num.of(r.b()),
+            rels.add(new Json.Arr(List.of(Json.Arr.ofInts(r.x().elements()), Json.Num.of(r.a()), Json.Num.of(r.b()),
                     Json.Num.of(r.c()), Json.Num.of(r.d()))));
         }
         String drat = proof(index.basisCount(), cnf(index, fixed, relations), solver);
@@ -197,9 +197,9 @@ final class TestCertificates {
         int[] single = {e};
         BasisIndex minor = BasisIndex.of(op == Operation.DELETION ? new Minor(core, new int[0], single) : new Minor(core, single, new int[0]));
         StringBuilder s = new StringBuilder();
-        for (long b : minor.bases()) {
+        for (ElementSet b : minor.bases()) {
             int i = 0;
-            while (chi.basis(i) != b) {
+            while (!chi.basis(i).equals(b)) {
                 i++;
             }
             s.append(chi.sign(i) > 0 ? '+' : '-');

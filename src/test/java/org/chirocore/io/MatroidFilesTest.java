@@ -142,8 +142,8 @@ class MatroidFilesTest {
         "`{\"rank\": 2, \"labels\": [\"a\", 7], \"bases\": [[0, 1]]}`|f7.json: labels[1] must be a string, found 7",
         "`{\"rank\": 4, \"elements\": 3, \"bases\": [[0, 1, 2, 3]]}`|"
             + "f7.json: field \"rank\" is 4, but there are only 3 elements",
-        "`{\"rank\": 1, \"elements\": 65, \"bases\": [[0]]}`|"
-            + "f7.json: a matroid given by \"bases\" has at most 64 elements, but there are 65",
+        "`{\"rank\": 1, \"elements\": 1025, \"bases\": [[0]]}`|"
+            + "f7.json: a matroid given by \"bases\" has at most 1024 elements, but there are 1025",
         // bases
         "`{\"rank\": 3, \"elements\": 7, \"bases\": [[0,1,2],[0,1,3],[0,1,4],[0,1,9]]}`|"
             + "f7.json: bases[3] names element 9, but there are only 7 elements (0..6)",

@@ -18,7 +18,7 @@ class ResultJsonTest {
     /** U(2,3): bases 01, 02, 12 in canonical order. */
     private static final ExplicitMatroid U23 = ExplicitMatroid.fromBases(List.of("a", "b", "c"), 2,
             List.of(new int[] {0, 1}, new int[] {0, 2}, new int[] {1, 2}));
-    private static final Chirotope CHI = new Chirotope(U23.labels(), 2, U23.basisMasks(), new byte[] {1, -1, 1});
+    private static final Chirotope CHI = new Chirotope(U23.labels(), 2, U23.basisSets(), new byte[] {1, -1, 1});
     private static final SolveStats STATS = new SolveStats(3, 0, 0, 1, 0, 5);
 
     @Test
@@ -52,7 +52,7 @@ class ResultJsonTest {
 
     @Test
     void witnessMustBelongToTheMatroid() {
-        Chirotope other = new Chirotope(List.of("x", "y", "z"), 2, U23.basisMasks(), new byte[] {1, 1, 1});
+        Chirotope other = new Chirotope(List.of("x", "y", "z"), 2, U23.basisSets(), new byte[] {1, 1, 1});
         assertThrows(IllegalArgumentException.class,
                 () -> ResultJson.orientability(U23, new Orientability.Orientable(other, STATS)));
     }

@@ -17,7 +17,10 @@ class LimitsTest {
         TooLargeException six = assertThrows(TooLargeException.class,
                 () -> Limits.requireExplicit(63, 6, "the 6-cube's construction"));
         assertTrue(six.getMessage().contains("67945521 6-element subsets"), six.getMessage());
-        assertThrows(TooLargeException.class, () -> Limits.requireExplicit(65, 2, "a matroid"));
+        assertDoesNotThrow(() -> Limits.requireExplicit(65, 2, "a matroid beyond one 64-bit word"));
+        TooLargeException wide = assertThrows(TooLargeException.class,
+                () -> Limits.requireExplicit(Limits.ELEMENTS + 1, 2, "a matroid"));
+        assertTrue(wide.getMessage().contains("has at most " + Limits.ELEMENTS), wide.getMessage());
     }
 
     @Test

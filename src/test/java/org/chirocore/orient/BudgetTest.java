@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 
 import org.chirocore.fixtures.NamedMatroids;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.junit.jupiter.api.Test;
 
@@ -30,12 +31,12 @@ class BudgetTest {
     @Test
     void aPassedDeadlineAnswersOutOfBudget() {
         BasisIndex index = BasisIndex.of(NamedMatroids.fano());
-        long all = ElementSets.allMask(7);
+        ElementSet all = ElementSet.range(7);
         assertInstanceOf(OrientationSession.Unsatisfiable.class,
                 new OrientationSession(index, true, Budget.UNLIMITED).solve(all));
         OrientationSession.Outcome late = new OrientationSession(index, true, Budget.UNLIMITED.until(PASSED)).solve(all);
         assertEquals("the total time limit ran out", assertInstanceOf(OrientationSession.OutOfBudget.class, late).reason());
-        UnexploredSubsets map = new UnexploredSubsets(7, all, 0);
+        UnexploredSubsets map = new UnexploredSubsets(7, all, ElementSet.EMPTY);
         assertInstanceOf(UnexploredSubsets.OutOfBudget.class, map.next(new Budget(100, 0, 0).until(PASSED),
                 new int[] {0, 1, 2, 3, 4, 5, 6}));
         assertInstanceOf(UnexploredSubsets.Seed.class, map.next(new Budget(100, 0, 0), new int[] {0, 1, 2, 3, 4, 5, 6}));

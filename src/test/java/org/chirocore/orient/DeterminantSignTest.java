@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.Field;
 import org.chirocore.matroid.MatrixMatroid;
@@ -38,7 +39,7 @@ class DeterminantSignTest {
     static Chirotope determinantSigns(MatrixMatroid m, BasisIndex index) {
         byte[] signs = new byte[index.basisCount()];
         for (int v = 1; v <= signs.length; v++) {
-            signs[v - 1] = (byte) m.determinantSign(ElementSets.elements(index.basis(v)));
+            signs[v - 1] = (byte) m.determinantSign(index.basis(v).elements());
         }
         return new Chirotope(m.labels(), m.rank(), index.bases(), signs);
     }
@@ -102,8 +103,8 @@ class DeterminantSignTest {
         int k = index.rank() - 2;
         int[] x = ElementSets.range(k);
         do {
-            long xm = ElementSets.mask(x);
-            int[] rest = ElementSets.elements(ElementSets.allMask(n) & ~xm);
+            ElementSet xm = ElementSet.of(x);
+            int[] rest = ElementSet.range(n).minus(xm).elements();
             if (rest.length < 4) {
                 continue;
             }

@@ -9,6 +9,7 @@ import java.util.SplittableRandom;
 
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.matroid.AffineCube;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.MatrixMatroid;
@@ -51,7 +52,7 @@ class LocalRepairTest {
         }
         LocalRepair.Outcome o = LocalRepair.repair(index, start);
         byte[] signs = o.signs().orElseThrow(() -> new AssertionError("not repaired: " + o));
-        IndependentCheck.assertOrients(cube, index.chirotope(signs, ElementSets.allMask(cube.size())));
+        IndependentCheck.assertOrients(cube, index.chirotope(signs, ElementSet.range(cube.size())));
     }
 
     /**
@@ -69,7 +70,7 @@ class LocalRepairTest {
         start[flipped] = (byte) -start[flipped];
         LocalRepair.Outcome o = LocalRepair.repair(index, start);
         if (o.signs().isPresent()) {
-            Chirotope chi = index.chirotope(o.signs().get(), ElementSets.allMask(m.size()));
+            Chirotope chi = index.chirotope(o.signs().get(), ElementSet.range(m.size()));
             assertEquals(Optional.empty(), WitnessCheck.defect(m, chi));
             IndependentCheck.assertOrients(m, chi);
         } else {

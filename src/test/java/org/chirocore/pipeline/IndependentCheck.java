@@ -7,13 +7,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Source;
 import org.chirocore.check.ChirotopeCheck;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Budget;
@@ -36,19 +39,19 @@ public final class IndependentCheck {
     /** Asserts that the checker accepts {@code witness} as a chirotope of {@code m}. */
     public static void assertOrients(Matroid m, Chirotope witness) {
         BasisIndex index = BasisIndex.of(m);
-        Map<Long, Integer> signs = new HashMap<>();
+        Map<ElementSet, Integer> signs = new HashMap<>();
         for (int i = 0; i < witness.size(); i++) {
             signs.put(witness.basis(i), witness.sign(i));
         }
-        long[] bases = new long[index.basisCount()];
+        List<int[]> bases = new ArrayList<>();
         StringBuilder text = new StringBuilder();
-        for (int v = 1; v <= bases.length; v++) {
-            bases[v - 1] = index.basis(v);
-            Integer sign = signs.get(bases[v - 1]);
+        for (int v = 1; v <= index.basisCount(); v++) {
+            bases.add(index.basis(v).elements());
+            Integer sign = signs.get(index.basis(v));
             assertTrue(sign != null && sign != 0, "the witness gives no sign to basis " + v + " of the matroid");
             text.append(sign > 0 ? '+' : '-');
         }
-        assertEquals(bases.length, witness.size(), "the witness signs a set that is not a basis");
+        assertEquals(bases.size(), witness.size(), "the witness signs a set that is not a basis");
         assertEquals(Optional.empty(), ChirotopeCheck.violation(m.size(), m.rank(), bases, text.toString()));
     }
 

@@ -37,7 +37,7 @@ class StoredCertificatesRegenerateTest {
     Path dir;
 
     static Stream<Arguments> given() {
-        return Stream.of("fano", "fano-dual", "ag32", "ag23-minus-point").map(Arguments::of);
+        return Stream.of("fano", "fano-dual", "ag32", "ag23-minus-point", "fano-in-70").map(Arguments::of);
     }
 
     static Stream<Arguments> smallCorners() {

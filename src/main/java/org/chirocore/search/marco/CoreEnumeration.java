@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
@@ -242,7 +243,7 @@ public final class CoreEnumeration {
     private static Key key(ExplicitMatroid m, ExplicitMatroid core) {
         int[] toM = core.labels().stream().mapToInt(m.labels()::indexOf).toArray();
         List<Long> bases = new ArrayList<>();
-        for (long b : core.basisMasks()) {
+        for (long b : core.basisSets().stream().mapToLong(ElementSet::toMask).toArray()) {
             long lifted = 0;
             for (long s = b; s != 0; s &= s - 1) {
                 lifted |= 1L << toM[Long.numberOfTrailingZeros(s)];

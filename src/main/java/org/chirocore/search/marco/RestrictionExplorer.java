@@ -7,9 +7,12 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Random;
 
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
+import org.chirocore.matroid.Limits;
 import org.chirocore.matroid.Minor;
+import org.chirocore.matroid.TooLargeException;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.Chirotope;
@@ -102,6 +105,10 @@ public final class RestrictionExplorer {
      */
     public RestrictionExplorer(ExplicitMatroid m, long required, Budget budget, Optional<Budget> seedBudget,
             boolean grow, long seed) {
+        if (m.size() > Limits.ENUMERATED_ELEMENTS) {
+            throw new TooLargeException("The matroid has " + m.size() + " elements; its restrictions are enumerated on at most "
+                    + Limits.ENUMERATED_ELEMENTS + ".");
+        }
         this.seedCap = 3 * m.rank() + 1;
         this.m = m;
         this.required = required;
@@ -110,7 +117,7 @@ public final class RestrictionExplorer {
         this.seedBudget = seedBudget;
         this.random = new Random(seed);
         this.session = new OrientationSession(BasisIndex.of(m), true, seedBudget.orElse(budget));
-        this.map = new UnexploredSubsets(m.size(), ElementSets.allMask(m.size()), required);
+        this.map = new UnexploredSubsets(m.size(), ElementSet.range(m.size()), ElementSet.ofMask(required));
         List<Integer> shuffled = new ArrayList<>();
         for (int e = 0; e < m.size(); e++) {
             shuffled.add(e);
@@ -129,7 +136,7 @@ public final class RestrictionExplorer {
             if (seed instanceof UnexploredSubsets.OutOfBudget o) {
                 return new OutOfBudget(o.reason());
             }
-            long set = ((UnexploredSubsets.Seed) seed).set();
+            long set = ((UnexploredSubsets.Seed) seed).set().toMask();
             if (seedBudget.isPresent() && Long.bitCount(set) > seedCap) {
                 set = part(set, seedCap);
             }
@@ -145,7 +152,7 @@ public final class RestrictionExplorer {
             if (outcome instanceof OrientationSession.Satisfiable s) {
                 return orientable(set, s.signs());
             }
-            Step shrunk = shrink(((OrientationSession.Unsatisfiable) outcome).needed() | (set & required));
+            Step shrunk = shrink(((OrientationSession.Unsatisfiable) outcome).needed().toMask() | (set & required));
             if (shrunk != null) {
                 return shrunk;
             }
@@ -160,7 +167,7 @@ public final class RestrictionExplorer {
     private OrientationSession.Outcome solve(long set) {
         solves++;
         if (seedBudget.isEmpty()) {
-            return session.solve(set);
+            return session.solve(ElementSet.ofMask(set));
         }
         int[] elements = ElementSets.elements(set);
         if (m.rank(elements) < m.rank()) {
@@ -171,9 +178,9 @@ public final class RestrictionExplorer {
         }
         OrientationSession local = new OrientationSession(BasisIndex.of(Minor.restriction(m, elements)), true,
                 seedBudget.get());
-        OrientationSession.Outcome o = local.solve(ElementSets.allMask(elements.length));
+        OrientationSession.Outcome o = local.solve(ElementSet.range(elements.length));
         if (o instanceof OrientationSession.Unsatisfiable u) {
-            return new OrientationSession.Unsatisfiable(global(u.needed(), elements));
+            return new OrientationSession.Unsatisfiable(ElementSet.ofMask(global(u.needed().toMask(), elements)));
         }
         if (o instanceof OrientationSession.Satisfiable s) {
             return new OrientationSession.Satisfiable(liftedSigns(local.index(), s.signs(), elements));
@@ -186,7 +193,7 @@ public final class RestrictionExplorer {
         byte[] out = new byte[session.index().basisCount()];
         Arrays.fill(out, (byte) 1);
         for (int v = 1; v <= signs.length; v++) {
-            out[session.index().variable(global(local.basis(v), elements)) - 1] = signs[v - 1];
+            out[session.index().variable(ElementSet.ofMask(global(local.basis(v).toMask(), elements))) - 1] = signs[v - 1];
         }
         return out;
     }
@@ -211,13 +218,13 @@ public final class RestrictionExplorer {
                 }
             }
         }
-        map.blockSubsets(t);
+        map.blockSubsets(ElementSet.ofMask(t));
         orientable.add(t);
         int[] elements = ElementSets.elements(t);
         Optional<Chirotope> witness = Optional.empty();
         if (m.rank(elements) == m.rank()) {
             witness = Optional.of(WitnessCheck.checked(Minor.restriction(m, elements),
-                    session.index().chirotope(model, t)));
+                    session.index().chirotope(model, ElementSet.ofMask(t))));
         }
         return new Orientable(t, witness);
     }
@@ -276,22 +283,22 @@ public final class RestrictionExplorer {
                     continue;
                 }
                 solves++;
-                OrientationSession.Outcome o = local.solve(t & ~(1L << e));
+                OrientationSession.Outcome o = local.solve(ElementSet.ofMask(t & ~(1L << e)));
                 if (o instanceof OrientationSession.OutOfBudget b) {
                     return new OutOfBudget(b.reason());
                 }
                 if (o instanceof OrientationSession.Unsatisfiable u) {
                     if (isRequired) {
-                        map.blockSubsets(global(t, elements));
+                        map.blockSubsets(ElementSet.ofMask(global(t, elements)));
                         return null;
                     }
-                    t = u.needed() | (t & localRequired);
+                    t = u.needed().toMask() | (t & localRequired);
                 }
             }
         }
         long found = global(t, elements);
         nonOrientable.add(found);
-        map.blockSupersets(found);
+        map.blockSupersets(ElementSet.ofMask(found));
         return new MinimalNonOrientable(found);
     }
 
@@ -330,7 +337,7 @@ public final class RestrictionExplorer {
      * non-orientable has a non-orientable contraction).
      */
     public void exclude(long set) {
-        map.blockSupersets(set);
+        map.blockSupersets(ElementSet.ofMask(set));
     }
 
     /** Orientability solves made so far. */

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Set;
 
 import org.chirocore.matroid.CubeConstruction;
+import org.chirocore.matroid.ElementSet;
 import org.chirocore.matroid.ElementSets;
 import org.chirocore.matroid.ExplicitMatroid;
 
@@ -126,7 +127,7 @@ public record Symmetry(String kind, List<int[]> permutations) {
                 set |= 1L << comb[i];
                 image |= 1L << map[comb[i]];
             }
-            if (m.isBasisMask(set) != m.isBasisMask(image)) {
+            if (m.isBasis(ElementSet.ofMask(set)) != m.isBasis(ElementSet.ofMask(image))) {
                 return false;
             }
         } while (r > 1 && ElementSets.nextCombination(comb, last));
@@ -135,8 +136,8 @@ public record Symmetry(String kind, List<int[]> permutations) {
 
     private static Symmetry checked(Symmetry g, ExplicitMatroid m) {
         for (int[] p : g.permutations()) {
-            for (long b : m.basisMasks()) {
-                if (!m.isBasisMask(g.apply(p, b))) {
+            for (long b : m.basisSets().stream().mapToLong(ElementSet::toMask).toArray()) {
+                if (!m.isBasis(ElementSet.ofMask(g.apply(p, b)))) {
                     throw new IllegalStateException("The symmetry " + Arrays.toString(p) + " does not map bases to bases.");
                 }
             }

@@ -2,78 +2,72 @@ package org.chirocore.check;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.List;
 import java.util.Optional;
 
 /**
- * A family of r-subsets of {0..n−1} (n ≤ 64) as bit masks, in canonical (lexicographic) order, with
- * lookup of a set's position by binary search: O(log |family|) per lookup, O(|family| log |family|)
- * to build. Immutable.
+ * A family of r-subsets of {0..n−1} as sorted element arrays (the certificate's own form), in
+ * canonical (lexicographic) order, with lookup of a set's position by binary search:
+ * O(r log |family|) per lookup. Also the few operations on sorted element arrays the checks need.
+ * Immutable; the arrays it hands out must not be changed.
  */
 final class BasisTable {
     final int size;
     final int rank;
     /** The sets in canonical order; position k is SAT variable k + 1. */
-    private final long[] canonical;
-    /** The same sets in numeric order of their masks, and each one's canonical position. */
-    private final long[] numeric;
-    private final int[] positionOfNumeric;
+    private final int[][] canonical;
 
-    /** @param canonical distinct masks in canonical order (the caller has checked this) */
-    BasisTable(int size, int rank, long[] canonical) {
+    /** @param canonical distinct sorted sets in canonical order (the caller has checked this) */
+    BasisTable(int size, int rank, List<int[]> canonical) {
         this.size = size;
         this.rank = rank;
-        this.canonical = canonical.clone();
-        Integer[] order = new Integer[canonical.length];
-        Arrays.setAll(order, i -> i);
-        Arrays.sort(order, (i, j) -> Long.compare(canonical[i], canonical[j]));
-        this.numeric = new long[canonical.length];
-        this.positionOfNumeric = new int[canonical.length];
-        for (int k = 0; k < order.length; k++) {
-            numeric[k] = canonical[order[k]];
-            positionOfNumeric[k] = order[k];
-        }
+        this.canonical = canonical.toArray(new int[0][]);
     }
 
     int count() {
         return canonical.length;
     }
 
-    long basis(int position) {
+    int[] basis(int position) {
         return canonical[position];
     }
 
-    /** The set at canonical position {@code position}, as its elements in increasing order. */
-    int[] elements(int position) {
-        long mask = canonical[position];
-        int[] out = new int[Long.bitCount(mask)];
-        for (int i = 0; i < out.length; i++, mask &= mask - 1) {
-            out[i] = Long.numberOfTrailingZeros(mask);
+    /** The canonical position of the sorted set {@code set}, or −1 when it is not in the family. */
+    int positionOf(int[] set) {
+        int k = Arrays.binarySearch(canonical, set, Arrays::compare);
+        return k < 0 ? -1 : k;
+    }
+
+    /** Whether the sorted set {@code set} contains {@code e}. */
+    static boolean contains(int[] set, int e) {
+        return Arrays.binarySearch(set, e) >= 0;
+    }
+
+    /** The sorted set X ∪ {p, q} for a sorted X not containing p ≠ q. */
+    static int[] with(int[] x, int p, int q) {
+        int[] out = Arrays.copyOf(x, x.length + 2);
+        out[x.length] = p;
+        out[x.length + 1] = q;
+        Arrays.sort(out);
+        return out;
+    }
+
+    /** The sorted set without the elements at positions i and j (j = −1 for one position only). */
+    static int[] without(int[] set, int i, int j) {
+        int[] out = new int[set.length - (j < 0 ? 1 : 2)];
+        int k = 0;
+        for (int a = 0; a < set.length; a++) {
+            if (a != i && a != j) {
+                out[k++] = set[a];
+            }
         }
         return out;
     }
 
-    /** The canonical position of the set with the increasing elements {@code sorted} (each below 64), or −1 when it is not in the family. */
-    int positionOf(int[] sorted) {
-        long mask = 0;
-        for (int e : sorted) {
-            mask |= 1L << e;
-        }
-        return positionOf(mask);
-    }
-
-    /** The canonical position of {@code mask}, or −1 when it is not in the family. */
-    int positionOf(long mask) {
-        int k = Arrays.binarySearch(numeric, mask);
-        return k < 0 ? -1 : positionOfNumeric[k];
-    }
-
-    /**
-     * Whether a precedes b in lexicographic order of their sorted tuples (sets of equal size): at the
-     * first differing position the smaller element is the least element of the symmetric difference.
-     */
-    static boolean lexLess(long a, long b) {
-        return a != b && (a & Long.lowestOneBit(a ^ b)) != 0;
+    /** A sorted set in JSON style, for messages: {@code [0, 3, 5]}. */
+    static String set(int[] set) {
+        return Arrays.toString(set);
     }
 
     /**
@@ -86,8 +80,8 @@ final class BasisTable {
      * and (b) the exchange axiom holds for every two bases that differ in two elements. Two such
      * bases are X ∪ {p, q} and X ∪ {u, v} with |X| = r − 2; for fixed X, (b) says exactly that the
      * graph G_X with an edge pq for each basis X ∪ {p, q} is complete multipartite on its
-     * non-isolated vertices (non-adjacency is transitive there). Cost O(b · r² · log(b r²)) for b
-     * bases, in sorted arrays of b · C(r, 2) longs.
+     * non-isolated vertices (non-adjacency is transitive there). Cost O(b · r³ · log(b r²)) for b
+     * bases, in sorted arrays of b · C(r, 2) entries (a long and an (r − 2)-element array each).
      */
     Optional<String> exchangeDefect() {
         if (canonical.length == 0) {
@@ -107,12 +101,12 @@ final class BasisTable {
 
     /**
      * For every basis B and every k-subset T of B (k = 1 or 2): the group X = B − T and a payload
-     * (the basis position for k = 1, the two elements of T for k = 2). Returned as the distinct
-     * X in numeric order and the entries {@code group << 24 | payload}, sorted, so that each
-     * group's entries are consecutive.
+     * (the basis position for k = 1, the two elements p < q of T as p·n + q for k = 2, below 2^20
+     * for n ≤ 1024). Returned as the distinct X in lexicographic order and the entries
+     * {@code group << 24 | payload}, sorted, so that each group's entries are consecutive.
      */
-    private record Groups(long[] xs, long[] entries) {
-        long x(int entry) {
+    private record Groups(int[][] xs, long[] entries) {
+        int[] x(int entry) {
             return xs[(int) (entries[entry] >>> PAYLOAD)];
         }
 
@@ -127,36 +121,34 @@ final class BasisTable {
 
     private Groups grouped(int k) {
         int perBasis = k == 1 ? rank : rank * (rank - 1) / 2;
-        long[] xs = new long[canonical.length * perBasis];
+        int[][] xs = new int[canonical.length * perBasis][];
         long[] entries = new long[xs.length];
         int at = 0;
         for (int i = 0; i < canonical.length; i++) {
-            long b = canonical[i];
-            for (long ps = b; ps != 0; ps &= ps - 1) {
-                long p = Long.lowestOneBit(ps);
+            int[] b = canonical[i];
+            for (int p = 0; p < rank; p++) {
                 if (k == 1) {
-                    xs[at] = b & ~p;
+                    xs[at] = without(b, p, -1);
                     entries[at++] = i;
                     continue;
                 }
-                for (long qs = ps & (ps - 1); qs != 0; qs &= qs - 1) {
-                    long q = Long.lowestOneBit(qs);
-                    xs[at] = b & ~p & ~q;
-                    entries[at++] = Long.numberOfTrailingZeros(p) << 6 | Long.numberOfTrailingZeros(q);
+                for (int q = p + 1; q < rank; q++) {
+                    xs[at] = without(b, p, q);
+                    entries[at++] = (long) b[p] * size + b[q];
                 }
             }
         }
-        long[] sorted = xs.clone();
-        Arrays.sort(sorted);
+        int[][] sorted = xs.clone();
+        Arrays.sort(sorted, Arrays::compare);
         int distinct = 0;
         for (int i = 0; i < sorted.length; i++) {
-            if (i == 0 || sorted[i] != sorted[i - 1]) {
+            if (i == 0 || !Arrays.equals(sorted[i], sorted[i - 1])) {
                 sorted[distinct++] = sorted[i];
             }
         }
-        long[] unique = Arrays.copyOf(sorted, distinct);
+        int[][] unique = Arrays.copyOf(sorted, distinct);
         for (int i = 0; i < entries.length; i++) {
-            entries[i] |= (long) Arrays.binarySearch(unique, xs[i]) << PAYLOAD;
+            entries[i] |= (long) Arrays.binarySearch(unique, xs[i], Arrays::compare) << PAYLOAD;
         }
         Arrays.sort(entries);
         return new Groups(unique, entries);
@@ -198,21 +190,21 @@ final class BasisTable {
             return Optional.empty();
         }
         Groups g = grouped(2);
-        long[] adjacent = new long[64];
+        BitSet[] adjacent = new BitSet[size];
+        Arrays.setAll(adjacent, v -> new BitSet(size));
         for (int i = 0; i < g.entries().length;) {
             int j = i;
-            long vertices = 0;
+            BitSet vertices = new BitSet(size);
             for (; j < g.entries().length && g.sameGroup(i, j); j++) {
-                int p = g.payload(j) >>> 6;
-                int q = g.payload(j) & 63;
-                adjacent[p] |= 1L << q;
-                adjacent[q] |= 1L << p;
-                vertices |= 1L << p | 1L << q;
+                int p = g.payload(j) / size;
+                int q = g.payload(j) % size;
+                adjacent[p].set(q);
+                adjacent[q].set(p);
+                vertices.set(p);
+                vertices.set(q);
             }
             Optional<String> defect = multipartiteDefect(adjacent, vertices, g.x(i));
-            for (long vs = vertices; vs != 0; vs &= vs - 1) {
-                adjacent[Long.numberOfTrailingZeros(vs)] = 0;
-            }
+            vertices.stream().forEach(v -> adjacent[v].clear());
             if (defect.isPresent()) {
                 return defect;
             }
@@ -224,24 +216,26 @@ final class BasisTable {
     /**
      * A pair of bases X ∪ {a, c}, X ∪ {b, z} without exchange, when non-adjacency in G_X is not
      * transitive: a ≁ b, b ≁ c but a ~ c, and z a neighbour of b. Then removing z from X ∪ {b, z}
-     * leaves no y ∈ {a, c} with X ∪ {b, y} a basis. Cost O(|V|²) bit operations for the vertex set V.
+     * leaves no y ∈ {a, c} with X ∪ {b, y} a basis. Cost O(|V|² · n / 64) for the vertex set V.
      */
-    private static Optional<String> multipartiteDefect(long[] adjacent, long vertices, long x) {
-        for (long vs = vertices; vs != 0; vs &= vs - 1) {
-            int v = Long.numberOfTrailingZeros(vs);
-            for (long us = vertices & ~adjacent[v] & ~(1L << v); us != 0; us &= us - 1) {
-                int u = Long.numberOfTrailingZeros(us);
-                long differ = adjacent[u] ^ adjacent[v];
-                if (differ == 0) {
+    private static Optional<String> multipartiteDefect(BitSet[] adjacent, BitSet vertices, int[] x) {
+        for (int v = vertices.nextSetBit(0); v >= 0; v = vertices.nextSetBit(v + 1)) {
+            BitSet others = (BitSet) vertices.clone();
+            others.andNot(adjacent[v]);
+            others.clear(v);
+            for (int u = others.nextSetBit(0); u >= 0; u = others.nextSetBit(u + 1)) {
+                BitSet differ = (BitSet) adjacent[u].clone();
+                differ.xor(adjacent[v]);
+                if (differ.isEmpty()) {
                     continue;
                 }
-                int w = Long.numberOfTrailingZeros(differ);
+                int w = differ.nextSetBit(0);
                 // the middle vertex b is non-adjacent to both others, which are adjacent
-                int b = (adjacent[u] & 1L << w) != 0 ? v : u;
+                int b = adjacent[u].get(w) ? v : u;
                 int a = b == v ? u : v;
-                int z = Long.numberOfTrailingZeros(adjacent[b]);
-                return Optional.of("no y in " + set(1L << a | 1L << w) + " makes " + set(x | 1L << b | 1L << z) + " - " + z
-                        + " + y a basis (B2 = " + set(x | 1L << a | 1L << w) + ")");
+                int z = adjacent[b].nextSetBit(0);
+                return Optional.of("no y in " + set(with(new int[0], a, w)) + " makes " + set(with(x, b, z)) + " - " + z
+                        + " + y a basis (B2 = " + set(with(x, a, w)) + ")");
             }
         }
         return Optional.empty();
@@ -258,37 +252,32 @@ final class BasisTable {
     }
 
     private BasisTable minor(int e, boolean contract) {
-        long bit = 1L << e;
         int containing = 0;
-        for (long b : canonical) {
-            containing += (b & bit) != 0 ? 1 : 0;
+        for (int[] b : canonical) {
+            containing += contains(b, e) ? 1 : 0;
         }
         boolean coloop = containing == canonical.length;
         boolean loop = containing == 0;
         boolean wantContaining = contract ? !loop : coloop;
-        List<Long> kept = new ArrayList<>();
-        for (long b : canonical) {
-            if (((b & bit) != 0) == wantContaining) {
+        List<int[]> kept = new ArrayList<>();
+        for (int[] b : canonical) {
+            if (contains(b, e) == wantContaining) {
                 kept.add(removeElement(b, e));
             }
         }
-        kept.sort((a, b) -> a.equals(b) ? 0 : lexLess(a, b) ? -1 : 1);
-        long[] masks = kept.stream().mapToLong(Long::longValue).toArray();
-        return new BasisTable(size - 1, rank - (wantContaining ? 1 : 0), masks);
+        kept.sort(Arrays::compare);
+        return new BasisTable(size - 1, rank - (wantContaining ? 1 : 0), kept);
     }
 
-    /** The mask with element e taken out and the elements above it moved down by one. */
-    static long removeElement(long mask, int e) {
-        long below = mask & ((1L << e) - 1);
-        return below | ((mask >>> e >>> 1) << e);
-    }
-
-    /** A mask as a sorted index array in JSON style, for messages: {@code [0, 3, 5]}. */
-    static String set(long mask) {
-        StringBuilder s = new StringBuilder("[");
-        for (long m = mask; m != 0; m &= m - 1) {
-            s.append(s.length() > 1 ? ", " : "").append(Long.numberOfTrailingZeros(m));
+    /** The sorted set with element e taken out and the elements above it moved down by one. */
+    static int[] removeElement(int[] set, int e) {
+        int[] out = new int[set.length - (contains(set, e) ? 1 : 0)];
+        int k = 0;
+        for (int a : set) {
+            if (a != e) {
+                out[k++] = a > e ? a - 1 : a;
+            }
         }
-        return s.append(']').toString();
+        return out;
     }
 }

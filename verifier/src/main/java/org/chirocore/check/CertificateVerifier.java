@@ -15,6 +15,7 @@ import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.BitSet;
 import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
@@ -278,35 +279,33 @@ public final class CertificateVerifier {
 
         /** The bases are sorted sets of size r in canonical order and satisfy basis exchange ([Ox, §1.2]). */
         String core() throws Failure {
-            long[] masks = new long[c.bases().size()];
-            for (int i = 0; i < masks.length; i++) {
-                masks[i] = set(c.bases().get(i), "basis " + (i + 1), c.rank());
-                if (i > 0 && !BasisTable.lexLess(masks[i - 1], masks[i])) {
-                    throw new Failure("basis " + (i + 1) + " " + BasisTable.set(masks[i]) + " does not come after basis " + i + " "
-                            + BasisTable.set(masks[i - 1]) + " in lexicographic order (or repeats it)");
+            List<int[]> bases = new ArrayList<>();
+            for (int i = 0; i < c.bases().size(); i++) {
+                bases.add(set(c.bases().get(i), "basis " + (i + 1), c.rank()));
+                if (i > 0 && java.util.Arrays.compare(bases.get(i - 1), bases.get(i)) >= 0) {
+                    throw new Failure("basis " + (i + 1) + " " + BasisTable.set(bases.get(i)) + " does not come after basis " + i + " "
+                            + BasisTable.set(bases.get(i - 1)) + " in lexicographic order (or repeats it)");
                 }
             }
-            core = new BasisTable(n, c.rank(), masks);
+            core = new BasisTable(n, c.rank(), bases);
             Optional<String> defect = core.exchangeDefect();
             if (defect.isPresent()) {
                 throw new Failure("basis exchange fails: " + defect.get());
             }
-            return masks.length + " distinct bases in canonical order; basis exchange holds";
+            return bases.size() + " distinct bases in canonical order; basis exchange holds";
         }
 
-        /** A sorted set of distinct elements of the core, of the given size, as a mask. */
-        private long set(int[] elements, String what, int size) throws Failure {
-            long mask = 0;
+        /** {@code elements} (a copy), after checking it is a sorted set of distinct elements of the core, of the given size. */
+        private int[] set(int[] elements, String what, int size) throws Failure {
             for (int i = 0; i < elements.length; i++) {
                 if (elements[i] < 0 || elements[i] >= n || (i > 0 && elements[i] <= elements[i - 1])) {
                     throw new Failure(what + " " + java.util.Arrays.toString(elements) + " is not a sorted set of elements 0.." + (n - 1));
                 }
-                mask |= 1L << elements[i];
             }
             if (elements.length != size) {
                 throw new Failure(what + " " + java.util.Arrays.toString(elements) + " has " + elements.length + " elements, not " + size);
             }
-            return mask;
+            return elements.clone();
         }
 
         /**
@@ -314,18 +313,24 @@ public final class CertificateVerifier {
          * (docs/mathematics.md §4): equivalently the differences 1_B ⊕ 1_B0 are independent.
          */
         String normalisation() throws Failure {
-            long[] pivotByTopBit = new long[64];
-            long first = 0;
+            BitSet[] pivotByTopBit = new BitSet[n];
+            BitSet first = new BitSet();
             for (int i = 0; i < c.normalised().size(); i++) {
-                long b = normalisedBasis(i);
-                first = i == 0 ? b : first;
-                // reduce 1_B ⊕ 1_B0 by the pivots, each stored at its highest bit
-                long v = b ^ first;
-                while (v != 0 && pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] != 0) {
-                    v ^= pivotByTopBit[63 - Long.numberOfLeadingZeros(v)];
+                int[] b = normalisedBasis(i);
+                BitSet v = new BitSet(n);
+                for (int e : b) {
+                    v.set(e);
                 }
-                if (v != 0) {
-                    pivotByTopBit[63 - Long.numberOfLeadingZeros(v)] = v;
+                if (i == 0) {
+                    first = (BitSet) v.clone();
+                }
+                // reduce 1_B ⊕ 1_B0 by the pivots, each stored at its highest bit
+                v.xor(first);
+                while (!v.isEmpty() && pivotByTopBit[v.length() - 1] != null) {
+                    v.xor(pivotByTopBit[v.length() - 1]);
+                }
+                if (!v.isEmpty()) {
+                    pivotByTopBit[v.length() - 1] = v;
                 } else if (i > 0) {
                     throw new Failure("normalised[" + i + "] " + BasisTable.set(b)
                             + " makes the vectors (1, 1_B) linearly dependent over GF(2)");
@@ -334,8 +339,8 @@ public final class CertificateVerifier {
             return c.normalised().size() + " bases fixed to +1, GF(2)-independent";
         }
 
-        private long normalisedBasis(int i) throws Failure {
-            long b = set(c.normalised().get(i), "normalised[" + i + "]", c.rank());
+        private int[] normalisedBasis(int i) throws Failure {
+            int[] b = set(c.normalised().get(i), "normalised[" + i + "]", c.rank());
             if (core.positionOf(b) < 0) {
                 throw new Failure("normalised[" + i + "] " + BasisTable.set(b) + " is not a basis of the core");
             }
@@ -351,9 +356,9 @@ public final class CertificateVerifier {
             for (int i = 0; i < c.relations().size(); i++) {
                 Relation r = c.relations().get(i);
                 String what = "relation " + i + " " + r;
-                long x = set(r.x(), what + ": X", c.rank() - 2);
-                long abcd = set(new int[] {r.a(), r.b(), r.c(), r.d()}, what + ": a, b, c, d", 4);
-                if ((x & abcd) != 0) {
+                int[] x = set(r.x(), what + ": X", c.rank() - 2);
+                int[] abcd = set(new int[] {r.a(), r.b(), r.c(), r.d()}, what + ": a, b, c, d", 4);
+                if (java.util.Arrays.stream(abcd).anyMatch(e -> BasisTable.contains(x, e))) {
                     throw new Failure(what + ": a, b, c, d must lie outside X");
                 }
                 List<Term> terms = Relations.nonZero(Relations.terms(core, x, r.a(), r.b(), r.c(), r.d()));

@@ -1,5 +1,7 @@
 package org.chirocore.check;
 
+import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -17,25 +19,30 @@ public final class ChirotopeCheck {
      * Why {@code signs} is not a chirotope of the matroid whose bases are {@code bases}, or
      * empty when it is one.
      *
-     * @param size the number of elements, at most 64
+     * @param size the number of elements, at most {@link VerifierLimits#MAX_ELEMENTS}
      * @param rank the rank
-     * @param bases the bases as bit masks, in lexicographic order of their sorted tuples
+     * @param bases the bases as sorted element arrays, in lexicographic order
      * @param signs one '+' or '-' per basis, in the same order
      */
-    public static Optional<String> violation(int size, int rank, long[] bases, String signs) {
-        if (size < 0 || size > 64) {
-            return Optional.of("a matroid of this format has at most 64 elements, not " + size);
+    public static Optional<String> violation(int size, int rank, List<int[]> bases, String signs) {
+        if (size < 0 || size > VerifierLimits.MAX_ELEMENTS) {
+            return Optional.of("a matroid of this format has at most " + VerifierLimits.MAX_ELEMENTS + " elements, not " + size);
         }
-        for (int k = 0; k < bases.length; k++) {
-            if (Long.bitCount(bases[k]) != rank || (size < 64 && bases[k] >>> size != 0)) {
-                return Optional.of("basis " + k + " is not a " + rank + "-subset of the " + size + " elements");
+        for (int k = 0; k < bases.size(); k++) {
+            int[] b = bases.get(k);
+            boolean sorted = b.length == rank;
+            for (int i = 0; i < b.length && sorted; i++) {
+                sorted = b[i] >= (i == 0 ? 0 : b[i - 1] + 1) && b[i] < size;
             }
-            if (k > 0 && !BasisTable.lexLess(bases[k - 1], bases[k])) {
+            if (!sorted) {
+                return Optional.of("basis " + k + " is not a sorted " + rank + "-subset of the " + size + " elements");
+            }
+            if (k > 0 && Arrays.compare(bases.get(k - 1), b) >= 0) {
                 return Optional.of("the bases are not in lexicographic order at position " + k);
             }
         }
-        if (signs.length() != bases.length) {
-            return Optional.of(signs.length() + " signs for " + bases.length + " bases");
+        if (signs.length() != bases.size()) {
+            return Optional.of(signs.length() + " signs for " + bases.size() + " bases");
         }
         int[] values = new int[signs.length()];
         for (int i = 0; i < values.length; i++) {

@@ -130,8 +130,8 @@ public final class CompletenessCheck {
                 throw new Failure("format must be \"" + FORMAT_NAME + "\" version 1");
             }
             JsonTree.Arr names = doc.requireArray("labels");
-            if (names.size() > VerifierLimits.MAX_ELEMENTS) {
-                throw new Failure("at most " + VerifierLimits.MAX_ELEMENTS + " elements, not " + names.size());
+            if (names.size() > VerifierLimits.MAX_ENUMERATED_ELEMENTS) {
+                throw new Failure("at most " + VerifierLimits.MAX_ENUMERATED_ELEMENTS + " elements, not " + names.size());
             }
             labels = new ArrayList<>();
             for (int i = 0; i < names.size(); i++) {
@@ -344,7 +344,7 @@ public final class CompletenessCheck {
                             throw new Failure(where + " spans but has no witness");
                         }
                     } else {
-                        long[] b = local.stream().mapToLong(Long::longValue).toArray();
+                        List<int[]> b = local.stream().map(CompletenessCheck::elements).toList();
                         Optional<String> v = ChirotopeCheck.violation(elements.length, r, b, signs);
                         if (v.isPresent()) {
                             throw new Failure(where + ": the witness is not a chirotope: " + v.get());

@@ -98,7 +98,7 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         return List.copyOf(out);
     }
 
-    /** An array of at most {@code max} arrays of at most 64 ints each. */
+    /** An array of at most {@code max} arrays of at most {@link VerifierLimits#MAX_ELEMENTS} ints each. */
     static List<int[]> sets(JsonTree.Arr array, String what, int max) {
         if (array.size() > max) {
             throw new JsonTree.Mistyped(what + " has " + array.size() + " entries; at most " + max + " are allowed");

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.TreeSet;
 import java.util.function.ToIntFunction;
 
 
@@ -21,7 +22,8 @@ import java.util.function.ToIntFunction;
  * must be exactly M/C\D (rank_{M/C\D}(S) = rank_M(S ∪ C) − rank_M(C), [Ox, Prop. 3.1.6]). Cost: one
  * rank evaluation per r-subset of the core's ground set, plus the general-position test. Subsets
  * of a cube's ground set (up to 2^16 vertices, {@link VerifierLimits#MAX_CUBE}) are BitSets; a
- * given matroid and the core have at most 64 elements.
+ * given matroid and the core have at most {@link VerifierLimits#MAX_ELEMENTS} elements, their
+ * sets are sorted element arrays.
  */
 final class ProvenanceCheck {
     /** A rejected provenance; the message says what does not match. */
@@ -316,42 +318,40 @@ final class ProvenanceCheck {
                 return new Source(labels, matrixRank(m.requireObject("matrix"), n, r), r, new BitSet());
             }
             String listed = m.has("bases") ? "bases" : "nonbases";
-            Set<Long> sets = new HashSet<>();
+            // a set of sorted sets in lexicographic order: the canonical order of the bases
+            TreeSet<int[]> sets = new TreeSet<>(java.util.Arrays::compare);
             for (int[] b : ParsedCertificate.sets(m.requireArray(listed), listed, VerifierLimits.MAX_BASES)) {
-                if (!sets.add(mask(b, n, r))) {
+                if (!sets.add(sorted(b, n, r))) {
                     throw new Mismatch(listed + " lists " + java.util.Arrays.toString(b) + " twice");
                 }
             }
             if (listed.equals("nonbases") && binomial(n, r) > VerifierLimits.MAX_BASES) {
                 throw new Mismatch("the input has too many " + r + "-subsets to list its bases");
             }
-            List<Long> bases = new ArrayList<>();
+            List<int[]> bases = new ArrayList<>();
             if (listed.equals("bases")) {
                 bases.addAll(sets);
             } else {
                 int[] pick = firstCombination(r);
                 do {
-                    long b = 0;
-                    for (int e : pick) {
-                        b |= 1L << e;
-                    }
-                    if (!sets.contains(b)) {
-                        bases.add(b);
+                    if (!sets.contains(pick)) {
+                        bases.add(pick.clone());
                     }
                 } while (nextCombination(pick, n));
             }
-            bases.sort((a, b) -> a.equals(b) ? 0 : BasisTable.lexLess(a, b) ? -1 : 1);
-            long[] masks = bases.stream().mapToLong(Long::longValue).toArray();
-            Optional<String> defect = new BasisTable(n, r, masks).exchangeDefect();
+            Optional<String> defect = new BasisTable(n, r, bases).exchangeDefect();
             if (defect.isPresent()) {
                 throw new Mismatch("the input's bases do not form a matroid: " + defect.get());
             }
             // the rank of S in a matroid is the largest |S ∩ B| over its bases B ([Ox, §1.3])
             return new Source(labels, set -> {
-                long s = set.isEmpty() ? 0 : set.toLongArray()[0]; // at most 64 elements
                 int best = 0;
-                for (long b : masks) {
-                    best = Math.max(best, Long.bitCount(s & b));
+                for (int[] b : bases) {
+                    int common = 0;
+                    for (int e : b) {
+                        common += set.get(e) ? 1 : 0;
+                    }
+                    best = Math.max(best, common);
                 }
                 return best;
             }, r, new BitSet());
@@ -371,30 +371,31 @@ final class ProvenanceCheck {
                 for (int i = 0; i < col.size(); i++) {
                     columns[j][i] = col.get(i).asLong("columns[" + j + "][" + i + "]");
                 }
-                if (columns[j].length != columns[0].length || columns[j].length > 64) {
-                    throw new Mismatch("the input matrix columns must have one length, at most 64");
+                if (columns[j].length != columns[0].length || columns[j].length > VerifierLimits.MAX_ELEMENTS) {
+                    throw new Mismatch("the input matrix columns must have one length, at most " + VerifierLimits.MAX_ELEMENTS);
                 }
             }
             BitSet all = new BitSet();
             all.set(0, columns.length);
-            if (columns.length > 64 || ExactRank.rank(columns, all, p) != r) {
+            if (ExactRank.rank(columns, all, p) != r) {
                 throw new Mismatch("the input matrix does not have the declared rank " + r);
             }
             return set -> ExactRank.rank(columns, set, p);
         }
 
-        private static long mask(int[] set, int n, int r) throws Mismatch {
-            long m = 0;
-            for (int e : set) {
-                if (e < 0 || e >= n || (m & 1L << e) != 0) {
-                    throw new Mismatch("an input basis set mentions element " + e + " twice or out of range");
+        /** The elements of {@code set} in increasing order, after checking they are r distinct elements of 0..n−1. */
+        private static int[] sorted(int[] set, int n, int r) throws Mismatch {
+            int[] s = set.clone();
+            java.util.Arrays.sort(s);
+            for (int i = 0; i < s.length; i++) {
+                if (s[i] < 0 || s[i] >= n || (i > 0 && s[i] == s[i - 1])) {
+                    throw new Mismatch("an input basis set mentions element " + s[i] + " twice or out of range");
                 }
-                m |= 1L << e;
             }
             if (set.length != r) {
                 throw new Mismatch("an input basis set has " + set.length + " elements, not the rank " + r);
             }
-            return m;
+            return s;
         }
     }
 
@@ -428,17 +429,15 @@ final class ProvenanceCheck {
         int next = 0;
         int[] pick = firstCombination(r);
         do {
-            long inCore = 0;
             BitSet inM = (BitSet) basisOfC.clone();
             for (int i : pick) {
-                inCore |= 1L << i;
                 inM.set(kept[i]);
             }
-            boolean listed = next < core.count() && core.basis(next) == inCore;
+            boolean listed = next < core.count() && java.util.Arrays.equals(core.basis(next), pick);
             boolean basis = m.rank().applyAsInt(inM) == rc + r;
             if (listed != basis) {
-                throw new Mismatch(listed ? "the core lists " + BasisTable.set(inCore) + ", which is not a basis of the rebuilt minor"
-                        : "the rebuilt minor has the basis " + BasisTable.set(inCore) + ", which the core does not list");
+                throw new Mismatch(listed ? "the core lists " + BasisTable.set(pick) + ", which is not a basis of the rebuilt minor"
+                        : "the rebuilt minor has the basis " + BasisTable.set(pick) + ", which the core does not list");
             }
             next += listed ? 1 : 0;
         } while (nextCombination(pick, kept.length));

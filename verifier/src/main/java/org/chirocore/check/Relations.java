@@ -1,6 +1,7 @@
 package org.chirocore.check;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 
@@ -22,18 +23,21 @@ final class Relations {
     }
 
     /** The three terms of (X; a, b, c, d), a < b < c < d outside X, in the spec's order. */
-    static Term[] terms(BasisTable t, long x, int a, int b, int c, int d) {
+    static Term[] terms(BasisTable t, int[] x, int a, int b, int c, int d) {
         return new Term[] {term(t, x, a, b, c, d, 1), term(t, x, a, c, b, d, -1), term(t, x, a, d, b, c, 1)};
     }
 
-    private static Term term(BasisTable t, long x, int p, int q, int u, int v, int outerSign) {
+    private static Term term(BasisTable t, int[] x, int p, int q, int u, int v, int outerSign) {
         int sign = outerSign * sigma(x, p, q) * sigma(x, u, v);
-        return new Term(t.positionOf(x | 1L << p | 1L << q), t.positionOf(x | 1L << u | 1L << v), sign);
+        return new Term(t.positionOf(BasisTable.with(x, p, q)), t.positionOf(BasisTable.with(x, u, v)), sign);
     }
 
     /** σ = (−1)^{#(X above p) + #(X above q)}, the sign of the permutation sorting (x, p, q). */
-    static int sigma(long x, int p, int q) {
-        int above = Long.bitCount(x >>> p >>> 1) + Long.bitCount(x >>> q >>> 1);
+    static int sigma(int[] x, int p, int q) {
+        int above = 0;
+        for (int e : x) {
+            above += (e > p ? 1 : 0) + (e > q ? 1 : 0);
+        }
         return (above & 1) == 0 ? 1 : -1;
     }
 
@@ -107,11 +111,16 @@ final class Relations {
      */
     static Optional<String> violated(BasisTable t, int[] signs) {
         for (int k = 0; k < t.count(); k++) {
-            long basis = t.basis(k);
-            for (long ps = basis; ps != 0; ps &= ps - 1) {
-                for (long qs = ps & (ps - 1); qs != 0; qs &= qs - 1) {
-                    long pq = Long.lowestOneBit(ps) | Long.lowestOneBit(qs);
-                    Optional<String> bad = violatedWith(t, signs, basis & ~pq, pq, basis);
+            int[] basis = t.basis(k);
+            int[] outside = new int[t.size - basis.length];
+            for (int e = 0, at = 0; e < t.size; e++) {
+                if (!BasisTable.contains(basis, e)) {
+                    outside[at++] = e;
+                }
+            }
+            for (int p = 0; p < basis.length; p++) {
+                for (int q = p + 1; q < basis.length; q++) {
+                    Optional<String> bad = violatedWith(t, signs, BasisTable.without(basis, p, q), basis[p], basis[q], outside);
                     if (bad.isPresent()) {
                         return bad;
                     }
@@ -128,7 +137,7 @@ final class Relations {
     static long evaluations(BasisTable core, int e) {
         long containing = 0;
         for (int k = 0; k < core.count(); k++) {
-            containing += (core.basis(k) >>> e) & 1;
+            containing += BasisTable.contains(core.basis(k), e) ? 1 : 0;
         }
         boolean loop = containing == 0;
         boolean coloop = containing == core.count();
@@ -144,16 +153,12 @@ final class Relations {
         return k < 2 ? 1 : (long) k * (k - 1) / 2;
     }
 
-    private static Optional<String> violatedWith(BasisTable t, int[] signs, long x, long pq, long basis) {
-        long outside = ~basis & (t.size == 64 ? -1L : (1L << t.size) - 1);
-        for (long us = outside; us != 0; us &= us - 1) {
-            for (long vs = us & (us - 1); vs != 0; vs &= vs - 1) {
-                long abcd = pq | Long.lowestOneBit(us) | Long.lowestOneBit(vs);
-                int[] e = new int[4];
-                int i = 0;
-                for (long m = abcd; m != 0; m &= m - 1) {
-                    e[i++] = Long.numberOfTrailingZeros(m);
-                }
+    /** The relations (X; {p, q, u, v} sorted) for the pairs u < v of {@code outside}. */
+    private static Optional<String> violatedWith(BasisTable t, int[] signs, int[] x, int p, int q, int[] outside) {
+        for (int i = 0; i < outside.length; i++) {
+            for (int j = i + 1; j < outside.length; j++) {
+                int[] e = {p, q, outside[i], outside[j]};
+                Arrays.sort(e);
                 if (!holds(terms(t, x, e[0], e[1], e[2], e[3]), signs)) {
                     return Optional.of("relation (X = " + BasisTable.set(x) + "; " + e[0] + ", " + e[1] + ", " + e[2]
                             + ", " + e[3] + ") fails");

@@ -68,7 +68,7 @@ final class TransportedWitness {
             hit[sigma[i]] = true;
         }
         for (int k = 0; k < core.count(); k++) {
-            int[] basis = core.elements(k);
+            int[] basis = core.basis(k);
             int[] image = new int[basis.length];
             for (int i = 0; i < basis.length; i++) {
                 image[i] = sigma[basis[i]];
@@ -101,7 +101,7 @@ final class TransportedWitness {
         }
         int[] out = new int[target.count()];
         for (int k = 0; k < out.length; k++) {
-            int[] basis = target.elements(k);
+            int[] basis = target.basis(k);
             int[] preimage = new int[basis.length];
             for (int i = 0; i < basis.length; i++) {
                 int y = inverse[basis[i] >= e ? basis[i] + 1 : basis[i]];

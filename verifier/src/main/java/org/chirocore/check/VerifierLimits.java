@@ -11,8 +11,13 @@ final class VerifierLimits {
     static final long MAX_CERTIFICATE_BYTES = 64L << 20;
     /** Largest proof read from a separate file, in bytes after decompression; the proof is streamed. */
     static final long MAX_PROOF_BYTES = 256L << 20;
-    /** Most elements of a core (bases are 64-bit masks) and of a given matroid. */
-    static final int MAX_ELEMENTS = 64;
+    /**
+     * Most elements of a core and of a given matroid (sets are sorted element arrays; the exchange
+     * check packs two elements p·n + q into 24 bits, which allows up to 4096).
+     */
+    static final int MAX_ELEMENTS = 1024;
+    /** Most elements of the matroid of an enumeration whose completeness is checked (its sets are 64-bit masks). */
+    static final int MAX_ENUMERATED_ELEMENTS = 64;
     /** Most bases of a core. */
     static final int MAX_BASES = 4_000_000;
     /** Most listed relations (each gives up to 16 clauses of the CNF, which the proof checker holds). */

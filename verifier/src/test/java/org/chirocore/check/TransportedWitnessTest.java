@@ -13,11 +13,7 @@ import org.junit.jupiter.api.Test;
 class TransportedWitnessTest {
     /** A basis table of rank 2 on n elements from its bases, given in canonical order as pairs. */
     private static BasisTable pairs(int n, int[]... bases) {
-        long[] masks = new long[bases.length];
-        for (int i = 0; i < bases.length; i++) {
-            masks[i] = 1L << bases[i][0] | 1L << bases[i][1];
-        }
-        return new BasisTable(n, 2, masks);
+        return new BasisTable(n, 2, java.util.List.of(bases));
     }
 
     @Test
