@@ -75,6 +75,14 @@ public final class Limits {
      */
     public static final long MATRIX_SEARCH_SUBSETS = 1L << 26;
 
+    /**
+     * Most 3-term relations a certificate's proof may list, as the verifier's own bound (it holds
+     * the CNF of every listed relation for the proof check). A core whose refutation needs more
+     * is not certified: the pipeline answers unknown before writing anything (the spike of rank
+     * 9 of docs/families.md needs 312,678).
+     */
+    public static final int CERTIFIED_RELATIONS = 250_000;
+
     private Limits() {
     }
 

@@ -37,6 +37,11 @@ class LimitsAgreementTest {
     }
 
     @Test
+    void theProducerListsNoMoreRelationsThanTheVerifierHolds() {
+        assertEquals(org.chirocore.matroid.Limits.CERTIFIED_RELATIONS, VerifierLimits.MAX_RELATIONS);
+    }
+
+    @Test
     void theVerifierReadsEveryMatroidFileTheProducerReads() {
         assertTrue(VerifierLimits.MAX_CERTIFICATE_BYTES >= org.chirocore.matroid.Limits.INPUT_BYTES,
                 "verify --input reads the same files as the producer");
