@@ -20,3 +20,7 @@ for n in 3 4 5 6 7 8; do
   chirocore reduce --cube "$n" --hyperplane "$h" --pull "$(printf '1%.0s' $(seq 1 "$n"))" \
     --out "certificates/corner-n$n.cert.json"
 done
+# The largest corner core (n = 9, 15 elements) with matrix witnesses wherever the real cube gives
+# one (docs/realisations.md, "Matrix witnesses in certificates").
+chirocore reduce --cube 9 --hyperplane 100000000,010000000,001000000,000100000,000010000,000001000,000000100,000000010,000000001 \
+  --pull 111111111 --matrix-witnesses --out certificates/corner-n9-matrices.cert.json

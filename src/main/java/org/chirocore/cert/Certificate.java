@@ -9,6 +9,7 @@ import org.chirocore.io.ResultJson;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
 import org.chirocore.matroid.Minor;
+import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.orient.Normalisation;
@@ -38,7 +39,7 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
     }
 
     /**
-     * The certificate of {@code found}, refuted by {@code refutation}.
+     * The certificate of {@code found}, refuted by {@code refutation}, with sign witnesses.
      * Re-checks every witness against the minor rebuilt here (one full relation scan each) and
      * that the refutation's normalisation is the one of the core, so nothing unchecked is written.
      *
@@ -54,7 +55,9 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
      * {@link WitnessForms#ORBITS}, an element other than its orbit's representative gets the
      * representative's witnesses transported by a listed automorphism ({@link ElementOrbits}); the
      * transported signs are re-checked like the others. When the core has too many automorphisms
-     * to list, every witness is given by its signs.
+     * to list, every witness is given by its signs. With {@link WitnessForms#MATRICES}, a minor
+     * that a real configuration of the core's construction realises gets that matrix (checked on
+     * all its maximal minors), the others their signs.
      *
      * @throws IllegalStateException as for {@link #of(CoreFinding, Refutation)}
      */
@@ -67,25 +70,27 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
                     + ", but the core's normalisation is " + normalisation + ": it was made for another matroid.");
         }
         Optional<ElementOrbits> orbits = forms == WitnessForms.ORBITS ? ElementOrbits.of(core) : Optional.empty();
+        MatrixWitnesses matrices = forms == WitnessForms.MATRICES ? MatrixWitnesses.of(found) : MatrixWitnesses.NONE;
         List<MinimalityWitness> entries = new ArrayList<>();
         for (int e = 0; e < core.size(); e++) {
-            entries.add(new MinimalityWitness(core.labels().get(e), witness(found, core, e, Operation.DELETION, orbits),
-                    witness(found, core, e, Operation.CONTRACTION, orbits)));
+            entries.add(new MinimalityWitness(core.labels().get(e), witness(found, core, e, Operation.DELETION, orbits, matrices),
+                    witness(found, core, e, Operation.CONTRACTION, orbits, matrices)));
         }
         return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
     }
 
-    /** The number of witnesses of the given kind ("signs" or "transported"). */
+    /** The number of witnesses of the given kind ("signs", "transported" or "matrix"). */
     public int witnessCount(String kind) {
         return minimality.stream().mapToInt(w -> w.count(kind)).sum();
     }
 
     /**
-     * The witness of the minor at e: the search's own, by its signs; or, given {@code orbits} and
-     * e not its orbit's representative f, f's transported to e, whose signs are re-checked here.
+     * The witness of the minor at e: given {@code orbits} and e not its orbit's representative f,
+     * f's transported to e, whose signs are re-checked here; else a matrix {@code matrices} finds;
+     * else the search's own, by its signs.
      */
     private static MinimalityWitness.Form witness(CoreFinding found, ExplicitMatroid core, int e, Operation operation,
-            Optional<ElementOrbits> orbits) {
+            Optional<ElementOrbits> orbits, MatrixWitnesses matrices) {
         // For a loop or coloop e, M\e = M/e, and Minor builds exactly that matroid either way.
         int[] single = {e};
         Matroid minor = operation == Operation.DELETION ? new Minor(core, new int[0], single)
@@ -94,6 +99,10 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             ElementOrbits o = orbits.get();
             WitnessCheck.checked(minor, o.relabelled(searched(found, core, o.representative()[e], operation), e, minor.labels()));
             return o.transported(core.labels(), e);
+        }
+        Optional<Realisation> m = matrices.find(e, operation == Operation.CONTRACTION, minor);
+        if (m.isPresent()) {
+            return new MinimalityWitness.Matrix(m.get());
         }
         return new MinimalityWitness.Signs(ResultJson.signString(WitnessCheck.checked(minor, searched(found, core, e, operation))));
     }

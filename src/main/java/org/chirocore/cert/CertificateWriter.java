@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.zip.GZIPOutputStream;
@@ -120,13 +121,23 @@ public final class CertificateWriter {
                 .build();
     }
 
-    /** A witness as the certificate writes it: a sign string, or {@code {"image": label, "under": [...]}}. */
+    /**
+     * A witness as the certificate writes it: a sign string, {@code {"image": label, "under": [...]}}
+     * or {@code {"matrix": [[column], ...]}}.
+     */
     static Json witness(MinimalityWitness.Form form) {
         if (form instanceof MinimalityWitness.Transported t) {
             return Json.Obj.builder()
                     .put("image", t.image())
                     .put("under", Json.Arr.ofInts(t.under().stream().mapToInt(Integer::intValue).toArray()))
                     .build();
+        }
+        if (form instanceof MinimalityWitness.Matrix m) {
+            List<Json> columns = new ArrayList<>();
+            for (long[] column : m.columns()) {
+                columns.add(new Json.Arr(Arrays.stream(column).<Json>mapToObj(Json.Num::of).toList()));
+            }
+            return Json.Obj.builder().put("matrix", new Json.Arr(columns)).build();
         }
         return new Json.Str(((MinimalityWitness.Signs) form).signs());
     }

@@ -2,6 +2,8 @@ package org.chirocore.cert;
 
 import java.util.List;
 
+import org.chirocore.matroid.Realisation;
+
 /**
  * The orientations proving that removing one element of a core leaves an orientable matroid.
  *
@@ -12,8 +14,8 @@ import java.util.List;
 public record MinimalityWitness(String element, Form deletion, Form contraction) {
 
     /** How one single-element minor is shown orientable; the certificate writes each form its own way. */
-    public sealed interface Form permits Signs, Transported {
-        /** The name of the kind, as {@code reduce} counts it: "signs" or "transported". */
+    public sealed interface Form permits Signs, Transported, Matrix {
+        /** The name of the kind, as {@code reduce} counts it: "signs", "transported" or "matrix". */
         String kind();
     }
 
@@ -48,6 +50,25 @@ public record MinimalityWitness(String element, Form deletion, Form contraction)
         @Override
         public String kind() {
             return "transported";
+        }
+    }
+
+    /**
+     * A realisation of the minor over Q: an integer matrix with as many rows as the minor's rank and
+     * one column per element of the minor, in its element order, whose non-zero maximal minors are
+     * exactly on the minor's bases (checked).
+     *
+     * @param realisation the matrix, on the minor's labels
+     */
+    public record Matrix(Realisation realisation) implements Form {
+        /** The columns, one per element of the minor, each with one entry per row. */
+        public List<long[]> columns() {
+            return realisation.columns();
+        }
+
+        @Override
+        public String kind() {
+            return "matrix";
         }
     }
 

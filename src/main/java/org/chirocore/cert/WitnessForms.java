@@ -8,5 +8,10 @@ public enum WitnessForms {
      * Signs only for one element per orbit of the core's automorphism group; every other element's
      * witnesses are its orbit representative's, transported by a stated automorphism ({@link ElementOrbits}).
      */
-    ORBITS
+    ORBITS,
+    /**
+     * An integer matrix realising the minor wherever the core's construction gives one
+     * (the real cube's configurations, docs/realisations.md), one sign per basis elsewhere.
+     */
+    MATRICES
 }

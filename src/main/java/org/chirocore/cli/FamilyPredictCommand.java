@@ -34,6 +34,9 @@ final class FamilyPredictCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private WitnessOption witnesses;
+
     @Option(names = "--prediction", paramLabel = "PREDICTION", required = true,
             description = "The predicted cores (JSON, see docs/families.md).")
     private Path predict;
@@ -46,7 +49,7 @@ final class FamilyPredictCommand implements Callable<Integer> {
         List<FamilyPrediction.Outcome> outcomes;
         try {
             FamilyPrediction.Prediction prediction = FamilyPrediction.Prediction.read(predict);
-            outcomes = new FamilyPrediction(family.definition(), prediction, out, budget.budget())
+            outcomes = new FamilyPrediction(family.definition(), prediction, out, budget.budget(), witnesses.form())
                     .run(bounds[0], bounds[1]);
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);

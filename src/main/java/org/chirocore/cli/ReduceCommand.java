@@ -257,7 +257,8 @@ final class ReduceCommand implements Callable<Integer> {
                 certificate.provenance().contracted().size(), inputSize));
         w.println("witnesses: " + 2 * certificate.minimality().size()
                 + " (every single-element deletion and contraction is orientable; " + certificate.witnessCount("signs")
-                + " by signs, " + certificate.witnessCount("transported") + " transported by automorphisms of the core)");
+                + " by signs, " + certificate.witnessCount("transported") + " transported by automorphisms of the core, "
+                + certificate.witnessCount("matrix") + " by matrices)");
         if (certificate.discovery() instanceof Discovery.Searched s) {
             w.println("search: " + s.stats().millis() + " ms, " + s.stats().decisions() + " decisions");
         }

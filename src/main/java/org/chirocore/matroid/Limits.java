@@ -60,6 +60,29 @@ public final class Limits {
      */
     public static final long PROOF_BYTES = 256L << 20;
 
+    /**
+     * Most determinant work of the matrix witnesses of one certificate, counted as the verifier
+     * counts it: C(m, r) · r³ per matrix of rank r on m elements. A minor whose matrix would pass
+     * it keeps a sign witness.
+     */
+    public static final long MATRIX_WITNESS_STEPS = 500_000_000L;
+
+    /**
+     * Most r-subsets walked while searching for matrix witnesses for one certificate: each
+     * candidate tried on a minor of rank r on m elements is charged C(m, r) (one determinant sign
+     * and one basis test each) before it is tried. Bounds the time of the search (about a minute);
+     * once spent, the remaining minors keep sign witnesses.
+     */
+    public static final long MATRIX_SEARCH_SUBSETS = 1L << 26;
+
+    /**
+     * Most 3-term relations a certificate's proof may list, as the verifier's own bound (it holds
+     * the CNF of every listed relation for the proof check). A core whose refutation needs more
+     * is not certified: the pipeline answers unknown before writing anything (the spike of rank
+     * 9 of docs/families.md needs 312,678).
+     */
+    public static final int CERTIFIED_RELATIONS = 250_000;
+
     private Limits() {
     }
 

@@ -70,6 +70,15 @@ public final class Realisation {
         return matrix;
     }
 
+    /** Copies of the columns, one per element, each with {@link #rank()} entries. */
+    public List<long[]> columns() {
+        List<long[]> out = new ArrayList<>();
+        for (long[] c : columns) {
+            out.add(c.clone());
+        }
+        return out;
+    }
+
     public List<String> labels() {
         return matrix.labels();
     }

@@ -15,6 +15,7 @@ import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.VerificationReport;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
+import org.chirocore.matroid.Limits;
 import org.chirocore.orient.Budget;
 import org.chirocore.orient.Chirotope;
 import org.chirocore.search.Progress;
@@ -134,7 +135,8 @@ public final class CertifiedReduction {
 
     /**
      * Certifies {@code found}, writes the certificate to {@code out} (a large proof beside it)
-     * and verifies the written file. Returns {@link Verified} or {@link Unknown}.
+     * and verifies the written file. Returns {@link Verified} or {@link Unknown} (a budget ran out,
+     * or the proof lists more relations than {@link Limits#CERTIFIED_RELATIONS}; nothing written).
      *
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException when the core turns out orientable, a witness fails its
@@ -157,7 +159,8 @@ public final class CertifiedReduction {
 
     /**
      * As {@link #certify(CoreFinding, Budget, Path, Optional)}, with the minimality witnesses in
-     * {@code forms}.
+     * {@code forms} (a matrix where the core's construction realises a minor, with
+     * {@link WitnessForms#MATRICES}).
      *
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException as for {@link #certify(CoreFinding, Budget, Path)}
@@ -169,6 +172,11 @@ public final class CertifiedReduction {
             return new Unknown("proving the core ran out of budget: " + o.reason());
         }
         Certificate certificate = ((Certification.Certified) certification).certificate();
+        int relations = certificate.refutation().relations().size();
+        if (relations > Limits.CERTIFIED_RELATIONS) {
+            return new Unknown("the proof needs " + relations + " 3-term relations, more than the "
+                    + Limits.CERTIFIED_RELATIONS + " a certificate may list (the verifier's limit); nothing was written");
+        }
         CertificateWriter.Written written = CertificateWriter.write(certificate, out);
         return new Verified(certificate, written, verifyWritten(out, written.dratFile(), input));
     }

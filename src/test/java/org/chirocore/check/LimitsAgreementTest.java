@@ -29,6 +29,19 @@ class LimitsAgreementTest {
     }
 
     @Test
+    void theVerifierChecksEveryMatrixWitnessTheProducerWrites() {
+        // the producer's entries are longs, of at most 19 decimal digits
+        assertTrue(VerifierLimits.MAX_MATRIX_DIGITS >= Long.toString(Long.MIN_VALUE).length() - 1);
+        assertTrue(VerifierLimits.MAX_DETERMINANT_STEPS >= org.chirocore.matroid.Limits.MATRIX_WITNESS_STEPS,
+                "the determinant work the producer allows itself must be within the verifier's");
+    }
+
+    @Test
+    void theProducerListsNoMoreRelationsThanTheVerifierHolds() {
+        assertEquals(org.chirocore.matroid.Limits.CERTIFIED_RELATIONS, VerifierLimits.MAX_RELATIONS);
+    }
+
+    @Test
     void theVerifierReadsEveryMatroidFileTheProducerReads() {
         assertTrue(VerifierLimits.MAX_CERTIFICATE_BYTES >= org.chirocore.matroid.Limits.INPUT_BYTES,
                 "verify --input reads the same files as the producer");

@@ -8,6 +8,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
+import org.chirocore.io.Json;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -96,6 +97,32 @@ class FamilyCommandTest {
                 "families/corner.predict.json", "--out", out.toString()).exit());
         assertEquals(2, CliRun.of("family", "predict", "families/corner.json", "--n", "3", "--prediction",
                 "families/corner.predict.json", "--threads", "2", "--out", out.toString()).exit());
+    }
+
+    /** The number of minimality witnesses written as matrices in a certificate file. */
+    private static long matrices(Path certificate) throws IOException {
+        Json.Arr minimality = Json.parse(Files.readString(certificate)).asObject("certificate").requireObject("content")
+                .requireArray("minimality");
+        return minimality.elements().stream().flatMap(e -> java.util.stream.Stream.of(((Json.Obj) e).require("deletion"),
+                ((Json.Obj) e).require("contraction"))).filter(w -> w instanceof Json.Obj).count();
+    }
+
+    @Test
+    void runAndPredictWriteMatrixWitnessesWhenAsked() throws IOException {
+        // the counts are those of docs/realisations.md: F7 gets 7 matrices of 14, the n = 4 core 15 of 16
+        Path run = dir.resolve("run");
+        assertEquals(0, CliRun.of("family", "run", "families/corner.json", "--n", "3..4", "--matrix-witnesses", "--out",
+                run.toString()).exit());
+        assertEquals(7, matrices(run.resolve("n=3.cert.json")));
+        assertEquals(15, matrices(run.resolve("n=4.cert.json")));
+        Path predict = dir.resolve("predict");
+        CliRun p = CliRun.of("family", "predict", "families/corner.json", "--n", "3", "--prediction",
+                "families/corner.predict.json", "--matrix-witnesses", "--out", predict.toString());
+        assertEquals(0, p.exit(), p.err());
+        assertEquals(7, matrices(predict.resolve("n=3.predicted.cert.json")));
+        Path plain = dir.resolve("plain");
+        assertEquals(0, CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", plain.toString()).exit());
+        assertEquals(0, matrices(plain.resolve("n=3.cert.json")));
     }
 
     @Test

@@ -251,6 +251,20 @@ final class BasisTable {
         return minor(e, true);
     }
 
+    /** The size, rank and number of bases of a matroid. */
+    record Shape(int size, int rank, long bases) {
+    }
+
+    /** The shape of core\e ({@code contract} false) or core/e, counted without building the minor: O(bases). */
+    Shape minorShape(int e, boolean contract) {
+        long containing = 0;
+        for (int[] b : canonical) {
+            containing += contains(b, e) ? 1 : 0;
+        }
+        boolean wantContaining = contract ? containing != 0 : containing == canonical.length;
+        return new Shape(size - 1, rank - (wantContaining ? 1 : 0), wantContaining ? containing : canonical.length - containing);
+    }
+
     private BasisTable minor(int e, boolean contract) {
         int containing = 0;
         for (int[] b : canonical) {

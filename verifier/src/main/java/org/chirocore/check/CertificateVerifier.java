@@ -34,8 +34,8 @@ import org.chirocore.check.VerificationReport.Status;
  * failed one are reported as NOT_RUN.
  *
  * <p>Cost, for b bases of rank r on n elements: basis exchange O(b² r² log b); the DRAT check the
- * unit propagation of the proof; the witnesses O(n · b r² n² log b); the provenance one exact rank
- * per r-subset of the core's ground set.
+ * unit propagation of the proof; a sign witness O(b r² n² log b), a matrix witness C(n − 1, r') exact
+ * r' × r' rank tests (r' its rank); the provenance one exact rank per r-subset of the core's ground set.
  */
 public final class CertificateVerifier {
     public static final String FORMAT = "format";
@@ -370,23 +370,39 @@ public final class CertificateVerifier {
         }
 
         /**
-         * Each explicit witness has one sign per basis of its minor and satisfies all its 3-term
-         * relations ([BLSWZ, Thm. 3.6.2]); each transported one refers to an explicit witness of
-         * the same kind through a stated automorphism (docs/verifier.md, "Witnesses by symmetry").
+         * Each witness orients its minor: a sign string has one sign per basis and satisfies every
+         * 3-term relation ([BLSWZ, Thm. 3.6.2]); a transported one refers to an explicit witness of
+         * the same kind through a stated automorphism (docs/verifier.md, "Witnesses by symmetry");
+         * a matrix has non-zero maximal minors exactly on the bases ({@link MatrixWitness}). The
+         * work of all witnesses is bounded before any is checked.
          */
         String minimality() throws Failure {
-            long work = 0;
+            long relations = 0;
+            long determinants = 0;
             int transported = 0;
+            int matrices = 0;
             for (int e = 0; e < n; e++) {
                 Witness w = c.witnesses().get(e);
-                if (w.deletion() instanceof JsonTree.Str || w.contraction() instanceof JsonTree.Str) {
-                    work = Math.addExact(work, Relations.evaluations(core, e));
+                for (boolean contract : new boolean[] {false, true}) {
+                    JsonTree.Value witness = contract ? w.contraction() : w.deletion();
+                    BasisTable.Shape minor = core.minorShape(e, contract);
+                    if (witness instanceof JsonTree.Str) {
+                        relations = saturatingAdd(relations, Relations.evaluations(minor));
+                    } else if (isMatrix(witness)) {
+                        determinants = saturatingAdd(determinants, MatrixWitness.steps(minor));
+                        matrices++;
+                    } else if (TransportedWitness.isTransported(witness)) {
+                        transported++;
+                    }
                 }
-                transported += (TransportedWitness.isTransported(w.deletion()) ? 1 : 0) + (TransportedWitness.isTransported(w.contraction()) ? 1 : 0);
             }
-            if (work > VerifierLimits.MAX_WITNESS_RELATIONS) {
-                throw new Failure("the witnesses of " + n + " minors need " + work + " relation evaluations, more than the verifier's limit of "
+            if (relations > VerifierLimits.MAX_WITNESS_RELATIONS) {
+                throw new Failure("the sign witnesses need " + relations + " relation evaluations, more than the verifier's limit of "
                         + VerifierLimits.MAX_WITNESS_RELATIONS + "; not checked");
+            }
+            if (determinants > VerifierLimits.MAX_DETERMINANT_STEPS) {
+                throw new Failure("the matrix witnesses need " + determinants + " elimination steps, more than the verifier's limit of "
+                        + VerifierLimits.MAX_DETERMINANT_STEPS + " (MAX_DETERMINANT_STEPS); not checked");
             }
             // per transported witness: one lookup per basis of its minor, and at most one per basis of the core for its automorphism
             long lookups = 2L * transported * core.count();
@@ -402,8 +418,18 @@ public final class CertificateVerifier {
                 witness(e, false, w.deletion(), "the deletion witness of " + w.element());
                 witness(e, true, w.contraction(), "the contraction witness of " + w.element());
             }
-            return 2 * n + " witnesses orient every single-element deletion and contraction (" + (2 * n - transported) + " by signs, "
-                    + transported + " transported" + (transported == 0 ? "" : " by " + checkedAutomorphisms.size() + " stated automorphisms") + ")";
+            return 2 * n + " witnesses orient every single-element deletion and contraction (" + (2 * n - transported - matrices)
+                    + " by signs, " + transported + " transported"
+                    + (transported == 0 ? "" : " by " + checkedAutomorphisms.size() + " stated automorphisms") + ", " + matrices
+                    + " by matrices)";
+        }
+
+        private static long saturatingAdd(long a, long b) {
+            return a > Long.MAX_VALUE - b ? Long.MAX_VALUE : a + b;
+        }
+
+        private static boolean isMatrix(JsonTree.Value witness) {
+            return witness instanceof JsonTree.Obj o && o.has("matrix");
         }
 
         /**
@@ -419,8 +445,11 @@ public final class CertificateVerifier {
                 }
             } else if (TransportedWitness.isTransported(witness)) {
                 transported(e, contraction, minor, TransportedWitness.Stated.read((JsonTree.Obj) witness, what), what);
+            } else if (isMatrix(witness)) {
+                MatrixWitness.check(minor, (JsonTree.Obj) witness, what);
             } else {
-                throw new Failure(what + " is an object without \"image\"; a witness is a sign string or {\"image\": label, \"under\": [...]}");
+                throw new Failure(what + " is an object without \"image\" or \"matrix\"; a witness is a sign string, "
+                        + "{\"image\": label, \"under\": [...]} or {\"matrix\": [...]}");
             }
         }
 

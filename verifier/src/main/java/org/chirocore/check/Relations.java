@@ -131,22 +131,11 @@ final class Relations {
     }
 
     /**
-     * An upper bound on the relations {@link #violated} evaluates for the two minors core\e and
-     * core/e: per minor, bases · C(rank, 2) · C(size − rank, 2).
+     * An upper bound on the relations {@link #violated} evaluates on a matroid of this shape:
+     * bases · C(rank, 2) · C(size − rank, 2).
      */
-    static long evaluations(BasisTable core, int e) {
-        long containing = 0;
-        for (int k = 0; k < core.count(); k++) {
-            containing += BasisTable.contains(core.basis(k), e) ? 1 : 0;
-        }
-        boolean loop = containing == 0;
-        boolean coloop = containing == core.count();
-        long deletionBases = coloop ? core.count() : core.count() - containing;
-        int deletionRank = coloop ? core.rank - 1 : core.rank;
-        long contractionBases = loop ? core.count() : containing;
-        int contractionRank = loop ? core.rank : core.rank - 1;
-        return deletionBases * pairs(deletionRank) * pairs(core.size - 1 - deletionRank)
-                + contractionBases * pairs(contractionRank) * pairs(core.size - 1 - contractionRank);
+    static long evaluations(BasisTable.Shape minor) {
+        return minor.bases() * pairs(minor.rank()) * pairs(minor.size() - minor.rank());
     }
 
     private static long pairs(int k) {

@@ -33,6 +33,16 @@ final class VerifierLimits {
     /** Most 3-term relations evaluated over all minimality witnesses together. */
     static final long MAX_WITNESS_RELATIONS = 100_000_000L;
     /**
+     * Most decimal digits of an entry of a matrix witness (sign not counted): bounds the size of
+     * the numbers in the exact elimination, together with {@link #MAX_DETERMINANT_STEPS}.
+     */
+    static final int MAX_MATRIX_DIGITS = 40;
+    /**
+     * Most elimination steps for the matrix witnesses together, counted as C(m, r) · r³ for a
+     * witness of rank r on m elements (one determinant per r-subset of its columns).
+     */
+    static final long MAX_DETERMINANT_STEPS = 500_000_000L;
+    /**
      * Most basis lookups for the witnesses transported by symmetry, counted as twice the core's
      * basis count per transported witness (one lookup per basis of its minor, and at most one per
      * basis of the core to check its automorphism).
