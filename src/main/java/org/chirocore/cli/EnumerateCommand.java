@@ -92,6 +92,9 @@ final class EnumerateCommand implements Callable<Integer> {
         if (!symmetry.equals("auto") && !symmetry.equals("none")) {
             throw new ParameterException(spec.commandLine(), "--symmetry is auto or none, not \"" + symmetry + "\".");
         }
+        if (totalTime < 0 || Double.isNaN(totalTime)) {
+            throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
+        }
         output.checkDirectory(out, Arrays.asList(inputs.file()), List.of(SUMMARY_JSON, SUMMARY_MD, COMPLETENESS_JSON));
         Subject input = inputs.choose();
         if (!SteeredSearch.explorable(input.matroid())) {
@@ -112,9 +115,6 @@ final class EnumerateCommand implements Callable<Integer> {
             Files.createDirectories(out);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot create the output directory: " + e, e);
-        }
-        if (totalTime < 0 || Double.isNaN(totalTime)) {
-            throw new ParameterException(spec.commandLine(), "--total-time must not be negative; got " + totalTime + ".");
         }
         long deadline = totalTime == 0 ? 0 : System.currentTimeMillis() + Math.round(totalTime * 1000);
         SearchSettings settings = new SearchSettings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget().until(deadline));

@@ -1,6 +1,7 @@
 package org.chirocore.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -46,5 +47,13 @@ class EnumerateCommandTest {
                 "--symmetry", "all", "--out", dir.toString()).exit());
         assertEquals(2, CliRun.of("enumerate", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111",
                 "--rank", "2", "--out", dir.toString()).exit());
+    }
+
+    @Test
+    void aNegativeTotalTimeIsRefusedBeforeTheOutputDirectoryIsMade() {
+        Path fresh = dir.resolve("not-made");
+        assertEquals(2, CliRun.of("enumerate", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111",
+                "--total-time", "-5", "--out", fresh.toString()).exit());
+        assertFalse(Files.exists(fresh), "a refused command leaves nothing behind");
     }
 }
