@@ -53,6 +53,7 @@ final class SweepRunKind implements RunKind {
         try {
             boolean rankN = r.has("rankNCores");
             List<List<Document.Inline>> rows = new ArrayList<>();
+            List<List<Document.Inline>> rankRows = new ArrayList<>();
             for (Json.Obj p : pairs(r)) {
                 Json.Obj core = p.requireObject("core");
                 List<Document.Inline> row = new ArrayList<>(List.of(text(Long.toString(p.requireLong("n"))),
@@ -62,32 +63,30 @@ final class SweepRunKind implements RunKind {
                         text(p.requireObject("contracted").requireString("verdict")),
                         text(core.requireLong("elements") + ", " + core.requireLong("rank")),
                         p.requireObject("contracted").has("certificate") ? classOf.apply(file(dir, p)) : text("-")));
-                if (rankN) {
-                    row.add(text(rankCore(p)));
-                    row.add(rankCoreFile(dir, p).map(f -> classOf.apply(f)).orElse(text("-")));
-                }
                 rows.add(row);
+                rankRows.add(List.of(text(Long.toString(p.requireLong("n"))), text(Long.toString(p.requireLong("index"))),
+                        text(rankCore(p)), rankCoreFile(dir, p).map(f -> classOf.apply(f)).orElse(text("-"))));
             }
-            List<String> header = new ArrayList<>(List.of("n", "#", "O", "orbit", "pulled cube", "O contracted",
-                    "core k, r", "class"));
-            String rankNNote = "";
-            if (rankN) {
-                header.addAll(List.of("rank-n core", "its class"));
-                long limit = r.requireObject("rankNCores").requireLong("timeLimitMillis");
-                rankNNote = " Rank-n core: a minor-minimal non-orientable minor of M'/O by deletions only, searched "
-                        + (limit == 0 ? "without a time limit" : "within " + seconds(limit) + " per pair")
-                        + " (elements, rank, bases; \"unknown\" is no verdict, only a budget that ran out).";
-            }
-            return List.of(Document.Paragraph.of("Every general-position pair (H, O) of the real n-cube up to its "
+            List<String> header = List.of("n", "#", "O", "orbit", "pulled cube", "O contracted", "core k, r", "class");
+            List<Document.Block> out = new ArrayList<>(List.of(Document.Paragraph.of("Every general-position pair (H, O) of the real n-cube up to its "
                             + "symmetries (seed " + r.requireLong("seed") + ", strategy " + r.requireString("strategy")
                             + "); orientable pulls found: " + r.requireArray("orientablePulls").size() + "."),
                     new Document.Heading("Pairs"),
                     new Document.Table(header, rows),
                     Document.Paragraph.of("Orbit: the pairs in the orbit of (H, O) under the cube's symmetries; core k, r: "
-                            + "the core's elements and rank; class: its isomorphism class when the catalogue names it."
-                            + rankNNote),
-                    Document.Paragraph.of("A referee re-checks the certificates with:"),
-                    RunFiles.verifyCommand(dir, "n=*/*.cert.json"));
+                            + "the core's elements and rank; class: its isomorphism class when the catalogue names it.")));
+            if (rankN) {
+                // a table of its own: beside the verdicts the rows would not fit a printed page
+                long limit = r.requireObject("rankNCores").requireLong("timeLimitMillis");
+                out.add(new Document.Heading("Cores of rank n"));
+                out.add(new Document.Table(List.of("n", "#", "rank-n core", "its class"), rankRows));
+                out.add(Document.Paragraph.of("Rank-n core: a minor-minimal non-orientable minor of M'/O by deletions only, searched "
+                        + (limit == 0 ? "without a time limit" : "within " + seconds(limit) + " per pair")
+                        + " (elements, rank, bases; \"unknown\" is no verdict, only a budget that ran out)."));
+            }
+            out.add(Document.Paragraph.of("A referee re-checks the certificates with:"));
+            out.add(RunFiles.verifyCommand(dir, "n=*/*.cert.json"));
+            return out;
         } catch (IllegalArgumentException e) {
             throw new ReportException(dir.resolve(RECORD) + ": cannot be read as a sweep: " + e.getMessage(), e);
         }

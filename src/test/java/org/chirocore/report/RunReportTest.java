@@ -124,7 +124,7 @@ class RunReportTest {
         assertAll(() -> assertEquals("", Structure.latexProblem(tex)),
                 () -> assertTrue(tex.contains("$F_7$") && tex.contains("$AG(2,3)\\setminus e$"), "classes named"),
                 () -> assertTrue(tex.contains("rank-n core") && tex.contains("7, 3, 28 bases"),
-                        "the column of the cores of rank n; n = 3: the Fano plane, 28 bases (docs/sweep.md)"),
+                        "the table of the cores of rank n; n = 3: the Fano plane, 28 bases (docs/sweep.md)"),
                 () -> assertEquals(23 + count(Files.readString(sweep.resolve("sweep.json")), "\"status\": \"found\""),
                         count(tex, "\\subsection*{n = "),
                         "one section per pair (23 pairs, docs/sweep.md) and one per core of rank n found"));
