@@ -193,16 +193,28 @@ public final class MatrixMatroid implements Matroid {
 
     private int rankBig(int[] set) {
         BigInteger[][] a = bigColumns(set);
-        int m = rows;
-        int n = set.length;
+        return eliminate(a, set.length);
+    }
+
+    /**
+     * Bareiss's fraction-free elimination of {@code a} in place, pivoting on its first
+     * {@code pivotColumns} columns (rows are swapped, every later column is updated; every division
+     * is exact by Sylvester's identity). Afterwards the rows from the returned rank on are zero in
+     * the pivot columns, so with the pivot columns a set C they span the quotient by C.
+     *
+     * @return the rank of the first {@code pivotColumns} columns
+     */
+    static int eliminate(BigInteger[][] a, int pivotColumns) {
+        int m = a.length;
+        int width = m == 0 ? 0 : a[0].length;
         BigInteger prev = BigInteger.ONE;
         int r = 0;
-        for (int col = 0; col < n && r < m; col++) {
+        for (int col = 0; col < pivotColumns && r < m; col++) {
             if (raisePivot(a, r, col) < 0) {
                 continue;
             }
             for (int i = r + 1; i < m; i++) {
-                for (int j = col + 1; j < n; j++) {
+                for (int j = col + 1; j < width; j++) {
                     a[i][j] = a[r][col].multiply(a[i][j]).subtract(a[i][col].multiply(a[r][j])).divide(prev);
                 }
                 a[i][col] = BigInteger.ZERO;

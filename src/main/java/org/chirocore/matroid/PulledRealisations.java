@@ -175,28 +175,7 @@ public final class PulledRealisations {
                 a[i][j] = BigInteger.valueOf(all.get(j)[i]);
             }
         }
-        int rank = 0;
-        BigInteger previous = BigInteger.ONE;
-        for (int c = 0; c < contract.size() && rank < d; c++) {
-            int p = rank;
-            while (p < d && a[p][c].signum() == 0) {
-                p++;
-            }
-            if (p == d) {
-                continue;
-            }
-            BigInteger[] t = a[p];
-            a[p] = a[rank];
-            a[rank] = t;
-            for (int i = rank + 1; i < d; i++) {
-                for (int j = c + 1; j < width; j++) {
-                    a[i][j] = a[rank][c].multiply(a[i][j]).subtract(a[i][c].multiply(a[rank][j])).divide(previous);
-                }
-                a[i][c] = BigInteger.ZERO;
-            }
-            previous = a[rank][c];
-            rank++;
-        }
+        int rank = MatrixMatroid.eliminate(a, contract.size());
         long[][] out = new long[d - rank][keep.size()];
         for (int i = rank; i < d; i++) {
             BigInteger g = BigInteger.ZERO;

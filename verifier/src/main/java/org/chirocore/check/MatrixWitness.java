@@ -82,7 +82,7 @@ final class MatrixWitness {
                 throw new Failure(what + ": the columns " + Arrays.toString(subset) + " (elements numbered in the minor) have "
                         + (basis ? "determinant 0, but they are a basis of the minor" : "a non-zero determinant, but they are not a basis of the minor"));
             }
-        } while (next(subset, minor.size));
+        } while (ProvenanceCheck.nextCombination(subset, minor.size));
     }
 
     /** An entry: a JSON integer of at most {@link VerifierLimits#MAX_MATRIX_DIGITS} digits. */
@@ -162,22 +162,5 @@ final class MatrixWitness {
             rank++;
         }
         return rank;
-    }
-
-    /** Advances {@code subset} to the next r-subset of {0..n−1} in lexicographic order; false after the last. */
-    private static boolean next(int[] subset, int n) {
-        int r = subset.length;
-        int i = r - 1;
-        while (i >= 0 && subset[i] == n - r + i) {
-            i--;
-        }
-        if (i < 0) {
-            return false;
-        }
-        subset[i]++;
-        for (int k = i + 1; k < r; k++) {
-            subset[k] = subset[k - 1] + 1;
-        }
-        return true;
     }
 }
