@@ -35,18 +35,19 @@ public sealed interface Certification {
      *     re-check: either is a bug of whoever found the core, and no certificate must be written then
      */
     static Certification of(CoreFinding found, Budget budget) {
-        return of(found, budget, WitnessForms.SIGNS);
+        return of(found, budget, CertificateForms.DEFAULT);
     }
 
     /**
-     * Certifies {@code found} as {@link #of(CoreFinding, Budget)}, its minimality witnesses in {@code forms}.
+     * Certifies {@code found} as {@link #of(CoreFinding, Budget)}, its minimality witnesses and its
+     * refutation in {@code forms}.
      *
      * @throws IllegalStateException as for {@link #of(CoreFinding, Budget)}
      */
-    static Certification of(CoreFinding found, Budget budget, WitnessForms forms) {
-        RefutationSearch.Outcome outcome = new RefutationSearch(budget).refute(found.core());
+    static Certification of(CoreFinding found, Budget budget, CertificateForms forms) {
+        RefutationSearch.Outcome outcome = new RefutationSearch(budget, forms.trimRelations()).refute(found.core());
         if (outcome instanceof RefutationSearch.Refuted r) {
-            return new Certified(Certificate.of(found, r.refutation(), forms));
+            return new Certified(Certificate.of(found, r.refutation(), forms.witnesses()));
         }
         if (outcome instanceof RefutationSearch.OutOfBudget o) {
             return new OutOfBudget(o.reason());

@@ -35,7 +35,7 @@ final class FamilyPredictCommand implements Callable<Integer> {
     private BudgetOptions budget;
 
     @Mixin
-    private WitnessOption witnesses;
+    private ProofFormOptions proofForms;
 
     @Option(names = "--prediction", paramLabel = "PREDICTION", required = true,
             description = "The predicted cores (JSON, see docs/families.md).")
@@ -49,7 +49,7 @@ final class FamilyPredictCommand implements Callable<Integer> {
         List<FamilyPrediction.Outcome> outcomes;
         try {
             FamilyPrediction.Prediction prediction = FamilyPrediction.Prediction.read(predict);
-            outcomes = new FamilyPrediction(family.definition(), prediction, out, budget.budget(), witnesses.form())
+            outcomes = new FamilyPrediction(family.definition(), prediction, out, budget.budget(), proofForms.forms())
                     .run(bounds[0], bounds[1]);
         } catch (FamilyException e) {
             throw new BadInputException(e.getMessage(), e);

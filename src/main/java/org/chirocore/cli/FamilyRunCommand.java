@@ -48,7 +48,7 @@ final class FamilyRunCommand implements Callable<Integer> {
     private ThreadsOption threads;
 
     @Mixin
-    private WitnessOption witnesses;
+    private ProofFormOptions proofForms;
 
     @Option(names = "--shard", paramLabel = "i/k",
             description = "Run only the n of A..B with n mod k = i (0 <= i < k); join the shards' directories with "
@@ -63,7 +63,7 @@ final class FamilyRunCommand implements Callable<Integer> {
         FamilyTable table;
         try {
             FamilyRun.Settings settings = new FamilyRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(),
-                    threadCount, witnesses.form());
+                    threadCount, proofForms.forms());
             FamilyRun run = new FamilyRun(family.definition(), family.out(), settings, family.console());
             output.checkReplacing(run.otherRun());
             table = run.run(bounds[0], bounds[1], shard());

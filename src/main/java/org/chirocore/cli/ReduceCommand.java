@@ -70,7 +70,7 @@ final class ReduceCommand implements Callable<Integer> {
     private BudgetOptions budget;
 
     @Mixin
-    private WitnessOption witnesses;
+    private ProofFormOptions proofForms;
 
     @Mixin
     private OutputOptions output;
@@ -124,7 +124,7 @@ final class ReduceCommand implements Callable<Integer> {
         CertifiedReduction.Outcome outcome;
         try {
             CertifiedReduction.Settings settings = new CertifiedReduction.Settings(seed.seed(), strategy,
-                    budget.budget(), witnesses.form());
+                    budget.budget(), proofForms.forms());
             Subject subject = focus ? input : input.withoutFocus();
             if (smallest) {
                 return smallest(subject, settings, progress);
@@ -139,7 +139,7 @@ final class ReduceCommand implements Callable<Integer> {
                 }
                 outcome = steered instanceof SteeredSearch.Found f
                         ? CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()), budget.budget(),
-                                out, subject.file(), settings.witnesses())
+                                out, subject.file(), settings.forms())
                         : new CertifiedReduction.Unknown(((SteeredSearch.Unknown) steered).reason());
             } else {
                 outcome = new CertifiedReduction(settings, progress).run(subject, out);
@@ -193,7 +193,7 @@ final class ReduceCommand implements Callable<Integer> {
         SmallestCore.Found found = (SmallestCore.Found) r;
         CertifiedReduction.Outcome outcome = CertifiedReduction.certify(
                 CoreFinding.searched(found.core(), subject.source()), budget.budget(), out, subject.file(),
-                settings.witnesses());
+                settings.forms());
         if (!(outcome instanceof CertifiedReduction.Verified v)) {
             w.println("unknown: " + ((CertifiedReduction.Unknown) outcome).reason() + "; no certificate written");
             return ExitCodes.UNKNOWN;

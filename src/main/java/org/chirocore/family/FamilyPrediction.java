@@ -15,7 +15,7 @@ import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Discovery;
 import org.chirocore.cert.Provenance;
 import org.chirocore.cert.Source;
-import org.chirocore.cert.WitnessForms;
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.Matroid;
@@ -162,20 +162,20 @@ public final class FamilyPrediction {
     private final Prediction prediction;
     private final Path dir;
     private final Budget budget;
-    private final WitnessForms witnesses;
+    private final CertificateForms forms;
 
     /** A check of {@code prediction} for {@code family}, writing certificates with sign witnesses into {@code dir}. */
     public FamilyPrediction(FamilyDefinition family, Prediction prediction, Path dir, Budget budget) {
-        this(family, prediction, dir, budget, WitnessForms.SIGNS);
+        this(family, prediction, dir, budget, CertificateForms.DEFAULT);
     }
 
-    /** As {@link #FamilyPrediction(FamilyDefinition, Prediction, Path, Budget)}, the minimality witnesses in {@code witnesses}. */
-    public FamilyPrediction(FamilyDefinition family, Prediction prediction, Path dir, Budget budget, WitnessForms witnesses) {
+    /** As {@link #FamilyPrediction(FamilyDefinition, Prediction, Path, Budget)}, the minimality witnesses and the refutation in {@code forms}. */
+    public FamilyPrediction(FamilyDefinition family, Prediction prediction, Path dir, Budget budget, CertificateForms forms) {
         this.family = family;
         this.prediction = prediction;
         this.dir = dir;
         this.budget = budget;
-        this.witnesses = witnesses;
+        this.forms = forms;
     }
 
     /** The certificate's file name of a confirmed prediction at n: {@code n=K.predicted.cert.json}. */
@@ -243,7 +243,7 @@ public final class FamilyPrediction {
                 contract, deleted), ((MinimalityDecider.Minimal) proof).witnesses(),
                 new Discovery.Predicted(1 + 2 * minor.size(), (System.nanoTime() - start) / 1_000_000));
         String name = certificateName(n);
-        CertifiedReduction.Outcome written = CertifiedReduction.certify(found, budget, dir.resolve(name), Optional.empty(), witnesses);
+        CertifiedReduction.Outcome written = CertifiedReduction.certify(found, budget, dir.resolve(name), Optional.empty(), forms);
         if (written instanceof CertifiedReduction.Unknown u) {
             return new Unknown(n, u.reason());
         }

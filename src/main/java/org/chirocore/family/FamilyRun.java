@@ -12,7 +12,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 
 import org.chirocore.cert.CertificateWriter;
-import org.chirocore.cert.WitnessForms;
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.VerificationReport;
 import org.chirocore.io.InputFiles;
@@ -52,22 +52,22 @@ public final class FamilyRun {
      * @param strategy the strategy of every member's search
      * @param budget the budget of each orientability decision
      * @param threads how many members run at once, at least 1
-     * @param witnesses how new certificates state their minimality witnesses (an existing certificate that
-     *     verifies is reused whatever its form)
+     * @param forms how new certificates state their minimality witnesses and refutation (an existing
+     *     certificate that verifies is reused whatever its forms)
      */
-    public record Settings(long seed, Strategy strategy, Budget budget, int threads, WitnessForms witnesses) {
+    public record Settings(long seed, Strategy strategy, Budget budget, int threads, CertificateForms forms) {
         public Settings {
-            if (strategy == null || budget == null || witnesses == null) {
-                throw new IllegalArgumentException("Family run settings need a strategy, a budget and a witness form.");
+            if (strategy == null || budget == null || forms == null) {
+                throw new IllegalArgumentException("Family run settings need a strategy, a budget and certificate forms.");
             }
             if (threads < 1) {
                 throw new IllegalArgumentException("A family run needs at least 1 thread, not " + threads + ".");
             }
         }
 
-        /** Settings whose new certificates state every witness by its signs. */
+        /** Settings whose new certificates state every witness by its signs and every relation the loop added. */
         public Settings(long seed, Strategy strategy, Budget budget, int threads) {
-            this(seed, strategy, budget, threads, WitnessForms.SIGNS);
+            this(seed, strategy, budget, threads, CertificateForms.DEFAULT);
         }
     }
 
@@ -219,7 +219,7 @@ public final class FamilyRun {
         }
         listener.stage(n, "reducing, certifying and verifying");
         CertifiedReduction.Outcome outcome = new CertifiedReduction(new CertifiedReduction.Settings(settings.seed(),
-                settings.strategy(), settings.budget(), settings.witnesses()), Progress.SILENT).run(m.subject(), file);
+                settings.strategy(), settings.budget(), settings.forms()), Progress.SILENT).run(m.subject(), file);
         if (outcome instanceof CertifiedReduction.Orientable) {
             return noCore(file, new MemberResult.Orientable(n, elements, rank));
         }

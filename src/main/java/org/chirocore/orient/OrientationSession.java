@@ -21,10 +21,10 @@ import org.sat4j.specs.TimeoutException;
  * restriction M|S of full rank (a relation of M lies in M|S iff it mentions no element outside
  * S), and an unsatisfiable answer comes with the elements the solver needed.
  *
- * <p>This class is the only one that talks to sat4j; it turns sat4j's exceptions into answers:
+ * <p>This class and {@link RelationCore} are the only ones that talk to sat4j; this one turns sat4j's exceptions into answers:
  * a contradiction while adding clauses is unsatisfiability, a time-out is "unknown". A session
- * built with a {@link DratLog} (package-private, for {@link RefutationSearch}) also keeps the
- * relations it added, in order, and has the solver log its learned and deleted clauses.
+ * built for {@link RefutationSearch} ({@link #recording}) keeps the relations it added, in order, and
+ * may have the solver log its learned and deleted clauses to a {@link DratLog}.
  */
 public final class OrientationSession {
     /** Violated relations added per round; bounds the memory one round may take. */
@@ -34,7 +34,14 @@ public final class OrientationSession {
      * on the 5-cube corner construction (31 elements, rank 5) a cap of 50 decides in 4 rounds and
      * about 1 s, where taking the first 20,000 violations in scan order needed 41 rounds and 39 s.
      */
-    private static final int RELATIONS_PER_X = 50;
+    static final int RELATIONS_PER_X = 50;
+    /**
+     * The per-X cap of a session that only finds a refutation's relations for {@link RelationCore}
+     * to cut down: fewer relations per X and round give the solver fewer redundant relations to
+     * carry. On the tipless rank-n spikes (docs/families.md) a cap of 2 added 21,108 relations
+     * at n = 8 where 50 added 95,667, and finished in 30 s instead of 51 s, 0.9 GB of heap instead of 3.5.
+     */
+    static final int FINDER_RELATIONS_PER_X = 2;
 
     /** The result of one {@link #solve}. */
     public sealed interface Outcome {
@@ -61,8 +68,9 @@ public final class OrientationSession {
     private final ISolver solver;
     private final RelationScan scan;
     private final long started;
-    /** The relations whose clauses went to the solver, in order; null unless proof logging. */
+    /** The relations whose clauses went to the solver, in order; null unless recording. */
     private final List<GpRelation> added;
+    private final int perX;
     private boolean contradiction;
     private long relations;
     private long clauses;
@@ -81,18 +89,29 @@ public final class OrientationSession {
      * A session without selectors whose solver logs its clausal proof to {@code log}; it records
      * the relations it adds (see {@link #addedRelations}).
      */
-    OrientationSession(BasisIndex index, Budget budget, DratLog log) {
-        this(index, false, budget, log);
+    /**
+     * A session without selectors that records the relations it adds (see {@link #addedRelations}),
+     * with its solver logging to {@code log} unless that is null, adding at most {@code perX}
+     * violated relations per (r−2)-set X and round.
+     */
+    static OrientationSession recording(BasisIndex index, Budget budget, DratLog log, int perX) {
+        return new OrientationSession(index, false, budget, log, true, perX);
     }
 
     private OrientationSession(BasisIndex index, boolean selectors, Budget budget, DratLog log) {
+        this(index, selectors, budget, log, false, RELATIONS_PER_X);
+    }
+
+    private OrientationSession(BasisIndex index, boolean selectors, Budget budget, DratLog log, boolean record,
+            int perX) {
         this.index = index;
         this.selectors = selectors;
         this.budget = budget;
         this.solver = SolverFactory.newDefault();
         this.scan = new RelationScan(index);
         this.started = System.currentTimeMillis();
-        this.added = log == null ? null : new ArrayList<>();
+        this.added = record ? new ArrayList<>() : null;
+        this.perX = perX;
         if (log != null) {
             solver.setSearchListener(log);
         }
@@ -135,6 +154,11 @@ public final class OrientationSession {
             }
             addClause(clause);
         }
+    }
+
+    /** Gives the solver the clauses of {@code given} before any solve, in order (a known refutation's). */
+    void addAll(List<GpRelation> given) {
+        given.forEach(this::add);
     }
 
     /**
@@ -181,7 +205,7 @@ public final class OrientationSession {
                 return new Unsatisfiable(selectors ? neededElements() : active);
             }
             byte[] signs = signsOfModel();
-            List<GpRelation> violated = scan.violated(signs, active, RELATIONS_PER_ROUND, RELATIONS_PER_X);
+            List<GpRelation> violated = scan.violated(signs, active, RELATIONS_PER_ROUND, perX);
             if (violated.isEmpty()) {
                 return new Satisfiable(signs);
             }
@@ -219,7 +243,7 @@ public final class OrientationSession {
 
     /**
      * The relations whose clauses were given to the solver, in the order added; only for a
-     * proof-logging session.
+     * recording session.
      */
     List<GpRelation> addedRelations() {
         return List.copyOf(added);

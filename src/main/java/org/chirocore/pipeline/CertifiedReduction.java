@@ -10,7 +10,7 @@ import org.chirocore.cert.Certificate;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.Certification;
 import org.chirocore.cert.CoreFinding;
-import org.chirocore.cert.WitnessForms;
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.check.VerificationReport;
 import org.chirocore.io.AtomicFiles;
@@ -84,18 +84,18 @@ public final class CertifiedReduction {
      * @param seed the seed of the element order
      * @param strategy which single-element minors to try first
      * @param budget the budget of each decision and of the refutation
-     * @param witnesses the forms of the minimality witnesses written
+     * @param forms the forms of the minimality witnesses and of the refutation written
      */
-    public record Settings(long seed, Strategy strategy, Budget budget, WitnessForms witnesses) {
+    public record Settings(long seed, Strategy strategy, Budget budget, CertificateForms forms) {
         public Settings {
-            if (strategy == null || budget == null || witnesses == null) {
-                throw new IllegalArgumentException("Pipeline settings need a strategy, a budget and a witness form.");
+            if (strategy == null || budget == null || forms == null) {
+                throw new IllegalArgumentException("Pipeline settings need a strategy, a budget and certificate forms.");
             }
         }
 
-        /** Settings writing sign witnesses only. */
+        /** Settings writing sign witnesses and every relation the refutation's loop added. */
         public Settings(long seed, Strategy strategy, Budget budget) {
-            this(seed, strategy, budget, WitnessForms.SIGNS);
+            this(seed, strategy, budget, CertificateForms.DEFAULT);
         }
 
         /** The search settings for {@code subject}: these, with its focus. */
@@ -130,7 +130,7 @@ public final class CertifiedReduction {
             return new Unknown(u.reason());
         }
         CoreFinding found = CoreFinding.searched(((SearchResult.Found) result).core(), subject.source());
-        return certify(found, settings.budget(), out, subject.file(), settings.witnesses());
+        return certify(found, settings.budget(), out, subject.file(), settings.forms());
     }
 
     /**
@@ -154,18 +154,18 @@ public final class CertifiedReduction {
      * @throws IllegalStateException as for {@link #certify(CoreFinding, Budget, Path)}
      */
     public static Outcome certify(CoreFinding found, Budget budget, Path out, Optional<Path> input) throws IOException {
-        return certify(found, budget, out, input, WitnessForms.SIGNS);
+        return certify(found, budget, out, input, CertificateForms.DEFAULT);
     }
 
     /**
-     * As {@link #certify(CoreFinding, Budget, Path, Optional)}, with the minimality witnesses in
-     * {@code forms} (a matrix where the core's construction realises a minor, with
-     * {@link WitnessForms#MATRICES}).
+     * As {@link #certify(CoreFinding, Budget, Path, Optional)}, with the minimality witnesses and
+     * the refutation in {@code forms} (a matrix where the core's construction realises a minor,
+     * with {@code WitnessForms.MATRICES}; the relations cut down to an unsatisfiable core on request).
      *
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException as for {@link #certify(CoreFinding, Budget, Path)}
      */
-    public static Outcome certify(CoreFinding found, Budget budget, Path out, Optional<Path> input, WitnessForms forms)
+    public static Outcome certify(CoreFinding found, Budget budget, Path out, Optional<Path> input, CertificateForms forms)
             throws IOException {
         Certification certification = Certification.of(found, budget, forms);
         if (certification instanceof Certification.OutOfBudget o) {

@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
 
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.WitnessForms;
 import org.chirocore.family.FamilyDefinition;
 import org.chirocore.io.Json;
@@ -38,7 +39,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  */
 class MatrixWitnessRegenerationTest {
     private static final CertifiedReduction PIPELINE = new CertifiedReduction(new CertifiedReduction.Settings(0,
-            Strategy.CONTRACT_FIRST, Budget.UNLIMITED, WitnessForms.MATRICES), Progress.SILENT);
+            Strategy.CONTRACT_FIRST, Budget.UNLIMITED, CertificateForms.of(WitnessForms.MATRICES)), Progress.SILENT);
 
     @TempDir
     Path dir;

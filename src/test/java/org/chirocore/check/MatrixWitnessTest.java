@@ -13,6 +13,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.WitnessForms;
 import org.chirocore.io.Json;
 import org.chirocore.matroid.CubeConstruction;
@@ -42,7 +43,7 @@ class MatrixWitnessTest {
     static void build() throws IOException {
         Path out = dir.resolve("corner-n4.cert.json");
         CertifiedReduction.Outcome o = new CertifiedReduction(new CertifiedReduction.Settings(0, Strategy.CONTRACT_FIRST,
-                Budget.UNLIMITED, WitnessForms.MATRICES), Progress.SILENT).run(Subject.of(CubeConstruction.corner(4)), out);
+                Budget.UNLIMITED, CertificateForms.of(WitnessForms.MATRICES)), Progress.SILENT).run(Subject.of(CubeConstruction.corner(4)), out);
         assertInstanceOf(CertifiedReduction.Verified.class, o);
         cert = (Json.Obj) Json.parseUtf8(Files.readAllBytes(out));
     }

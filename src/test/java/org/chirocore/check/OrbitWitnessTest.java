@@ -14,6 +14,7 @@ import java.util.Optional;
 import java.util.stream.Stream;
 
 import org.chirocore.cert.Certificate;
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.WitnessForms;
 import org.chirocore.io.Json;
 import org.chirocore.io.MatroidFileException;
@@ -42,7 +43,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  */
 class OrbitWitnessTest {
     private static final CertifiedReduction ORBITS = new CertifiedReduction(
-            new CertifiedReduction.Settings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED, WitnessForms.ORBITS), Progress.SILENT);
+            new CertifiedReduction.Settings(0, Strategy.CONTRACT_FIRST, Budget.UNLIMITED, CertificateForms.of(WitnessForms.ORBITS)), Progress.SILENT);
 
     @TempDir
     static Path dir;

@@ -7,6 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 
 import org.chirocore.io.Json;
 import org.junit.jupiter.api.Test;
@@ -123,6 +125,29 @@ class FamilyCommandTest {
         Path plain = dir.resolve("plain");
         assertEquals(0, CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", plain.toString()).exit());
         assertEquals(0, matrices(plain.resolve("n=3.cert.json")));
+    }
+
+    @Test
+    void predictTrimsTheRelationsWhenAsked() throws IOException {
+        Path plain = dir.resolve("plain");
+        Path trimmed = dir.resolve("trimmed");
+        for (Path out : List.of(plain, trimmed)) {
+            List<String> args = new ArrayList<>(List.of("family", "predict", "families/corner.json", "--n", "5",
+                    "--prediction", "families/corner-spike.rule.json", "--out", out.toString()));
+            if (out == trimmed) {
+                args.add("--trim-relations");
+            }
+            CliRun r = CliRun.of(args.toArray(String[]::new));
+            assertEquals(0, r.exit(), r.err());
+        }
+        int all = relations(plain.resolve("n=5.predicted.cert.json"));
+        int core = relations(trimmed.resolve("n=5.predicted.cert.json"));
+        assertTrue(0 < core && core < all, core + " of " + all);
+    }
+
+    private static int relations(Path certificate) throws IOException {
+        return Json.parse(Files.readString(certificate)).asObject("certificate").requireObject("content")
+                .requireObject("nonOrientability").requireArray("relations").size();
     }
 
     @Test

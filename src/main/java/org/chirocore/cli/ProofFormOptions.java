@@ -1,14 +1,24 @@
 package org.chirocore.cli;
 
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.WitnessForms;
 
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 
-/** How a certifying command states the minimality witnesses (docs/certificate-format.md, {@code minimality}). */
-final class WitnessOption {
+/**
+ * How a certifying command states its proofs (docs/certificate-format.md): the minimality
+ * witnesses ({@code minimality}) and the relations of the refutation ({@code nonOrientability}).
+ */
+final class ProofFormOptions {
     @ArgGroup(exclusive = true)
     private Choice choice;
+
+    @Option(names = "--trim-relations",
+            description = "List only the 3-term relations the refutation needs: of those the search added, an "
+                    + "unsatisfiable core found by the solver (not necessarily minimal). A smaller certificate, verified "
+                    + "faster, for one more search. Default: every relation the search added.")
+    private boolean trim;
 
     /** At most one of the options: the forms do not combine (a transported witness names signs). */
     static final class Choice {
@@ -27,10 +37,9 @@ final class WitnessOption {
         private boolean matrices;
     }
 
-    WitnessForms form() {
-        if (choice == null) {
-            return WitnessForms.SIGNS;
-        }
-        return choice.orbits ? WitnessForms.ORBITS : choice.matrices ? WitnessForms.MATRICES : WitnessForms.SIGNS;
+    CertificateForms forms() {
+        WitnessForms witnesses = choice == null ? WitnessForms.SIGNS
+                : choice.orbits ? WitnessForms.ORBITS : choice.matrices ? WitnessForms.MATRICES : WitnessForms.SIGNS;
+        return new CertificateForms(witnesses, trim);
     }
 }
