@@ -1,7 +1,16 @@
 package org.chirocore.cli;
 
 import java.io.PrintWriter;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
+
+import org.chirocore.check.CertificateVerifier;
+import org.chirocore.check.VerificationReport;
 
 import org.chirocore.matroid.Limits;
 import org.chirocore.orient.Orientability;
@@ -23,7 +32,8 @@ import picocli.CommandLine.Spec;
         description = {"Time the corner construction for n = 3..N: H spanned by the unit vectors, the all-ones "
                 + "vertex pulled to it and contracted, then decided (n <= " + Benchmark.MAX_DECIDED_DIMENSION
                 + ") and reduced with seed 0, contract-first.",
-                "With --orientable, times orientable instances instead.",
+                "With --orientable, times orientable instances instead; with --certificates, times the "
+                        + "independent verifier on certificate files.",
                 "Prints figures only; nothing is asserted."})
 final class BenchCommand implements Callable<Integer> {
     private static final String ROW = "%2s %9s %5s %10s %10s %14s %10s %11s %10s%n";
@@ -44,10 +54,21 @@ final class BenchCommand implements Callable<Integer> {
                     + Benchmark.DEFAULT_SEARCH_MILLIS / 1000 + " s; unknown when it runs out) and the Vamos matroid.")
     private boolean orientable;
 
+    @Option(names = "--certificates", arity = "1..*", paramLabel = "FILE",
+            description = "Instead, verify each certificate FILE with the independent verifier and print its size, "
+                    + "verdict, wall-clock time and the peak heap in use (all heap pools; a figure of this JVM, run it "
+                    + "with the -Xmx of interest).")
+    private List<Path> certificates;
+
+    private static final String CERTIFICATE_ROW = "%-44s %12s %-9s %10s %12s%n";
+
     private static final String ORIENTABLE_ROW = "%-12s %9s %5s %12s %12s %10s %10s %10s%n";
 
     @Override
     public Integer call() {
+        if (certificates != null) {
+            return verifyCertificates(spec.commandLine().getOut());
+        }
         if (orientable) {
             PrintWriter out = spec.commandLine().getOut();
             out.printf(ORIENTABLE_ROW, "instance", "elements", "rank", "method", "verdict", "bases", "relations", "ms");
@@ -77,6 +98,27 @@ final class BenchCommand implements Callable<Integer> {
                 out.printf(ROW, n, r.elements(), r.rank(), decide, r.reduceMillis(), reductionColumn(r.reduction()),
                         "-", "-", "-");
             }
+            out.flush();
+        }
+        return ExitCodes.OK;
+    }
+
+    private int verifyCertificates(PrintWriter out) {
+        for (Path file : certificates) {
+            if (!Files.isRegularFile(file)) {
+                throw new ParameterException(spec.commandLine(), file + ": no such certificate file (--certificates).");
+            }
+        }
+        out.printf(CERTIFICATE_ROW, "certificate", "bytes", "verdict", "ms", "peak heap MB");
+        for (Path file : certificates) {
+            System.gc();
+            List<MemoryPoolMXBean> heap = ManagementFactory.getMemoryPoolMXBeans().stream()
+                    .filter(p -> p.getType() == MemoryType.HEAP).toList();
+            heap.forEach(MemoryPoolMXBean::resetPeakUsage);
+            VerificationReport report = CertificateVerifier.verify(file);
+            long peak = heap.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
+            out.printf(CERTIFICATE_ROW, file, file.toFile().length(), report.word().equals("verified") ? "verified" : report.word(),
+                    report.millis(), peak / (1024 * 1024));
             out.flush();
         }
         return ExitCodes.OK;

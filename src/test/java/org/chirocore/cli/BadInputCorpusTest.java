@@ -160,6 +160,7 @@ class BadInputCorpusTest {
                 bad(2, "--max-n is 18", "bench --max-n 18"),
                 bad(2, "--max-n", "bench --max-n 2"),
                 bad(2, "--conflicts", "bench --conflicts x"),
+                bad(2, "no such certificate file", "bench --certificates nowhere.cert.json"),
                 // sweep
                 bad(2, "--n", "sweep --n 3..99 --out @sweep"),
                 bad(2, "--threads must be between 1 and 64", "sweep --n 3 --threads 1000 --out @sweep"),

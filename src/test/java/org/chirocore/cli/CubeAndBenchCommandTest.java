@@ -110,6 +110,24 @@ class CubeAndBenchCommandTest {
         assertTrue(lines[4].matches("real 5-cube\\s+32\\s+6\\s+search\\s+(orientable|unknown)\\s+.*"), lines[4]);
     }
 
+    /** The verification table: a stored certificate verifies, a one-byte change to it does not (its digest). */
+    @Test
+    void benchCertificatesTimesTheVerifier() throws java.io.IOException {
+        java.nio.file.Path good = java.nio.file.Path.of("families/rank-n/n=4.predicted.cert.json");
+        java.nio.file.Path bad = java.nio.file.Files.createTempFile("bench", ".cert.json");
+        try {
+            java.nio.file.Files.writeString(bad, java.nio.file.Files.readString(good).replaceFirst("\\[1,", "[2,"));
+            CliRun run = CliRun.of("bench", "--certificates", good.toString(), bad.toString());
+            assertEquals(0, run.exit(), run.err());
+            String[] lines = run.out().split("\n");
+            assertEquals(3, lines.length, run.out());
+            assertTrue(lines[1].matches(".*n=4.predicted.cert.json\\s+\\d+\\s+verified\\s+\\d+\\s+\\d+"), lines[1]);
+            assertTrue(lines[2].contains("REJECTED"), lines[2]);
+        } finally {
+            java.nio.file.Files.delete(bad);
+        }
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"", "orient", "reduce", "cube", "bench"})
     void helpAndVersionWorkOnEveryCommand(String command) {
