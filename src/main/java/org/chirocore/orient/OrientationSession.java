@@ -85,6 +85,11 @@ public final class OrientationSession {
         this(index, selectors, budget, null);
     }
 
+    /** A session adding at most {@code perX} violated relations per (r−2)-set X and round. */
+    OrientationSession(BasisIndex index, boolean selectors, Budget budget, int perX) {
+        this(index, selectors, budget, null, false, perX);
+    }
+
     /**
      * A session without selectors whose solver logs its clausal proof to {@code log}; it records
      * the relations it adds (see {@link #addedRelations}).

@@ -9,7 +9,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.CertificateReader;
+import org.chirocore.cert.WitnessForms;
 import org.chirocore.check.CertificateVerifier;
 import org.chirocore.matroid.ExplicitMatroid;
 import org.chirocore.matroid.HyperplaneIsomorphismInspector;
@@ -36,13 +38,18 @@ class RankNFamilyTest {
     @TempDir
     Path dir;
 
+    /** The spike's member at n, with the forms the stored certificates of families/rank-n have. */
     private FamilyPrediction.Confirmed confirmed(int n) throws IOException {
-        return confirmed(RULE, n);
+        return confirmed(RULE, n, new CertificateForms(WitnessForms.MATRICES, true));
     }
 
     private FamilyPrediction.Confirmed confirmed(Path prediction, int n) throws IOException {
+        return confirmed(prediction, n, CertificateForms.DEFAULT);
+    }
+
+    private FamilyPrediction.Confirmed confirmed(Path prediction, int n, CertificateForms forms) throws IOException {
         FamilyPrediction.Outcome o = new FamilyPrediction(CORNER, FamilyPrediction.Prediction.read(prediction), dir,
-                Budget.UNLIMITED).run(n, n).get(0);
+                Budget.UNLIMITED, forms).run(n, n).get(0);
         FamilyPrediction.Confirmed c = assertInstanceOf(FamilyPrediction.Confirmed.class, o, o.toString());
         assertTrue(CertificateVerifier.verify(dir.resolve(c.certificate())).passed());
         return c;
