@@ -222,7 +222,6 @@ public final class FamilyPrediction {
         long start = System.nanoTime();
         // The verdict only: the certificate's refutation is found again by the pipeline.
         Orientability answer = LazySatDecider.sparse(budget).decide(minor);
-        System.err.println("TIMING decided " + (System.nanoTime() - start) / 1_000_000);
         if (answer instanceof Orientability.Unknown u) {
             return new Unknown(n, u.reason());
         }
@@ -241,13 +240,11 @@ public final class FamilyPrediction {
             return new Refuted(n, "not minimal: contracting " + minor.labels().get(c.element()) + " leaves a "
                     + "non-orientable minor");
         }
-        System.err.println("TIMING minimal " + (System.nanoTime() - start) / 1_000_000);
         CoreFinding found = new CoreFinding(minor, new Provenance(new Source.Constructed(member.construction()),
                 contract, deleted), ((MinimalityDecider.Minimal) proof).witnesses(),
                 new Discovery.Predicted(1 + 2 * minor.size(), (System.nanoTime() - start) / 1_000_000));
         String name = certificateName(n);
         CertifiedReduction.Outcome written = CertifiedReduction.certify(found, budget, dir.resolve(name), Optional.empty(), forms);
-        System.err.println("TIMING certified " + (System.nanoTime() - start) / 1_000_000);
         if (written instanceof CertifiedReduction.Unknown u) {
             return new Unknown(n, u.reason());
         }
