@@ -69,6 +69,26 @@ class ReduceCommandTest {
     }
 
     /**
+     * --trim-relations combines with a witness form; on the 4-cube's corner core the listed relations
+     * are a proper part of those the default lists, and the certificate verifies (the pipeline
+     * verifies before it reports success, so exit 0 means the verifier accepted it).
+     */
+    @Test
+    void trimmedRelationsAreFewerAndCombineWithMatrices() throws IOException {
+        CliRun plain = CliRun.of("reduce", "--cube", "4", "--hyperplane", "1000,0100,0010,0001", "--pull", "1111",
+                "--out", out("p.json"));
+        assertEquals(0, plain.exit(), plain.err());
+        CliRun trimmed = CliRun.of("reduce", "--cube", "4", "--hyperplane", "1000,0100,0010,0001", "--pull", "1111",
+                "--trim-relations", "--matrix-witnesses", "--out", out("t.json"));
+        assertEquals(0, trimmed.exit(), trimmed.err());
+        int all = read(dir.resolve("p.json")).requireObject("content").requireObject("nonOrientability")
+                .requireArray("relations").size();
+        int core = read(dir.resolve("t.json")).requireObject("content").requireObject("nonOrientability")
+                .requireArray("relations").size();
+        assertTrue(0 < core && core < all, core + " of " + all);
+    }
+
+    /**
      * The corner construction of the 3-cube, pulled and contracted, is the Fano plane
      * (docs/mathematics.md §7): already minimal, so the core is all 7 elements, rank 3, 28 bases, with a
      * deletion and a contraction witness per element.
