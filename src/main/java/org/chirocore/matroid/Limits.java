@@ -63,9 +63,11 @@ public final class Limits {
     /**
      * Most determinant work of the matrix witnesses of one certificate, counted as the verifier
      * counts it: C(m, r) · r³ per matrix of rank r on m elements. A minor whose matrix would pass
-     * it keeps a sign witness.
+     * it keeps a sign witness. Large enough for a matrix at every one of the 40 single-element
+     * minors of the rank-10 spike (3.19·10^9; docs/realisations.md, "The spike"), whose sign
+     * witnesses would need about 7.8·10^8 relation evaluations, eight times the verifier's bound.
      */
-    public static final long MATRIX_WITNESS_STEPS = 500_000_000L;
+    public static final long MATRIX_WITNESS_STEPS = 4_000_000_000L;
 
     /**
      * Most r-subsets walked while searching for matrix witnesses for one certificate: each

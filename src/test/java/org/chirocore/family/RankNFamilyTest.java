@@ -30,7 +30,7 @@ import org.junit.jupiter.params.provider.ValueSource;
  * enumeration stored in docs/enumerations/corner-n4 (a search, not this rule). Also the thinner
  * rank-n cores of {@code families/corner-thin.predict.json} (explicit vertices per n).
  */
-class RankNFamilyTest {
+public class RankNFamilyTest {
     private static final FamilyDefinition CORNER = FamilyDefinition.read(Path.of("families/corner.json"));
     private static final Path RULE = Path.of("families/corner-spike.rule.json");
     private static final Path THIN = Path.of("families/corner-thin.predict.json");
@@ -63,7 +63,7 @@ class RankNFamilyTest {
      * memory); this particular description is derived in docs/families.md from the vectors of the
      * cube, so the test checks the cube construction and the pulling against a hand derivation.
      */
-    static ExplicitMatroid spike(int n) {
+    public static ExplicitMatroid spike(int n) {
         List<String> labels = new ArrayList<>();
         for (int i = 1; i <= n; i++) {
             labels.add("a" + i);
