@@ -99,7 +99,7 @@ class SpikeMatrixWitnessesTest {
     @ValueSource(ints = {4, 5})
     void theSpikeCertificateWithMatricesVerifies(int n) throws IOException {
         FamilyPrediction.Outcome o = new FamilyPrediction(CORNER, FamilyPrediction.Prediction.read(RULE), dir, Budget.UNLIMITED,
-                WitnessForms.MATRICES).run(n, n).get(0);
+                CertificateForms.of(WitnessForms.MATRICES)).run(n, n).get(0);
         FamilyPrediction.Confirmed c = assertInstanceOf(FamilyPrediction.Confirmed.class, o, o.toString());
         assertTrue(new HyperplaneIsomorphismInspector(c.facts().core(), RankNFamilyTest.spike(n)).find().isPresent());
         VerificationReport r = CertificateVerifier.verify(dir.resolve(c.certificate()));
