@@ -89,7 +89,7 @@ class SpikeMatrixWitnessesTest {
     }
 
     @ParameterizedTest(name = "n = {0}")
-    @ValueSource(ints = {8, 9})
+    @ValueSource(ints = {8, 9, 10})
     @Tag("slow")
     void everySingleElementMinorOfTheLargerSpikesGetsAMatrix(int n) {
         everySingleElementMinorOfTheSpikeGetsAMatrix(n);
