@@ -43,6 +43,9 @@ final class FamilyExploreCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private ProofFormOptions proofForms;
+
     @Option(names = "--runs", paramLabel = "K", required = true, description = "The number of reductions per n.")
     private int runs;
 
@@ -91,7 +94,7 @@ final class FamilyExploreCommand implements Callable<Integer> {
                     ? Optional.of(FamilyExploration.RankRule.parse(rank))
                     : shape.map(s -> new FamilyExploration.RankRule(s.rankText(), s.rank()));
             FamilyExploration.Settings settings = new FamilyExploration.Settings(seed.seed(), runs, budget.budget(),
-                    kept, avoided, steer, Math.round(totalTime * 1000));
+                    kept, avoided, steer, Math.round(totalTime * 1000), proofForms.forms());
             report = new FamilyExploration(family.definition(), out, settings, family.console())
                     .run(bounds[0], bounds[1]);
             if (shape.isPresent()) {

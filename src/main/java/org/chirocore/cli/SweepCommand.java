@@ -60,6 +60,9 @@ final class SweepCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private ProofFormOptions proofForms;
+
     @Option(names = "--rank-n-cores",
             description = "Also search, for every pair, a core of rank n of the pulled cube with O contracted (deletions "
                     + "only, the search of reduce --rank n), certify it (DIR/n=K/ID.rank-n.cert.json) and record it, or "
@@ -107,7 +110,7 @@ final class SweepCommand implements Callable<Integer> {
         SweepResult result;
         try {
             result = new SweepRun(out, new SweepRun.Settings(seed.seed(), Strategy.CONTRACT_FIRST, budget.budget(), threadCount,
-                    part, rankCores), progress).run(bounds[0], bounds[1]);
+                    part, rankCores, proofForms.forms()), progress).run(bounds[0], bounds[1]);
         } catch (IOException e) {
             throw new BadInputException(out + ": cannot write the sweep's files: " + IoMessages.plain(e), e);
         }

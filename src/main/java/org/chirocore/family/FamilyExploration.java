@@ -9,6 +9,7 @@ import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.Set;
 
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Source;
 import org.chirocore.io.AtomicFiles;
@@ -62,15 +63,17 @@ public final class FamilyExploration {
      * @param avoid vertex rules for the vertices a core must not contain (steering: they are deleted)
      * @param rank the rank a core must have, as an expression in n, if any (steering)
      * @param totalMillis wall-clock limit of each steered run, 0 for none
+     * @param forms how the class certificates state their minimality witnesses and refutation
      */
     public record Settings(long seed, int runs, Budget budget, List<VertexRule> keep, List<VertexRule> avoid,
-            Optional<RankRule> rank, long totalMillis) {
+            Optional<RankRule> rank, long totalMillis, CertificateForms forms) {
         public Settings {
             if (runs < 1) {
                 throw new IllegalArgumentException("An exploration needs at least 1 run per n, not " + runs + ".");
             }
-            if (budget == null || rank == null) {
-                throw new IllegalArgumentException("Exploration settings need a budget and a rank (or none).");
+            if (budget == null || rank == null || forms == null) {
+                throw new IllegalArgumentException("Exploration settings need a budget, a rank (or none) and "
+                        + "certificate forms.");
             }
             if (totalMillis < 0) {
                 throw new IllegalArgumentException("The time limit of a run must not be negative, not " + totalMillis
@@ -80,7 +83,13 @@ public final class FamilyExploration {
             avoid = List.copyOf(avoid);
         }
 
-        /** Unconstrained settings: every run is an ordinary reduction. */
+        /** Settings whose certificates have the default forms. */
+        public Settings(long seed, int runs, Budget budget, List<VertexRule> keep, List<VertexRule> avoid,
+                Optional<RankRule> rank, long totalMillis) {
+            this(seed, runs, budget, keep, avoid, rank, totalMillis, CertificateForms.DEFAULT);
+        }
+
+        /** Unconstrained settings: every run is an ordinary reduction, certificates in the default forms. */
         public static Settings unconstrained(long seed, int runs, Budget budget) {
             return new Settings(seed, runs, budget, List.of(), List.of(), Optional.empty(), 0);
         }
@@ -488,7 +497,8 @@ public final class FamilyExploration {
             listener.stage(n, "certifying and verifying class " + (c + 1));
             MinimalCore representative = representatives.get(c);
             CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(representative,
-                    new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name));
+                    new Source.Constructed(m.construction())), settings.budget(), dir.resolve(name), Optional.empty(),
+                    settings.forms());
             classes.add(new CoreClass(representative.core(), attempts.get(c),
                     outcome instanceof CertifiedReduction.Unknown u ? new ClassCertificate.Unknown(u.reason())
                             : new ClassCertificate.Verified(name, CertificateFacts.read(dir.resolve(name)))));

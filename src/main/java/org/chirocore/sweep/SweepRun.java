@@ -15,6 +15,7 @@ import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 
 import org.chirocore.io.InputFiles;
+import org.chirocore.cert.CertificateForms;
 import org.chirocore.cert.CertificateWriter;
 import org.chirocore.cert.CoreFinding;
 import org.chirocore.cert.Provenance;
@@ -92,20 +93,28 @@ public final class SweepRun {
      * @param threads how many pairs run at once, at least 1
      * @param shard the part of the pairs this run decides
      * @param rankCores whether to search a core of rank n per pair, and its budget
+     * @param forms how new certificates state their minimality witnesses and refutation (a reused
+     *     certificate that verifies keeps its own forms; see docs/sweep.md)
      */
     public record Settings(long seed, Strategy strategy, Budget budget, int threads, Shard shard,
-            Optional<RankCoreSearch> rankCores) {
+            Optional<RankCoreSearch> rankCores, CertificateForms forms) {
         public Settings {
-            if (strategy == null || budget == null || shard == null || rankCores == null) {
-                throw new IllegalArgumentException("Sweep settings need a strategy, a budget, a shard and the rank-n "
-                        + "core search (or Optional.empty()).");
+            if (strategy == null || budget == null || shard == null || rankCores == null || forms == null) {
+                throw new IllegalArgumentException("Sweep settings need a strategy, a budget, a shard, the rank-n "
+                        + "core search (or Optional.empty()) and certificate forms.");
             }
             if (threads < 1) {
                 throw new IllegalArgumentException("A sweep needs at least 1 thread, not " + threads + ".");
             }
         }
 
-        /** Settings without the rank-n core search. */
+        /** Settings whose certificates have the default forms (those of the stored sweep). */
+        public Settings(long seed, Strategy strategy, Budget budget, int threads, Shard shard,
+                Optional<RankCoreSearch> rankCores) {
+            this(seed, strategy, budget, threads, shard, rankCores, CertificateForms.DEFAULT);
+        }
+
+        /** Settings without the rank-n core search, certificates in the default forms. */
         public Settings(long seed, Strategy strategy, Budget budget, int threads, Shard shard) {
             this(seed, strategy, budget, threads, shard, Optional.empty());
         }
@@ -315,7 +324,7 @@ public final class SweepRun {
     }
 
     private CertifiedReduction.Settings pipelineSettings() {
-        return new CertifiedReduction.Settings(settings.seed(), settings.strategy(), settings.budget());
+        return new CertifiedReduction.Settings(settings.seed(), settings.strategy(), settings.budget(), settings.forms());
     }
 
     /** The file name of a pair's rank-n core certificate. */
@@ -345,7 +354,7 @@ public final class SweepRun {
             if (r instanceof SteeredSearch.Found f) {
                 Path file = level.resolve(rankCoreFile(id));
                 CertifiedReduction.Outcome o = CertifiedReduction.certify(CoreFinding.searched(f.core(), subject.source()),
-                        settings.budget(), file);
+                        settings.budget(), file, Optional.empty(), settings.forms());
                 out = o instanceof CertifiedReduction.Unknown u
                         ? new RankCore.Unknown("certifying the core found ran out of budget: " + u.reason(),
                                 search.millisPerPair())
@@ -391,7 +400,8 @@ public final class SweepRun {
 
     /** Certifies, writes and verifies through the one certified pipeline. */
     private Verdict certify(CoreFinding found, Path file) throws IOException {
-        CertifiedReduction.Outcome outcome = CertifiedReduction.certify(found, settings.budget(), file);
+        CertifiedReduction.Outcome outcome = CertifiedReduction.certify(found, settings.budget(), file, Optional.empty(),
+                settings.forms());
         if (outcome instanceof CertifiedReduction.Unknown u) {
             return new Verdict.Unknown(u.reason());
         }
