@@ -35,8 +35,9 @@ import picocli.CommandLine.Spec;
                 + "for each hyperplane orbit H and each vertex O off H in general position, the pulled cube and the "
                 + "pulled cube with O contracted, each with a verified certificate (DIR/n=K/...). Writes "
                 + "DIR/sweep.json and DIR/sweep.md.",
-                "Resumable: a pair whose certificates are in DIR and verify is not recomputed. Progress lines go to "
-                        + "standard error. An orientable pull is written as a witness and announced loudly."})
+                "Resumable: a pair whose certificates are in DIR and verify is not recomputed, whatever their witness "
+                        + "and relation forms. Progress lines go to standard error. An orientable pull is written as a "
+                        + "witness and announced loudly."})
 final class SweepCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;

@@ -102,7 +102,7 @@ class FamilyCommandTest {
     }
 
     /** The number of minimality witnesses written as matrices in a certificate file. */
-    private static long matrices(Path certificate) throws IOException {
+    static long matrices(Path certificate) throws IOException {
         Json.Arr minimality = Json.parse(Files.readString(certificate)).asObject("certificate").requireObject("content")
                 .requireArray("minimality");
         return minimality.elements().stream().flatMap(e -> java.util.stream.Stream.of(((Json.Obj) e).require("deletion"),
@@ -125,6 +125,21 @@ class FamilyCommandTest {
         Path plain = dir.resolve("plain");
         assertEquals(0, CliRun.of("family", "run", "families/corner.json", "--n", "3", "--out", plain.toString()).exit());
         assertEquals(0, matrices(plain.resolve("n=3.cert.json")));
+    }
+
+    /** explore takes the same options: F7's class certificate gets its 7 matrices; the forms stay exclusive. */
+    @Test
+    void exploreWritesMatrixWitnessesWhenAsked() throws IOException {
+        Path out = dir.resolve("explore");
+        CliRun run = CliRun.of("family", "explore", "families/corner.json", "--n", "3", "--runs", "1",
+                "--matrix-witnesses", "--trim-relations", "--out", out.toString());
+        assertEquals(0, run.exit(), run.err());
+        assertEquals(7, matrices(out.resolve("n=3.core-1.cert.json")));
+        CliRun both = CliRun.of("family", "explore", "families/corner.json", "--n", "3", "--runs", "1",
+                "--matrix-witnesses", "--orbit-witnesses", "--out", dir.resolve("b").toString());
+        assertEquals(2, both.exit());
+        assertTrue(both.err().contains("mutually exclusive"), both.err());
+        assertFalse(Files.exists(dir.resolve("b")));
     }
 
     @Test

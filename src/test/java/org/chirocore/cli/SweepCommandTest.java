@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -48,6 +49,28 @@ class SweepCommandTest {
         assertEquals(2, tampered.exit());
         assertTrue(tampered.err().contains("fails the verifier"), tampered.err());
         assertTrue(Files.notExists(dir.resolve("t")), "a refused merge writes nothing");
+    }
+
+    /**
+     * The proof-form options reach the sweep's certificates: with --matrix-witnesses the Fano core of
+     * the 3-cube's one pair gets 7 matrix witnesses in its certificates from M'/O and from M', and in
+     * its rank-n core's (docs/realisations.md); the pipeline verified each before the exit code 0.
+     * The witness forms are exclusive (picocli's message), refused before any output.
+     */
+    @Test
+    void proofFormOptionsReachEveryCertificate() throws IOException {
+        Path out = dir.resolve("m");
+        CliRun run = CliRun.of("sweep", "--n", "3", "--rank-n-cores", "--matrix-witnesses", "--trim-relations", "--out",
+                out.toString());
+        assertEquals(0, run.exit(), run.err());
+        for (String kind : List.of("contracted", "pulled", "rank-n")) {
+            assertEquals(7, FamilyCommandTest.matrices(out.resolve("n=3/n3_a1-1-1_b1_o111." + kind + ".cert.json")), kind);
+        }
+        CliRun both = CliRun.of("sweep", "--n", "3", "--orbit-witnesses", "--matrix-witnesses", "--out",
+                dir.resolve("b").toString());
+        assertEquals(2, both.exit());
+        assertTrue(both.err().contains("mutually exclusive"), both.err());
+        assertTrue(Files.notExists(dir.resolve("b")), "refused before any output");
     }
 
     @Test
