@@ -22,7 +22,9 @@ import org.chirocore.io.Json;
  * off, and its per-pair time limit); a shard index missing or
  * given twice; per-n counts that differ between shards; a pair outside its shard (index ≢ i mod
  * k), a pair index missing or given twice; a certificate (of a verdict or of a rank-n core) that
- * is missing, fails the verifier or records another construction than its pair.
+ * is missing, fails the verifier or records another construction than its pair. Shards whose
+ * certificates state their proofs in other forms are joined (each certificate is verified on its
+ * own; the forms are not recorded in sweep.json).
  * Each certificate is verified in its shard first; only when every check has passed are the
  * certificates, witnesses and DRAT side files copied into the output, so a refused merge writes
  * nothing. Cost: one verification per certificate.

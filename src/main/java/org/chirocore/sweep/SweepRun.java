@@ -63,8 +63,10 @@ import org.chirocore.search.UnsatCoreSearch;
  * </ol>
  * Files go to {@code DIR/n=K/}: {@code ID.contracted.cert.json}, {@code ID.pulled.cert.json}
  * (or {@code .witness.json}), {@code ID.rank-n.cert.json}, and {@code ID.pair.json}, written
- * last, which makes a pair done. A rerun reuses a done pair whose certificates still verify and
- * record the same construction, seed and strategy, and redoes any other; of a reused pair it keeps
+ * last, which makes a pair done. Every certificate is written in {@link Settings#forms}. A rerun
+ * reuses a done pair whose certificates still verify and record the same construction, seed and
+ * strategy, whatever their forms (which change how a proof is written, not what it proves), and
+ * redoes any other; of a reused pair it keeps
  * the rank-n core outcome when its certificate still verifies likewise, when it is "none exists",
  * or when it is unknown under a limit at least this run's, and otherwise searches the core only.
  * Then {@code sweep.json} and {@code sweep.md} are written. Pairs run on {@code threads} threads;
