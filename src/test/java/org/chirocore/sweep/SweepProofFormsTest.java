@@ -61,8 +61,9 @@ class SweepProofFormsTest {
     /**
      * n = 3 has one general-position pair, the corner x1 + x2 + x3 = 1 with O = 111, whose M'/O is
      * the Fano plane F7 (docs/mathematics.md §7); F7 is not orientable (Oxley, Matroid Theory, 2nd
-     * ed., §6.6) and every single-element minor of it is (each is regular: F7\e is M(K4), F7/e a
-     * rank-2 matroid; Oxley §6.4, from memory), so all three certificates (from M'/O, from M', and
+     * ed., §6.6) and every single-element minor of it is (F7\e is M(K4), graphic hence orientable:
+     * Oxley, Proposition 6.4.8 and Section 5.1; F7/e has rank 2, and every matroid of rank at most 2
+     * is orientable, common practice), so all three certificates (from M'/O, from M', and
      * the rank-n core) state F7. With matrix witnesses each certificate verifies, states some
      * witnesses as matrices (docs/realisations.md: F7 gets 7 of its 14), and each matrix realises
      * its minor, checked here by brute force: the non-zero maximal minors of the matrix are exactly
