@@ -42,7 +42,8 @@ import org.chirocore.search.UnsatCoreSearch;
  * would only repeat it, so they are skipped) or unknown. The cores are
  * grouped up to isomorphism ({@link MatroidShape} first, then {@link HyperplaneIsomorphismInspector});
  * one representative per class, from the class's first run, is certified into
- * {@code n=K.core-J.cert.json} (its proofs in {@link Settings#forms}) and verified. Writes {@link #EXPLORE_MD} and {@link #EXPLORE_JSON}.
+ * {@code n=K.core-J.cert.json} (its proofs in {@link Settings#forms}) and verified. Writes
+ * {@link #EXPLORE_MD} and {@link #EXPLORE_JSON}.
  *
  * <p>Cost: per member, K reductions, one isomorphism test per accepted core and class of equal
  * shape, and one certification and verification per class.
