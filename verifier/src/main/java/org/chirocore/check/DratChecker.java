@@ -94,7 +94,7 @@ public final class DratChecker {
     }
 
     private String summary() {
-        return lemmas + " lemmas, " + deleted + " deletions applied, " + ignored + " ignored";
+        return lemmas + " lemmas, " + deleted + " deletions applied, " + ignored + " ignored, " + steps + " propagation steps";
     }
 
     private void run(Reader drat) throws ProofError, IOException {

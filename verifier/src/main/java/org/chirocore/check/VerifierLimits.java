@@ -27,7 +27,7 @@ final class VerifierLimits {
     /** Most literals in the lemmas of a proof (the checker holds them all), bounding its memory. */
     static final long MAX_PROOF_LITERALS = 50_000_000;
     /** Most watch-list visits of unit propagation in one proof check, bounding its work. */
-    static final long MAX_PROPAGATION_STEPS = 500_000_000L;
+    static final long MAX_PROPAGATION_STEPS = 20_000_000_000L;
     /** Most entries (a basis with one or two of its elements) sorted by the basis-exchange check; three longs each. */
     static final long MAX_EXCHANGE_PAIRS = 12_000_000;
     /** Most 3-term relations evaluated over all minimality witnesses together. */
