@@ -196,7 +196,7 @@ public class RankNFamilyTest {
     }
 
     @ParameterizedTest(name = "families/rank-n/n={0}.predicted.cert.json")
-    @ValueSource(ints = {7, 8})
+    @ValueSource(ints = {7, 8, 9, 10})
     @Tag("slow")
     void theLargerStoredCertificatesVerify(int n) {
         theStoredCertificatesVerify(n);

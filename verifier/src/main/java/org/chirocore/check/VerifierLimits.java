@@ -26,8 +26,12 @@ final class VerifierLimits {
     static final int MAX_LABEL = 256;
     /** Most literals in the lemmas of a proof (the checker holds them all), bounding its memory. */
     static final long MAX_PROOF_LITERALS = 50_000_000;
-    /** Most watch-list visits of unit propagation in one proof check, bounding its work. */
-    static final long MAX_PROPAGATION_STEPS = 20_000_000_000L;
+    /**
+     * Most watch-list visits of unit propagation in one proof check, bounding its work: the
+     * rank-10 spike's proof (docs/families.md) needs 7.8·10^8, about 45 s of CPU at some
+     * 1.7·10^7 visits a second; at the limit a check takes a few minutes.
+     */
+    static final long MAX_PROPAGATION_STEPS = 2_000_000_000L;
     /** Most entries (a basis with one or two of its elements) sorted by the basis-exchange check; three longs each. */
     static final long MAX_EXCHANGE_PAIRS = 12_000_000;
     /** Most 3-term relations evaluated over all minimality witnesses together. */
