@@ -106,7 +106,9 @@ final class BenchCommand implements Callable<Integer> {
     private int verifyCertificates(PrintWriter out) {
         for (Path file : certificates) {
             if (!Files.isRegularFile(file)) {
-                throw new ParameterException(spec.commandLine(), file + ": no such certificate file (--certificates).");
+                throw new ParameterException(spec.commandLine(), file + (Files.isDirectory(file)
+                        ? ": a directory, not a certificate file (--certificates takes files, e.g. DIR/*.cert.json)."
+                        : ": no such certificate file (--certificates)."));
             }
         }
         out.printf(CERTIFICATE_ROW, "certificate", "bytes", "verdict", "ms", "peak heap MB");

@@ -161,6 +161,7 @@ class BadInputCorpusTest {
                 bad(2, "--max-n", "bench --max-n 2"),
                 bad(2, "--conflicts", "bench --conflicts x"),
                 bad(2, "no such certificate file", "bench --certificates nowhere.cert.json"),
+                bad(2, "a directory, not a certificate file", "bench --certificates families"),
                 // sweep
                 bad(2, "--n", "sweep --n 3..99 --out @sweep"),
                 bad(2, "--threads must be between 1 and 64", "sweep --n 3 --threads 1000 --out @sweep"),
