@@ -26,7 +26,7 @@ public final class LazySatDecider implements OrientabilityDecider {
      * A decider whose lazy loop adds at most 2 violated relations per (r−2)-set X and round (the
      * default is 50): made for large matroids expected to be non-orientable, where the loop
      * otherwise carries many relations the contradiction does not need (the tipless spike of rank
-     * 9: 97,954 relations at round 10 against 312,678 in all; docs/families.md). Its orientable
+     * 9: 61,760 relations in all against 312,678 with the default; docs/families.md). Its orientable
      * answers may differ in their witness from the default decider's, never in the verdict.
      */
     public static LazySatDecider sparse(Budget budget) {

@@ -39,7 +39,8 @@ public final class OrientationSession {
      * The per-X cap of a session that only finds a refutation's relations for {@link RelationCore}
      * to cut down: fewer relations per X and round give the solver fewer redundant relations to
      * carry. On the tipless rank-n spikes (docs/families.md) a cap of 2 added 21,108 relations
-     * at n = 8 where 50 added 95,667, and finished in 30 s instead of 51 s, 0.9 GB of heap instead of 3.5.
+     * at n = 8 where 50 added 95,667, and the whole prediction finished in 30 s instead of 51 s,
+     * with 0.9 GB of RSS instead of 3.5.
      */
     static final int FINDER_RELATIONS_PER_X = 2;
 
@@ -82,10 +83,13 @@ public final class OrientationSession {
      *     on a proper subset and for the elements an unsatisfiable answer needed)
      */
     public OrientationSession(BasisIndex index, boolean selectors, Budget budget) {
-        this(index, selectors, budget, null);
+        this(index, selectors, budget, RELATIONS_PER_X);
     }
 
-    /** A session adding at most {@code perX} violated relations per (r−2)-set X and round. */
+    /**
+     * A session adding at most {@code perX} violated relations per (r−2)-set X and round
+     * ({@link #RELATIONS_PER_X} for the public constructor).
+     */
     OrientationSession(BasisIndex index, boolean selectors, Budget budget, int perX) {
         this(index, selectors, budget, null, false, perX);
     }
@@ -101,10 +105,6 @@ public final class OrientationSession {
      */
     static OrientationSession recording(BasisIndex index, Budget budget, DratLog log, int perX) {
         return new OrientationSession(index, false, budget, log, true, perX);
-    }
-
-    private OrientationSession(BasisIndex index, boolean selectors, Budget budget, DratLog log) {
-        this(index, selectors, budget, log, false, RELATIONS_PER_X);
     }
 
     private OrientationSession(BasisIndex index, boolean selectors, Budget budget, DratLog log, boolean record,

@@ -24,7 +24,7 @@ import org.sat4j.specs.TimeoutException;
  * selectors its final conflict used, which is a sublist that is still unsatisfiable. This is
  * repeated on that sublist until it stops shrinking. The result need not be minimal: on the
  * tipless spike of rank 6 it keeps 1,117 of 6,190 relations, where a deletion pass (one solve per
- * relation, tried while measuring) got down to 64, but such a small list made the solver's own
+ * relation, tried while measuring) got down to 92, but such a small list made the solver's own
  * proof 60 times longer and the deletion pass cost one solve per relation, so it is not done.
  * Deterministic: sat4j's search depends only on its input. Costs one solve per round on the
  * relations' clauses; the caller's {@link Budget} bounds the wall-clock time.
