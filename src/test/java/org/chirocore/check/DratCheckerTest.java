@@ -95,12 +95,32 @@ class DratCheckerTest {
             new int[] {4, 5}, new int[] {-4, 5}, new int[] {4, -5}, new int[] {-4, -5}));
 
     @Test
-    void aRatLemmaIsAcceptedAndWrittenAsLrat() {
+    void aRatLemmaIsAcceptedAndALemmaTheEmptyClauseDoesNotNeedIsLeftOutOfTheLrat() {
         String drat = "1 0\n4 0\n0\n";
         assertTrue(DratChecker.check(RAT_EXAMPLE, drat).valid());
         String lrat = LratConversion.convert(RAT_EXAMPLE.variables(), RAT_EXAMPLE.clauses(), drat);
-        assertTrue(lrat.startsWith("8 1 0 -1 2 3 0\n"), lrat);
+        // (1) is RAT, but the refutation only uses clauses 4..7: it is dropped, and (4) gets id 8;
+        // 5, implied at top level by (4) through clause 5, gets a unit step (9) of its own
+        assertEquals("8 4 0 4 6 0\n9 5 0 8 5 0\n10 0 9 8 7 0\n", lrat);
         assertEquals(Optional.empty(), LratChecker.check(RAT_EXAMPLE, lrat));
+    }
+
+    /**
+     * Unsatisfiable (x2 can be neither true nor false), but unit propagation alone finds nothing;
+     * the lemma (1) is RAT on 1, not RUP, and with it the empty clause is RUP.
+     */
+    static final Cnf RAT_NEEDED = new Cnf(4, List.of(new int[] {-1, 2}, new int[] {-1, -2}, new int[] {2, 3},
+            new int[] {2, -3}, new int[] {-2, 4}, new int[] {-2, -4}));
+
+    @Test
+    void aRatLemmaTheEmptyClauseNeedsIsWrittenWithItsResolventHints() {
+        String drat = "1 0\n0\n";
+        assertTrue(DratChecker.check(RAT_NEEDED, drat).valid());
+        String lrat = LratConversion.convert(RAT_NEEDED.variables(), RAT_NEEDED.clauses(), drat);
+        assertEquals("7 1 0 -1 3 4 -2 5 6 0\n8 2 0 7 1 0\n9 0 8 7 2 0\n", lrat);
+        assertEquals(Optional.empty(), LratChecker.check(RAT_NEEDED, lrat));
+        // without the group for clause 2 the RAT check fails
+        assertTrue(LratChecker.check(RAT_NEEDED, "7 1 0 -1 3 4 0\n8 2 0 7 1 0\n9 0 8 7 2 0\n").isPresent());
     }
 
     @Test
