@@ -5,6 +5,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.OutputStream;
+import java.io.Reader;
+import java.io.StringReader;
 import java.nio.charset.CodingErrorAction;
 import java.nio.file.LinkOption;
 import java.security.DigestInputStream;
@@ -91,7 +93,7 @@ public final class CertificateVerifier {
     /**
      * Verifies a certificate given as bytes.
      *
-     * @param baseDir the directory in which a {@code dratFile} is looked up
+     * @param baseDir the directory in which a {@code dratFile} or {@code lratFile} is looked up
      * @param input the matroid file of a given-matroid provenance, if any
      */
     public static VerificationReport verify(byte[] bytes, Path baseDir, Optional<Path> input) {
@@ -314,14 +316,9 @@ public final class CertificateVerifier {
          * its size), a DRAT proof by unit propagation and RAT.
          */
         String drat() throws Failure, IOException {
-            if (c.lrat().isPresent()) {
-                Optional<String> failure = LratChecker.check(cnf, c.lrat().get());
-                if (failure.isPresent()) {
-                    throw new Failure(failure.get());
-                }
-                return "the empty clause is derived (LRAT hints checked)";
-            }
-            DratChecker.Outcome outcome = c.drat().isPresent() ? DratChecker.check(cnf, c.drat().get()) : dratFile();
+            DratChecker.Outcome outcome = c.proofFile().isPresent() ? proofFile(c.proofFile().get())
+                    : c.lrat().isPresent() ? LratChecker.check(cnf, new StringReader(c.lrat().get()))
+                    : DratChecker.check(cnf, c.drat().get());
             if (!outcome.valid()) {
                 throw new Failure(outcome.failure());
             }
@@ -329,15 +326,16 @@ public final class CertificateVerifier {
         }
 
         /**
-         * Checks the proof in the file named by {@code dratFile}: a regular file (not a symbolic
-         * link, FIFO or device) beside the certificate, gzip-compressed when its name ends in .gz,
-         * at most {@link Limits#MAX_PROOF_BYTES} bytes before and after decompression, streamed
-         * through the checker; a valid proof is then hashed to its end and the hash compared.
+         * Checks the proof in the file named by {@code dratFile} or {@code lratFile}: a regular file
+         * (not a symbolic link, FIFO or device) beside the certificate, gzip-compressed when its name
+         * ends in .gz, at most {@link VerifierLimits#MAX_PROOF_BYTES} bytes before and after
+         * decompression, streamed through the DRAT or LRAT checker; a valid proof is then hashed to
+         * its end and the hash compared.
          */
-        private DratChecker.Outcome dratFile() throws Failure, IOException {
-            String name = c.dratFile();
+        private DratChecker.Outcome proofFile(ParsedCertificate.ProofFile proof) throws Failure, IOException {
+            String name = proof.name();
             if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.equals("..") || name.equals(".")) {
-                throw new Failure("dratFile \"" + Escaping.printable(name) + "\" must be a plain file name beside the certificate");
+                throw new Failure(proof.member() + " \"" + Escaping.printable(name) + "\" must be a plain file name beside the certificate");
             }
             Path file = baseDir.resolve(name);
             if (!Files.isRegularFile(file, LinkOption.NOFOLLOW_LINKS)) {
@@ -354,17 +352,17 @@ public final class CertificateVerifier {
             try (InputStream raw = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS);
                     InputStream in = new DigestInputStream(new CappedInputStream(name.endsWith(".gz") ? new GZIPInputStream(raw) : raw,
                             VerifierLimits.MAX_PROOF_BYTES, "the uncompressed " + Escaping.printable(name)), sha)) {
-                outcome = DratChecker.check(cnf, new InputStreamReader(in,
-                        StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)));
+                Reader text = new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT));
+                outcome = proof.lrat() ? LratChecker.check(cnf, text) : DratChecker.check(cnf, text);
                 if (!outcome.valid()) {
                     return outcome;
                 }
                 in.transferTo(OutputStream.nullOutputStream());
             }
             String actual = HexFormat.of().formatHex(sha.digest());
-            if (!actual.equals(c.dratSha256())) {
+            if (!actual.equals(proof.sha256())) {
                 throw new Failure("the uncompressed " + Escaping.printable(name) + " hashes to " + actual + ", not the recorded "
-                        + Escaping.printable(c.dratSha256()));
+                        + Escaping.printable(proof.sha256()));
             }
             return outcome;
         }

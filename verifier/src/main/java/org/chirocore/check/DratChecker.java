@@ -28,7 +28,10 @@ import org.chirocore.check.ProofLines.ProofError;
 
  */
 public final class DratChecker {
-    /** The outcome: {@code failure} is empty when the proof is valid; {@code summary} counts what was done. */
+    /**
+     * The outcome of a DRAT or LRAT check ({@link LratChecker} returns it too): {@code failure} is
+     * empty when the proof is valid; {@code summary} counts what was done.
+     */
     public record Outcome(boolean valid, String failure, String summary) {
     }
 

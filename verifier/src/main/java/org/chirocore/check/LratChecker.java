@@ -38,6 +38,8 @@ public final class LratChecker {
     private final byte[] scratch;
     private long literals;
     private long steps;
+    private long lemmas;
+    private long hints;
 
     private LratChecker(Cnf cnf) {
         variables = cnf.variables();
@@ -54,20 +56,26 @@ public final class LratChecker {
     /** The first fault of {@code lrat} as a proof that {@code cnf} is unsatisfiable, naming its line, or empty. */
     public static Optional<String> check(Cnf cnf, String lrat) {
         try {
-            return check(cnf, new StringReader(lrat));
+            DratChecker.Outcome outcome = check(cnf, new StringReader(lrat));
+            return outcome.valid() ? Optional.empty() : Optional.of(outcome.failure());
         } catch (IOException e) {
             throw new UncheckedIOException("A string reader does not fail.", e);
         }
     }
 
-    /** As {@link #check(Cnf, String)}, reading the proof as a stream up to its empty clause. */
-    static Optional<String> check(Cnf cnf, Reader lrat) throws IOException {
+    /** As {@link #check(Cnf, String)}, reading the proof as a stream up to its empty clause; the outcome counts the work done. */
+    static DratChecker.Outcome check(Cnf cnf, Reader lrat) throws IOException {
+        LratChecker checker = new LratChecker(cnf);
         try {
-            new LratChecker(cnf).run(lrat);
-            return Optional.empty();
+            checker.run(lrat);
+            return new DratChecker.Outcome(true, "", checker.summary());
         } catch (ProofError e) {
-            return Optional.of(e.getMessage());
+            return new DratChecker.Outcome(false, e.getMessage(), checker.summary());
         }
+    }
+
+    private String summary() {
+        return "LRAT hints checked: " + lemmas + " lemmas, " + hints + " hints, " + steps + " propagation steps";
     }
 
     private void run(Reader text) throws ProofError, IOException {
@@ -112,6 +120,8 @@ public final class LratChecker {
                         + " literals, the verifier's limit; not checked further");
             }
             lemma(line.number(), lits, Arrays.copyOfRange(rest.numbers(), litsEnd + 1, hintsEnd));
+            lemmas++;
+            hints += hintsEnd - litsEnd - 1;
             add(n[0], lits);
             if (lits.length == 0) {
                 return;

@@ -11,19 +11,31 @@ import java.util.Optional;
  * spec) but nothing mathematical yet: sets are kept as the integer arrays written in the file so
  * that later checks can name them.
  *
- * @param drat the inline DRAT proof, or empty when {@code dratFile} or {@code lrat} is given
- * @param lrat the inline LRAT proof (hints included), when given instead of a DRAT proof
+ * @param drat the inline DRAT proof, when given
+ * @param lrat the inline LRAT proof (hints included), when given
+ * @param proofFile the proof in a file beside the certificate, when given; exactly one of the three is present
  * @param provenance the provenance object, whose inside is checked by the provenance check
  */
 record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<String> labels, List<int[]> bases,
-        List<int[]> normalised, List<Relation> relations, Optional<String> drat, String dratFile, String dratSha256,
-        Optional<String> lrat, List<Witness> witnesses, JsonTree.Obj provenance) {
+        List<int[]> normalised, List<Relation> relations, Optional<String> drat, Optional<String> lrat,
+        Optional<ProofFile> proofFile, List<Witness> witnesses, JsonTree.Obj provenance) {
 
     /** A listed relation [[x...], a, b, c, d]. */
     record Relation(int[] x, int a, int b, int c, int d) {
         @Override
         public String toString() {
             return "[" + java.util.Arrays.toString(x) + ", " + a + ", " + b + ", " + c + ", " + d + "]";
+        }
+    }
+
+    /**
+     * A proof in a file beside the certificate, named by {@code dratFile} or {@code lratFile}, with
+     * the SHA-256 of its uncompressed bytes from {@code dratSha256} or {@code lratSha256}.
+     */
+    record ProofFile(String name, boolean lrat, String sha256) {
+        /** The member that names the file, for messages. */
+        String member() {
+            return lrat ? "lratFile" : "dratFile";
         }
     }
 
@@ -64,19 +76,29 @@ record ParsedCertificate(String sha256, JsonTree.Obj content, int rank, List<Str
         }
         List<int[]> bases = sets(core.requireArray("bases"), "core.bases", VerifierLimits.MAX_BASES);
         JsonTree.Obj non = content.requireObject("nonOrientability");
-        non.requireOnly(List.of("normalised", "relations", "drat", "dratFile", "dratSha256", "lrat"));
+        non.requireOnly(List.of("normalised", "relations", "drat", "lrat", "dratFile", "dratSha256", "lratFile", "lratSha256"));
         List<int[]> normalised = sets(non.requireArray("normalised"), "nonOrientability.normalised", VerifierLimits.MAX_ELEMENTS + 1);
         List<Relation> relations = relations(non.requireArray("relations"));
         Optional<String> drat = non.find("drat").map(d -> d.asString("nonOrientability.drat"));
         Optional<String> lrat = non.find("lrat").map(d -> d.asString("nonOrientability.lrat"));
-        int proofs = (drat.isPresent() ? 1 : 0) + (non.has("dratFile") ? 1 : 0) + (lrat.isPresent() ? 1 : 0);
-        if (proofs != 1 || non.has("dratFile") != non.has("dratSha256")) {
-            throw new JsonTree.Mistyped("nonOrientability must have exactly one of \"drat\", \"lrat\", or both "
-                    + "\"dratFile\" and \"dratSha256\"");
+        Optional<ProofFile> proofFile = Optional.empty();
+        for (String kind : List.of("drat", "lrat")) {
+            String file = kind + "File";
+            String hash = kind + "Sha256";
+            if (non.has(file) != non.has(hash)) {
+                throw new JsonTree.Mistyped("nonOrientability has \"" + (non.has(file) ? file : hash) + "\" without \""
+                        + (non.has(file) ? hash : file) + "\"; a proof file needs both its name and the hash of its uncompressed bytes");
+            }
+            if (non.has(file)) {
+                proofFile = Optional.of(new ProofFile(non.requireString(file), kind.equals("lrat"), non.requireString(hash)));
+            }
         }
-        String dratFile = non.has("dratFile") ? non.requireString("dratFile") : "";
-        String dratSha256 = non.has("dratFile") ? non.requireString("dratSha256") : "";
-        return new ParsedCertificate(sha256, content, rank, labels, bases, normalised, relations, drat, dratFile, dratSha256, lrat,
+        int proofs = (drat.isPresent() ? 1 : 0) + (lrat.isPresent() ? 1 : 0) + (non.has("dratFile") ? 1 : 0) + (non.has("lratFile") ? 1 : 0);
+        if (proofs != 1) {
+            throw new JsonTree.Mistyped("nonOrientability must have exactly one of \"drat\", \"lrat\", \"dratFile\" (with \"dratSha256\") "
+                    + "and \"lratFile\" (with \"lratSha256\"), found " + proofs);
+        }
+        return new ParsedCertificate(sha256, content, rank, labels, bases, normalised, relations, drat, lrat, proofFile,
                 witnesses(content.requireArray("minimality"), labels.size()), content.requireObject("provenance"));
     }
 
