@@ -36,8 +36,9 @@ import org.chirocore.check.VerificationReport.Status;
  * failed one are reported as NOT_RUN.
  *
  * <p>Cost, for b bases of rank r on n elements: basis exchange O(b² r² log b); the DRAT check the
- * unit propagation of the proof; a sign witness O(b r² n² log b), a matrix witness C(n − 1, r') exact
- * r' × r' rank tests (r' its rank); the provenance one exact rank per r-subset of the core's ground set.
+ * unit propagation of the proof, the LRAT check the size of its hinted clauses; a sign witness
+ * O(b r² n² log b), a matrix witness C(n − 1, r') exact r' × r' rank tests (r' its rank); the
+ * provenance one exact rank per r-subset of the core's ground set.
  */
 public final class CertificateVerifier {
     public static final String FORMAT = "format";
