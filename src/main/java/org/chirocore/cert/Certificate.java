@@ -12,6 +12,7 @@ import org.chirocore.matroid.Minor;
 import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Chirotope;
+import org.chirocore.orient.ClauseEncoding;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
 import org.chirocore.orient.WitnessCheck;
@@ -27,9 +28,11 @@ import org.chirocore.search.Operation;
  * @param refutation the proof that it has no chirotope
  * @param minimality one entry per core element, in element order
  * @param discovery how the core was found (informative)
+ * @param lrat the refutation's proof as LRAT ({@link LratConversion}), written instead of its DRAT
+ *     when present
  */
 public record Certificate(ExplicitMatroid core, Provenance provenance, Refutation refutation,
-        List<MinimalityWitness> minimality, Discovery discovery) {
+        List<MinimalityWitness> minimality, Discovery discovery, Optional<String> lrat) {
     public Certificate {
         minimality = List.copyOf(minimality);
         if (minimality.size() != core.size()) {
@@ -76,7 +79,24 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
             entries.add(new MinimalityWitness(core.labels().get(e), witness(found, core, e, Operation.DELETION, orbits, matrices),
                     witness(found, core, e, Operation.CONTRACTION, orbits, matrices)));
         }
-        return new Certificate(core, found.provenance(), refutation, entries, found.discovery());
+        return new Certificate(core, found.provenance(), refutation, entries, found.discovery(), Optional.empty());
+    }
+
+    /**
+     * This certificate with its proof as LRAT: the DRAT proof converted against the CNF of the
+     * refutation's normalisation and relations, in the certificate format's encoding.
+     *
+     * @throws IllegalStateException when the DRAT proof does not refute that CNF (a bug of the prover)
+     */
+    public Certificate withLrat() {
+        BasisIndex index = BasisIndex.of(core);
+        List<int[]> cnf = ClauseEncoding.cnf(index, refutation.normalised(), refutation.relations());
+        try {
+            return new Certificate(core, provenance, refutation, minimality, discovery,
+                    Optional.of(LratConversion.convert(index.basisCount(), cnf, refutation.drat())));
+        } catch (IllegalArgumentException e) {
+            throw new IllegalStateException("The refutation's DRAT proof does not convert to LRAT: " + e.getMessage(), e);
+        }
     }
 
     /** The number of witnesses of the given kind ("signs", "transported" or "matrix"). */

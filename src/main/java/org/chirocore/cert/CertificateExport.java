@@ -1,26 +1,22 @@
 package org.chirocore.cert;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import java.util.zip.GZIPInputStream;
 
-import org.chirocore.io.InputFiles;
-import org.chirocore.matroid.Limits;
 import org.chirocore.io.AtomicFiles;
 import org.chirocore.io.Json;
 import org.chirocore.io.JsonValueException;
-import org.chirocore.io.Sha256;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.ClauseEncoding;
 
 /**
  * Exports a certificate's unsatisfiability claim for external tools: {@code <name>.cnf} in DIMACS
- * and {@code <name>.drat} as standard DRAT text, so that e.g. drat-trim can check it. The CNF is
+ * and {@code <name>.drat} as standard DRAT text, so that e.g. drat-trim can check it (for a
+ * certificate that states LRAT, its steps without their hints), and on request
+ * {@code <name>.lrat}. The CNF is
  * regenerated from the certificate's content alone (core bases, normalised bases, relations)
  * through the canonical encoding of {@link ClauseEncoding}, never taken from the solver. The
  * content digest is checked first, so a tampered certificate is refused. Cost: linear in the
@@ -45,13 +41,14 @@ public final class CertificateExport {
     /**
      * Writes {@code outDir/<name>.cnf} and {@code outDir/<name>.drat} for {@code certificate},
      * {@code <name>} being its file name without {@code .json}; with {@code lrat}, also
-     * {@code outDir/<name>.lrat}, the proof with the unit-propagation hints the independent
-     * checker finds for each step (so that formally verified LRAT checkers can consume it).
+     * {@code outDir/<name>.lrat}, the proof with the unit-propagation hints of each step (so that
+     * formally verified LRAT checkers can consume it): the certificate's own when it states LRAT,
+     * else converted from its DRAT ({@link LratConversion}).
      * {@code outDir} is created when missing, once the certificate has been read and checked.
      *
      * @throws IOException when a file cannot be read or written
      * @throws JsonValueException when the certificate is not of this format, its digest does not
-     *     match its content, or its proof file does not match {@code dratSha256}
+     *     match its content, or its proof file does not match its recorded digest
      * @throws org.chirocore.matroid.InvalidMatroidException when its bases are not a matroid's
      * @throws IllegalArgumentException when a relation is malformed, or (with {@code lrat}) when
      *     the proof does not check
@@ -72,42 +69,19 @@ public final class CertificateExport {
         String name = CertificateWriter.baseName(certificate);
         Path cnfFile = outDir.resolve(name + ".cnf");
         Path dratFile = outDir.resolve(name + ".drat");
-        byte[] dratBytes = drat(proof, certificate);
+        StatedProof stated = StatedProof.read(proof, certificate);
         // Everything that can fail is done before the directory or any file is created.
-        Optional<String> hinted = lrat
-                ? Optional.of(LratConversion.convert(index.basisCount(), cnf, new String(dratBytes, StandardCharsets.UTF_8)))
-                : Optional.empty();
+        String drat = stated.drat(cnf);
+        Optional<String> hinted = !lrat ? Optional.empty()
+                : Optional.of(stated.lrat() ? stated.text() : LratConversion.convert(index.basisCount(), cnf, drat));
         Files.createDirectories(outDir);
         AtomicFiles.writeString(cnfFile, dimacs.toString());
-        AtomicFiles.write(dratFile, dratBytes);
+        AtomicFiles.writeString(dratFile, drat);
         Optional<Path> lratFile = Optional.empty();
         if (hinted.isPresent()) {
             lratFile = Optional.of(outDir.resolve(name + ".lrat"));
             AtomicFiles.writeString(lratFile.get(), hinted.get());
         }
         return new Exported(cnfFile, dratFile, index.basisCount(), cnf.size(), lratFile);
-    }
-
-    /** The proof's bytes: inline, or read from the file beside the certificate and checked against its digest. */
-    private static byte[] drat(Json.Obj proof, Path certificate) throws IOException {
-        if (proof.has("drat")) {
-            return proof.requireString("drat").getBytes(StandardCharsets.UTF_8);
-        }
-        String fileName = proof.requireString("dratFile");
-        Path file = certificate.toAbsolutePath().resolveSibling(fileName);
-        if (!file.getParent().equals(certificate.toAbsolutePath().getParent())) {
-            throw new JsonValueException("field \"dratFile\" must name a file beside the certificate, not " + fileName);
-        }
-        byte[] bytes;
-        try (InputStream in = fileName.endsWith(".gz") ? new GZIPInputStream(Files.newInputStream(file))
-                : Files.newInputStream(file)) {
-            bytes = InputFiles.readUpTo(in, Limits.PROOF_BYTES, "the proof file " + fileName);
-        }
-        String digest = Sha256.hex(bytes);
-        if (!digest.equals(proof.requireString("dratSha256"))) {
-            throw new JsonValueException("the proof file " + fileName + " has digest " + digest
-                    + ", but field \"dratSha256\" says " + proof.requireString("dratSha256"));
-        }
-        return bytes;
     }
 }

@@ -23,9 +23,11 @@ import org.chirocore.orient.SolveStats;
 
 /**
  * Writes a {@link Certificate} in the format of {@code docs/certificate-format.md}: the canonical
- * {@code content}, its SHA-256, and the unhashed {@code run} figures. A DRAT proof of more than
- * {@value #INLINE_DRAT_LIMIT} bytes goes gzip-compressed to {@code <name>.drat.gz} beside the
- * certificate, named in {@code dratFile} with the digest of its uncompressed bytes. Both files are
+ * {@code content}, its SHA-256, and the unhashed {@code run} figures. The proof is the
+ * certificate's LRAT when it has one, else the refutation's DRAT; a proof of more than
+ * {@value #INLINE_PROOF_LIMIT} bytes goes gzip-compressed to {@code <name>.drat.gz} or
+ * {@code <name>.lrat.gz} beside the certificate, named in {@code dratFile} or {@code lratFile} with
+ * the digest of its uncompressed bytes. Both files are
  * written atomically, the proof first, so a certificate never names a missing proof. Equal
  * certificates give byte-identical content. Cost: linear in the core's bases, the relations,
  * the witnesses and the proof.
@@ -38,7 +40,7 @@ public final class CertificateWriter {
     /** The value of the {@code tool} member; kept equal to the version in pom.xml. */
     public static final String TOOL = "chirocore 0.1.0";
     /** Proofs up to this many bytes are written inline. */
-    public static final int INLINE_DRAT_LIMIT = 1 << 20;
+    public static final int INLINE_PROOF_LIMIT = 1 << 20;
 
     private CertificateWriter() {
     }
@@ -47,10 +49,10 @@ public final class CertificateWriter {
      * What {@link #write} wrote.
      *
      * @param certificate the certificate file
-     * @param dratFile the compressed proof beside it, when the proof was too large to inline
+     * @param proofFile the compressed proof beside it, when the proof was too large to inline
      * @param sha256 the content digest
      */
-    public record Written(Path certificate, Optional<Path> dratFile, String sha256) {
+    public record Written(Path certificate, Optional<Path> proofFile, String sha256) {
     }
 
     /**
@@ -59,27 +61,37 @@ public final class CertificateWriter {
      * @throws IOException when a file cannot be written; the certificate is then not replaced
      */
     public static Written write(Certificate c, Path target) throws IOException {
-        return write(c, target, INLINE_DRAT_LIMIT);
+        return write(c, target, INLINE_PROOF_LIMIT);
     }
 
     /** As {@link #write(Certificate, Path)}, with proofs longer than {@code inlineLimit} bytes written beside. */
     static Written write(Certificate c, Path target, int inlineLimit) throws IOException {
-        byte[] drat = c.refutation().drat().getBytes(StandardCharsets.US_ASCII);
-        Optional<Path> dratFile = Optional.empty();
-        if (drat.length > inlineLimit) {
-            Path file = dratFile(target);
-            AtomicFiles.write(file, gzip(drat));
-            dratFile = Optional.of(file);
+        byte[] proof = proof(c).getBytes(StandardCharsets.US_ASCII);
+        Optional<Path> proofFile = Optional.empty();
+        if (proof.length > inlineLimit) {
+            Path file = proofFile(target, c.lrat().isPresent());
+            AtomicFiles.write(file, gzip(proof));
+            proofFile = Optional.of(file);
         }
-        Json.Obj content = content(c, dratFile.map(p -> p.getFileName().toString()));
+        Json.Obj content = content(c, proofFile.map(p -> p.getFileName().toString()));
         Json.Obj document = document(c, content);
         AtomicFiles.writeJson(target, document);
-        return new Written(target, dratFile, sha256(content));
+        return new Written(target, proofFile, sha256(content));
     }
 
-    /** Where a proof too long to inline goes beside {@code certificate}: "c5.json" gives "c5.drat.gz". */
-    public static Path dratFile(Path certificate) {
-        return certificate.resolveSibling(baseName(certificate) + ".drat.gz");
+    /** The proof text the certificate states: its LRAT when it has one, else the refutation's DRAT. */
+    private static String proof(Certificate c) {
+        return c.lrat().orElse(c.refutation().drat());
+    }
+
+    /** Where a proof too long to inline goes beside {@code certificate}: "c5.json" gives "c5.drat.gz" or "c5.lrat.gz". */
+    public static Path proofFile(Path certificate, boolean lrat) {
+        return certificate.resolveSibling(baseName(certificate) + (lrat ? ".lrat.gz" : ".drat.gz"));
+    }
+
+    /** Both files a proof of {@code certificate} may be written to, DRAT first. */
+    public static List<Path> proofFiles(Path certificate) {
+        return List.of(proofFile(certificate, false), proofFile(certificate, true));
     }
 
     /** The file name without a final {@code .json}: "c5.json" gives "c5". */
@@ -101,9 +113,9 @@ public final class CertificateWriter {
     }
 
     /**
-     * The hashed content; the proof inline, or named by {@code dratFile} with its digest.
+     * The hashed content; the proof inline, or named by {@code proofFile} with its digest.
      */
-    public static Json.Obj content(Certificate c, Optional<String> dratFile) {
+    public static Json.Obj content(Certificate c, Optional<String> proofFile) {
         return Json.Obj.builder()
                 .put("statement", "minor-minimal non-orientable")
                 .put("core", Json.Obj.builder()
@@ -112,7 +124,7 @@ public final class CertificateWriter {
                         .put("bases", new Json.Arr(c.core().bases().stream().<Json>map(Json.Arr::ofInts).toList()))
                         .build())
                 .put("provenance", provenance(c.provenance()))
-                .put("nonOrientability", nonOrientability(c, dratFile))
+                .put("nonOrientability", nonOrientability(c, proofFile))
                 .put("minimality", new Json.Arr(c.minimality().stream().<Json>map(w -> Json.Obj.builder()
                         .put("element", w.element())
                         .put("deletion", witness(w.deletion()))
@@ -187,14 +199,14 @@ public final class CertificateWriter {
                 .build()).build();
     }
 
-    private static Json.Obj nonOrientability(Certificate c, Optional<String> dratFile) {
-        Refutation r = c.refutation();
-        Json.Obj.Builder b = refutationCnf(c.core(), r);
-        if (dratFile.isPresent()) {
-            b.put("dratFile", dratFile.get())
-                    .put("dratSha256", Sha256.hex(r.drat().getBytes(StandardCharsets.US_ASCII)));
+    private static Json.Obj nonOrientability(Certificate c, Optional<String> proofFile) {
+        Json.Obj.Builder b = refutationCnf(c.core(), c.refutation());
+        String kind = c.lrat().isPresent() ? "lrat" : "drat";
+        if (proofFile.isPresent()) {
+            b.put(kind + "File", proofFile.get())
+                    .put(kind + "Sha256", Sha256.hex(proof(c).getBytes(StandardCharsets.US_ASCII)));
         } else {
-            b.put("drat", r.drat());
+            b.put(kind, proof(c));
         }
         return b.build();
     }
@@ -249,7 +261,7 @@ public final class CertificateWriter {
                     .put("millis", p.millis())
                     .build());
         }
-        return run.put("refutation", Json.Obj.builder()
+        run.put("refutation", Json.Obj.builder()
                         .put("bases", s.bases())
                         .put("relations", c.refutation().relations().size())
                         .put("clauses", s.clauses())
@@ -259,8 +271,15 @@ public final class CertificateWriter {
                         .put("deletions", c.refutation().stats().deletions())
                         .put("dratBytes", c.refutation().drat().length())
                         .put("millis", s.millis())
-                        .build())
-                .build();
+                        .build());
+        if (c.lrat().isPresent()) {
+            String lrat = c.lrat().get();
+            run.put("lrat", Json.Obj.builder()
+                    .put("steps", lrat.lines().filter(l -> !l.contains(" d ")).count())
+                    .put("bytes", lrat.length())
+                    .build());
+        }
+        return run.build();
     }
 
     private static byte[] gzip(byte[] bytes) {

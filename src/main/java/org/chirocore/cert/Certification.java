@@ -8,7 +8,7 @@ import org.chirocore.search.MinimalCore;
  * The certificate of a minimal core, or why there is none: re-solves the core's own clauses
  * with proof logging ({@link RefutationSearch}) and assembles the {@link Certificate}, which
  * re-checks every witness. Costs one orientability decision of the core plus one relation scan
- * per witness.
+ * per witness, and for an LRAT proof one forward pass over the DRAT proof.
  */
 public sealed interface Certification {
 
@@ -47,7 +47,8 @@ public sealed interface Certification {
     static Certification of(CoreFinding found, Budget budget, CertificateForms forms) {
         RefutationSearch.Outcome outcome = new RefutationSearch(budget, forms.trimRelations()).refute(found.core());
         if (outcome instanceof RefutationSearch.Refuted r) {
-            return new Certified(Certificate.of(found, r.refutation(), forms.witnesses()));
+            Certificate c = Certificate.of(found, r.refutation(), forms.witnesses());
+            return new Certified(forms.lratProof() ? c.withLrat() : c);
         }
         if (outcome instanceof RefutationSearch.OutOfBudget o) {
             return new OutOfBudget(o.reason());

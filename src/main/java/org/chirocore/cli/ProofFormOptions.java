@@ -8,7 +8,8 @@ import picocli.CommandLine.Option;
 
 /**
  * How a certifying command states its proofs (docs/certificate-format.md): the minimality
- * witnesses ({@code minimality}) and the relations of the refutation ({@code nonOrientability}).
+ * witnesses ({@code minimality}), and the relations and the clausal proof of the refutation
+ * ({@code nonOrientability}).
  */
 final class ProofFormOptions {
     @ArgGroup(exclusive = true)
@@ -19,6 +20,13 @@ final class ProofFormOptions {
                     + "unsatisfiable core found by the solver (not necessarily minimal). A smaller certificate, verified "
                     + "faster, for one more search. Default: every relation the search added.")
     private boolean trim;
+
+    @Option(names = "--lrat-proof",
+            description = "Write the refutation's proof as LRAT: every step with the clauses unit propagation uses to "
+                    + "check it, and only the steps the empty clause needs. The verifier then follows the hints instead "
+                    + "of propagating, which is much faster for large proofs; the file is larger (gzip-compressed beside "
+                    + "the certificate as NAME.lrat.gz when over 1 MiB). Default: the solver's DRAT proof.")
+    private boolean lrat;
 
     /** At most one of the options: the forms do not combine (a transported witness names signs). */
     static final class Choice {
@@ -40,6 +48,6 @@ final class ProofFormOptions {
     CertificateForms forms() {
         WitnessForms witnesses = choice == null ? WitnessForms.SIGNS
                 : choice.orbits ? WitnessForms.ORBITS : choice.matrices ? WitnessForms.MATRICES : WitnessForms.SIGNS;
-        return new CertificateForms(witnesses, trim);
+        return new CertificateForms(witnesses, trim, lrat);
     }
 }

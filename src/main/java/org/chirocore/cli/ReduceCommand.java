@@ -112,7 +112,7 @@ final class ReduceCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         // A large proof goes beside the certificate, so its name is an output too.
-        output.checkFiles(Arrays.asList(inputs.file()), out, CertificateWriter.dratFile(out), witnessOut,
+        output.checkFiles(Arrays.asList(inputs.file()), out, CertificateWriter.proofFile(out, proofForms.forms().lratProof()), witnessOut,
                 smallest ? smallestRecord(out) : null);
         Subject input = inputs.choose();
         CoreConstraints constraints = constraints(input);
@@ -265,10 +265,10 @@ final class ReduceCommand implements Callable<Integer> {
         Refutation proof = certificate.refutation();
         w.println("proof: " + proof.relations().size() + " relations, " + proof.stats().lemmas() + " lemmas, "
                 + proof.stats().deletions() + " deletions, " + proof.drat().length() + " bytes of DRAT, "
-                + proof.stats().solve().millis() + " ms");
+                + proof.stats().solve().millis() + " ms" + certificate.lrat().map(l -> "; written as " + l.length() + " bytes of LRAT").orElse(""));
         CertificateWriter.Written written = v.written();
         w.println("wrote " + written.certificate() + " (sha256 " + written.sha256() + ")"
-                + written.dratFile().map(d -> " and " + d).orElse(""));
+                + written.proofFile().map(d -> " and " + d).orElse(""));
         w.println(Format.verified(v.verification()));
     }
 }

@@ -174,8 +174,10 @@ public final class FamilyMerge {
         Path target = out.resolve(name);
         if (!source.toAbsolutePath().normalize().equals(target.toAbsolutePath().normalize())) {
             AtomicFiles.copy(source, target);
-            if (Files.exists(CertificateWriter.dratFile(source))) {
-                AtomicFiles.copy(CertificateWriter.dratFile(source), CertificateWriter.dratFile(target));
+            for (Path proof : CertificateWriter.proofFiles(source)) {
+                if (Files.exists(proof)) {
+                    AtomicFiles.copy(proof, target.resolveSibling(proof.getFileName()));
+                }
             }
         }
         VerificationReport report = CertificateVerifier.verify(target);

@@ -178,7 +178,7 @@ public final class CertifiedReduction {
                     + Limits.CERTIFIED_RELATIONS + " a certificate may list (the verifier's limit); nothing was written");
         }
         CertificateWriter.Written written = CertificateWriter.write(certificate, out);
-        return new Verified(certificate, written, verifyWritten(out, written.dratFile(), input));
+        return new Verified(certificate, written, verifyWritten(out, written.proofFile(), input));
     }
 
     /**
@@ -206,12 +206,12 @@ public final class CertifiedReduction {
     }
 
     /** Verifies {@code out}; on rejection removes it and its proof file and throws. */
-    private static Checked verifyWritten(Path out, Optional<Path> dratFile, Optional<Path> input) throws IOException {
+    private static Checked verifyWritten(Path out, Optional<Path> proofFile, Optional<Path> input) throws IOException {
         VerificationReport report = CertificateVerifier.verify(out, input);
         if (!report.passed()) {
             Files.deleteIfExists(out);
-            if (dratFile.isPresent()) {
-                Files.deleteIfExists(dratFile.get());
+            if (proofFile.isPresent()) {
+                Files.deleteIfExists(proofFile.get());
             }
             throw new IllegalStateException("The verifier rejected the certificate just written to " + out + " ("
                     + firstFailure(report) + "); it was removed.");

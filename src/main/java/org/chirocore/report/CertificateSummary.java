@@ -1,19 +1,16 @@
 package org.chirocore.report;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.zip.GZIPInputStream;
 
 import org.chirocore.io.InputFiles;
 import org.chirocore.cert.CertificateReader;
+import org.chirocore.cert.StatedProof;
 import org.chirocore.io.Json;
 import org.chirocore.io.Sha256;
 import org.chirocore.matroid.ExplicitMatroid;
-import org.chirocore.matroid.Limits;
 
 /**
  * What a report says about a certificate, read from its JSON (docs/certificate-format.md). It
@@ -42,7 +39,8 @@ public record CertificateSummary(String file, String contentSha256, String fileS
     }
 
     /**
-     * Reads the certificate in {@code file}; a {@code dratFile} is read from beside it.
+     * Reads the certificate in {@code file}; a proof file ({@code dratFile}, {@code lratFile}) is
+     * read from beside it and checked against its digest.
      * Cost: linear in the certificate's and the proof's size.
      *
      * @throws ReportException when the file cannot be read or lacks a member
@@ -54,7 +52,7 @@ public record CertificateSummary(String file, String contentSha256, String fileS
             Json.Obj content = cert.requireObject("content");
             return new CertificateSummary(file.getFileName().toString(), cert.requireString("sha256"), Sha256.hex(bytes),
                     CertificateReader.core(content.requireObject("core")), origin(content.requireObject("provenance")),
-                    proof(content.requireObject("nonOrientability"), file.toAbsolutePath().getParent()));
+                    proof(content.requireObject("nonOrientability"), file));
         } catch (IOException | IllegalArgumentException e) {
             throw new ReportException(file + ": cannot be read as a certificate: " + e.getMessage(), e);
         }
@@ -74,28 +72,10 @@ public record CertificateSummary(String file, String contentSha256, String fileS
         return new Origin.Given(g.requireString("sha256"), g.requireInt("elements"), g.requireInt("rank"), contracted, deleted);
     }
 
-    private static ProofSize proof(Json.Obj proof, Path dir) throws IOException {
-        int relations = proof.requireArray("relations").size();
-        if (proof.has("lrat")) {
-            return size(relations, "LRAT", proof.requireString("lrat"));
-        }
-        if (proof.has("drat")) {
-            return size(relations, "DRAT", proof.requireString("drat"));
-        }
-        String name = proof.requireString("dratFile");
-        try (InputStream raw = Files.newInputStream(dir.resolve(name));
-                InputStream in = name.endsWith(".gz") ? new GZIPInputStream(raw) : raw) {
-            byte[] text = InputFiles.readUpTo(in, Limits.PROOF_BYTES, "the proof file " + name);
-            return size(relations, "DRAT", new String(text, StandardCharsets.UTF_8));
-        }
-    }
-
-    /** Counts the lines that add a clause; in LRAT a deletion line is {@code id d ...}. */
-    private static ProofSize size(int relations, String kind, String text) {
-        long lemmas = text.lines().map(String::trim)
-                .filter(l -> !l.isEmpty() && !l.startsWith("c") && !l.startsWith("d") && !l.matches("\\d+\\s+d\\b.*"))
-                .count();
-        return new ProofSize(relations, kind, lemmas, text.getBytes(StandardCharsets.UTF_8).length);
+    private static ProofSize proof(Json.Obj proof, Path certificate) throws IOException {
+        StatedProof stated = StatedProof.read(proof, certificate);
+        return new ProofSize(proof.requireArray("relations").size(), stated.lrat() ? "LRAT" : "DRAT", stated.steps(),
+                stated.text().getBytes(StandardCharsets.US_ASCII).length);
     }
 
     private static List<String> strings(Json.Arr array, String what) {

@@ -153,16 +153,17 @@ public final class SweepMerge {
         return reference.withPairs(new ArrayList<>(pairs.values()));
     }
 
-    /** Copies a checked pair's certificates (and their DRAT files) from its shard into the merged directory. */
+    /** Copies a checked pair's certificates (and their proof files) from its shard into the merged directory. */
     private record Copy(PairResult pair, Path from, Path to) {
         void run() throws IOException {
             Files.createDirectories(to);
             for (String file : files(pair)) {
                 Path source = from.resolve(file);
                 Files.copy(source, to.resolve(file), StandardCopyOption.REPLACE_EXISTING);
-                Path drat = from.resolve(CertificateWriter.baseName(source) + ".drat.gz");
-                if (Files.exists(drat)) {
-                    Files.copy(drat, to.resolve(drat.getFileName()), StandardCopyOption.REPLACE_EXISTING);
+                for (Path proof : CertificateWriter.proofFiles(source)) {
+                    if (Files.exists(proof)) {
+                        Files.copy(proof, to.resolve(proof.getFileName()), StandardCopyOption.REPLACE_EXISTING);
+                    }
                 }
             }
         }

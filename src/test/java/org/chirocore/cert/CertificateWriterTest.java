@@ -76,7 +76,7 @@ class CertificateWriterTest {
         Certificate c = certify(given, construction);
         Path file = dir.resolve(name + ".json");
         CertificateWriter.Written written = CertificateWriter.write(c, file);
-        assertEquals(Optional.empty(), written.dratFile(), "small proofs are inline");
+        assertEquals(Optional.empty(), written.proofFile(), "small proofs are inline");
 
         Json.Obj doc = read(file);
         assertEquals(List.of("format", "version", "tool", "sha256", "content", "run"),
@@ -175,7 +175,7 @@ class CertificateWriterTest {
         Certificate c = certify(NamedMatroids.fano(), null);
         Path file = dir.resolve("fano.json");
         CertificateWriter.Written written = CertificateWriter.write(c, file, 0);
-        assertEquals(Optional.of(dir.resolve("fano.drat.gz")), written.dratFile());
+        assertEquals(Optional.of(dir.resolve("fano.drat.gz")), written.proofFile());
         Json.Obj proof = read(file).requireObject("content").requireObject("nonOrientability");
         assertEquals(List.of("normalised", "relations", "dratFile", "dratSha256"),
                 List.copyOf(proof.members().keySet()));
