@@ -62,19 +62,18 @@ class DratCheckerTest {
     }
 
     @Test
-    void aLongProofWithDeletionsIsAcceptedAndCheckedNoSlowerThanFound() {
+    void aLongProofWithDeletionsIsAcceptedAndItsLratToo() {
         Cnf cnf = pigeonhole(8);
-        long start = System.nanoTime();
         String drat = TestCertificates.proof(cnf.variables(), cnf.clauses(), SolverFactory::newDefault);
-        long found = System.nanoTime() - start;
-        start = System.nanoTime();
         DratChecker.Outcome outcome = DratChecker.check(cnf, drat);
-        long checked = System.nanoTime() - start;
         assertTrue(outcome.valid(), outcome::failure);
         assertFalse(outcome.summary().contains(" 0 deletions applied"), outcome.summary());
-        // generous factor: the point is no per-lemma rescans, not a benchmark
-        assertTrue(checked < 3 * found + 1_000_000_000L, "checking " + checked / 1_000_000 + " ms, finding " + found / 1_000_000 + " ms");
-        assertEquals(Optional.empty(), LratChecker.check(cnf, LratConversion.convert(cnf.variables(), cnf.clauses(), drat)));
+        String lrat = LratConversion.convert(cnf.variables(), cnf.clauses(), drat);
+        assertEquals(Optional.empty(), LratChecker.check(cnf, lrat));
+        // the conversion keeps only the lemmas the empty clause needs, so it never has more lines than the DRAT has lemmas
+        // plus one unit step per variable
+        long lemmas = drat.lines().filter(l -> !l.startsWith("d")).count();
+        assertTrue(lrat.lines().filter(l -> !l.contains(" d ")).count() <= lemmas + cnf.variables());
     }
 
     @Test
