@@ -14,6 +14,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
 
+import org.chirocore.check.CertificateVerifier;
+import org.chirocore.check.VerificationReport;
 import org.chirocore.fixtures.NamedMatroids;
 import org.chirocore.io.Json;
 import org.chirocore.io.Sha256;
@@ -185,6 +187,21 @@ class CertificateWriterTest {
         // export decompresses it and checks its digest
         Path out = Files.createDirectory(dir.resolve("out"));
         assertEquals(c.refutation().drat(), Files.readString(CertificateExport.export(file, out, false).drat()));
+    }
+
+    @Test
+    void largeLratProofGoesCompressedBesideAndVerifies() throws IOException {
+        Certificate c = certify(NamedMatroids.fano(), null).withLrat();
+        Path file = dir.resolve("fano.json");
+        CertificateWriter.Written written = CertificateWriter.write(c, file, 0);
+        assertEquals(Optional.of(dir.resolve("fano.lrat.gz")), written.proofFile());
+        Json.Obj proof = read(file).requireObject("content").requireObject("nonOrientability");
+        assertEquals(List.of("normalised", "relations", "lratFile", "lratSha256"), List.copyOf(proof.members().keySet()));
+        assertEquals(Sha256.hex(c.lrat().orElseThrow().getBytes(StandardCharsets.US_ASCII)), proof.requireString("lratSha256"));
+        VerificationReport report = CertificateVerifier.verify(file);
+        assertTrue(report.passed(), report::toString);
+        Path out = Files.createDirectory(dir.resolve("out"));
+        assertEquals(c.lrat().orElseThrow(), Files.readString(CertificateExport.export(file, out, true).lrat().orElseThrow()));
     }
 
     private static int[] ints(Json json) {
