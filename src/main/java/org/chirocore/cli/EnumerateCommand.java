@@ -76,6 +76,9 @@ final class EnumerateCommand implements Callable<Integer> {
     @Mixin
     private BudgetOptions budget;
 
+    @Mixin
+    private ProofFormOptions proofForms;
+
     @Option(names = "--total-time", paramLabel = "SECONDS", defaultValue = "0",
             description = "Wall-clock limit of the enumeration (not of the certificates written after it), after which "
                     + "it ends incomplete with the classes found so far; 0 (default) for none.")
@@ -165,7 +168,7 @@ final class EnumerateCommand implements Callable<Integer> {
     private Optional<CertificateWriter.Written> certify(CoreEnumeration.CoreClass c, Subject input, int k) {
         try {
             CertifiedReduction.Outcome outcome = CertifiedReduction.certify(CoreFinding.searched(c.example(),
-                    input.source()), budget.budget(), out.resolve(certificateName(k)), input.file());
+                    input.source()), budget.budget(), out.resolve(certificateName(k)), input.file(), proofForms.forms());
             return outcome instanceof CertifiedReduction.Verified v ? Optional.of(v.written()) : Optional.empty();
         } catch (IOException e) {
             throw new BadInputException(out.resolve(certificateName(k)) + ": cannot write the certificate: " + e, e);

@@ -41,6 +41,21 @@ class EnumerateCommandTest {
         assertTrue(Files.readString(dir.resolve("summary.md")).contains("**complete**"));
     }
 
+    /** The same class, its certificate written with matrix witnesses and an LRAT proof. */
+    @Test
+    void theClassCertificateTakesTheProofForms() throws IOException {
+        CliRun r = CliRun.of("enumerate", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111", "--out",
+                dir.toString(), "--matrix-witnesses", "--lrat-proof");
+        assertEquals(0, r.exit(), r.err() + r.out());
+        Json.Obj content = Json.parse(Files.readString(dir.resolve("class-1.cert.json"))).asObject("certificate")
+                .requireObject("content");
+        assertTrue(content.requireObject("nonOrientability").has("lrat"));
+        // F7's single-element minors are realised by the real 3-cube (docs/realisations.md)
+        assertTrue(content.requireArray("minimality").elements().stream().map(e -> e.asObject("entry").require("deletion"))
+                .anyMatch(w -> w instanceof Json.Obj o && o.has("matrix")), content.requireArray("minimality").toString());
+        assertTrue(CertificateVerifier.verify(dir.resolve("class-1.cert.json"), Optional.empty()).passed());
+    }
+
     @Test
     void badOptionsAreBadInput() {
         assertEquals(2, CliRun.of("enumerate", "--cube", "3", "--hyperplane", "100,010,001", "--pull", "111",
