@@ -84,7 +84,7 @@ class ReadableCertificateTest {
         Json.Obj document = CertificateReader.readChecked(FANO);
         VerificationReport report = verify(ReadableCertificate.variant(document, tampered));
         assertFalse(report.passed());
-        assertEquals(VerificationReport.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
+        assertEquals(VerificationReport.Status.FAIL, report.check(CertificateVerifier.PROOF).status(), report.toString());
         assertTrue(verify(ReadableCertificate.variant(document, proof)).passed());
     }
 }

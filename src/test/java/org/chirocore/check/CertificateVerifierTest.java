@@ -150,7 +150,7 @@ class CertificateVerifierTest {
         for (int i = 0; i < lemmas; i++) {
             VerificationReport r = verify(tamper(corner, new Json.Str(editLine(proof, i, null)), "nonOrientability", "drat"));
             if (!r.passed()) {
-                assertRejected(r, CertificateVerifier.DRAT, "line ");
+                assertRejected(r, CertificateVerifier.PROOF, "line ");
                 someNeeded = true;
             }
         }
@@ -171,7 +171,7 @@ class CertificateVerifierTest {
             }
         }
         assertTrue(rejected != null, "every unit lemma is RUP here");
-        assertRejected(rejected, CertificateVerifier.DRAT, "line 1: lemma " + altered + " is neither RUP nor RAT");
+        assertRejected(rejected, CertificateVerifier.PROOF, "line 1: lemma " + altered + " is neither RUP nor RAT");
     }
 
     @Test
@@ -179,7 +179,7 @@ class CertificateVerifierTest {
         // with only the first relation kept, the regenerated CNF is satisfiable, so no proof can pass
         Json.Arr relations = array(corner, "content", "nonOrientability", "relations");
         VerificationReport r = verify(tamper(corner, new Json.Arr(List.of(relations.get(0))), "nonOrientability", "relations"));
-        assertRejected(r, CertificateVerifier.DRAT, "line ");
+        assertRejected(r, CertificateVerifier.PROOF, "line ");
         // the proof needs the relations of some X: dropping them all leaves a lemma unjustified
         boolean someNeeded = false;
         for (int x = 0; x < 7; x++) {
@@ -191,7 +191,7 @@ class CertificateVerifierTest {
             }
             VerificationReport without = verify(tamper(corner, new Json.Arr(fewer), "nonOrientability", "relations"));
             if (!without.passed()) {
-                assertRejected(without, CertificateVerifier.DRAT, "line ");
+                assertRejected(without, CertificateVerifier.PROOF, "line ");
                 someNeeded = true;
             }
         }
@@ -350,7 +350,7 @@ class CertificateVerifierTest {
         String text = fano.toText();
         VerificationReport r = verify(text.substring(0, text.length() / 2));
         assertRejected(r, CertificateVerifier.FORMAT, "not valid JSON: line ");
-        assertEquals(Status.NOT_RUN, r.check(CertificateVerifier.DRAT).status());
+        assertEquals(Status.NOT_RUN, r.check(CertificateVerifier.PROOF).status());
     }
 
     @Test

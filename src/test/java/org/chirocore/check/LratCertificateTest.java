@@ -76,7 +76,7 @@ class LratCertificateTest {
     void anLratProofIsCheckedByItsHints() throws IOException {
         VerificationReport report = CertificateVerifier.verify(withLrat(UnaryOperator.identity()), Optional.empty());
         assertTrue(report.passed(), report.toString());
-        assertTrue(report.check(CertificateVerifier.DRAT).detail().contains("LRAT"));
+        assertTrue(report.check(CertificateVerifier.PROOF).detail().contains("LRAT"));
     }
 
     @Test
@@ -98,7 +98,7 @@ class LratCertificateTest {
             }
             return lrat.replaceFirst(java.util.regex.Pattern.quote(first), shorter.toString().trim());
         }), Optional.empty());
-        assertEquals(VerificationReport.Status.FAIL, report.check(CertificateVerifier.DRAT).status(), report.toString());
+        assertEquals(VerificationReport.Status.FAIL, report.check(CertificateVerifier.PROOF).status(), report.toString());
     }
 
     /**
@@ -126,7 +126,7 @@ class LratCertificateTest {
     void anLratProofFileBesideTheCertificateIsCheckedByItsHints() throws IOException {
         VerificationReport report = verify(withLratFile(UnaryOperator.identity()));
         assertTrue(report.passed(), report.toString());
-        String detail = report.check(CertificateVerifier.DRAT).detail();
+        String detail = report.check(CertificateVerifier.PROOF).detail();
         assertTrue(detail.matches("the empty clause is derived \\(LRAT hints checked: [1-9]\\d* lemmas, [1-9]\\d* hints, [1-9]\\d* "
                 + "propagation steps\\)"), detail);
     }
@@ -134,19 +134,19 @@ class LratCertificateTest {
     @Test
     void anLratProofFileWithAnotherHashIsRejectedNamingTheFile() throws IOException {
         assertRejected(verify(TestCertificates.tamper(withLratFile(UnaryOperator.identity()), new Json.Str("0".repeat(64)),
-                "nonOrientability", "lratSha256")), CertificateVerifier.DRAT, "the uncompressed corner-n4.lrat.gz hashes to ");
+                "nonOrientability", "lratSha256")), CertificateVerifier.PROOF, "the uncompressed corner-n4.lrat.gz hashes to ");
     }
 
     @Test
     void aMissingOrLinkedLratProofFileIsRefused() throws IOException {
         Json.Obj cert = withLratFile(UnaryOperator.identity());
         assertRejected(verify(TestCertificates.tamper(cert, new Json.Str("absent.lrat.gz"), "nonOrientability", "lratFile")),
-                CertificateVerifier.DRAT, "the proof file absent.lrat.gz does not exist");
+                CertificateVerifier.PROOF, "the proof file absent.lrat.gz does not exist");
         assertRejected(verify(TestCertificates.tamper(cert, new Json.Str("../corner-n4.lrat.gz"), "nonOrientability", "lratFile")),
-                CertificateVerifier.DRAT, "lratFile \"../corner-n4.lrat.gz\" must be a plain file name beside the certificate");
+                CertificateVerifier.PROOF, "lratFile \"../corner-n4.lrat.gz\" must be a plain file name beside the certificate");
         Files.move(dir.resolve("corner-n4.lrat.gz"), dir.resolve("real.lrat.gz"));
         Files.createSymbolicLink(dir.resolve("corner-n4.lrat.gz"), dir.resolve("real.lrat.gz"));
-        assertRejected(verify(cert), CertificateVerifier.DRAT,
+        assertRejected(verify(cert), CertificateVerifier.PROOF,
                 "the proof file corner-n4.lrat.gz is a symbolic link; it must be a regular file beside the certificate");
     }
 
@@ -175,6 +175,6 @@ class LratCertificateTest {
             lines.set(first[0], line.substring(0, line.lastIndexOf(' ', line.length() - 3)) + " 999999999 0");
             return String.join("\n", lines) + "\n";
         });
-        assertRejected(verify(cert), CertificateVerifier.DRAT, "line " + (first[0] + 1) + ": hint 999999999 names no live clause");
+        assertRejected(verify(cert), CertificateVerifier.PROOF, "line " + (first[0] + 1) + ": hint 999999999 names no live clause");
     }
 }

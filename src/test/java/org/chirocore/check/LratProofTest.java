@@ -84,7 +84,7 @@ class LratProofTest {
         String changed = text.substring(0, text.length() - last.length() - 1) + String.join(" ", t) + "\n";
         Json.Obj tampered = TestCertificates.tamper(lrat, new Json.Str(changed), "nonOrientability", "lrat");
         assertRejected(CertificateVerifier.verify(TestCertificates.bytes(tampered), dir, Optional.empty()),
-                CertificateVerifier.DRAT, "line ");
+                CertificateVerifier.PROOF, "line ");
     }
 
     @Test

@@ -63,19 +63,19 @@ class MutationAndFileTest {
     @Test
     void aProofFileWithAnotherHashIsRejected() {
         assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("0".repeat(64)), "nonOrientability", "dratSha256")),
-                CertificateVerifier.DRAT, "corner.drat.gz hashes to");
+                CertificateVerifier.PROOF, "corner.drat.gz hashes to");
     }
 
     @Test
     void aProofFileOutsideTheCertificatesDirectoryIsRefused() {
         assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("../corner.drat.gz"), "nonOrientability", "dratFile")),
-                CertificateVerifier.DRAT, "must be a plain file name beside the certificate");
+                CertificateVerifier.PROOF, "must be a plain file name beside the certificate");
     }
 
     @Test
     void aMissingProofFileIsAFailureNotAnException() {
         assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("absent.drat"), "nonOrientability", "dratFile")),
-                CertificateVerifier.DRAT, "the proof file absent.drat does not exist");
+                CertificateVerifier.PROOF, "the proof file absent.drat does not exist");
     }
 
     @Test

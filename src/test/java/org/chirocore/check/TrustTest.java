@@ -105,7 +105,7 @@ class TrustTest {
         Json.Obj withFile = MutationAndFileTest.withProofFile(elsewhere);
         Files.move(elsewhere.resolve("corner.drat.gz"), dir.resolve("real.drat.gz"));
         Files.createSymbolicLink(dir.resolve("corner.drat.gz"), dir.resolve("real.drat.gz"));
-        assertRejected(verify(withFile, dir, Optional.empty()), CertificateVerifier.DRAT,
+        assertRejected(verify(withFile, dir, Optional.empty()), CertificateVerifier.PROOF,
                 "the proof file corner.drat.gz is a symbolic link; it must be a regular file beside the certificate");
     }
 
@@ -125,7 +125,7 @@ class TrustTest {
             System.out.println("WARNING: mkfifo is not available; the FIFO test did not run.");
             return;
         }
-        assertRejected(verify(withFile, dir, Optional.empty()), CertificateVerifier.DRAT,
+        assertRejected(verify(withFile, dir, Optional.empty()), CertificateVerifier.PROOF,
                 "the proof file corner.drat.gz is not a regular file");
         assertRejected(CertificateVerifier.verify(fifo), CertificateVerifier.FORMAT, "cannot read the file: not a regular file");
     }

@@ -39,7 +39,7 @@ class VerifyCommandTest {
         CliRun run = CliRun.of("verify", good.toString());
         assertEquals(0, run.exit(), run.out() + run.err());
         assertTrue(run.out().contains("PASS     basis exchange: "), run.out());
-        assertTrue(run.out().contains("PASS     drat proof: the empty clause is derived"), run.out());
+        assertTrue(run.out().contains("PASS     clausal proof: the empty clause is derived"), run.out());
         assertTrue(run.out().contains("good.json: verified (checked in "), run.out());
         // named after the check passed: the corner construction at n = 3 is the Fano plane
         assertTrue(run.out().contains("good.json: isomorphism class of the core: the Fano plane F7 (J. Oxley"), run.out());

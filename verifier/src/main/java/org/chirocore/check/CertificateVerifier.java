@@ -46,11 +46,11 @@ public final class CertificateVerifier {
     public static final String CORE = "basis exchange";
     public static final String NORMALISATION = "normalisation";
     public static final String RELATIONS = "relations";
-    public static final String DRAT = "drat proof";
+    public static final String PROOF = "clausal proof";
     public static final String MINIMALITY = "minimality witnesses";
     public static final String PROVENANCE = "provenance";
     /** The check names, in the spec's order. */
-    public static final List<String> CHECKS = List.of(FORMAT, HASH, CORE, NORMALISATION, RELATIONS, DRAT, MINIMALITY, PROVENANCE);
+    public static final List<String> CHECKS = List.of(FORMAT, HASH, CORE, NORMALISATION, RELATIONS, PROOF, MINIMALITY, PROVENANCE);
 
     private CertificateVerifier() {
     }
@@ -130,8 +130,8 @@ public final class CertificateVerifier {
         checks.add(run(NORMALISATION, v::normalisation));
         Check relations = run(RELATIONS, v::relations);
         checks.add(relations);
-        checks.add(relations.status() == Status.PASS ? run(DRAT, v::drat)
-                : new Check(DRAT, Status.NOT_RUN, "not checked because a relation is invalid"));
+        checks.add(relations.status() == Status.PASS ? run(PROOF, v::drat)
+                : new Check(PROOF, Status.NOT_RUN, "not checked because a relation is invalid"));
         checks.add(run(MINIMALITY, v::minimality));
         checks.add(run(PROVENANCE, v::provenance));
         return new VerificationReport(source, checks, elapsed(start));

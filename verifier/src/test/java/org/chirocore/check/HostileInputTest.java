@@ -34,8 +34,8 @@ class HostileInputTest {
         assertEquals(4, lines.size(), out);
         assertTrue(lines.get(0).contains("FAIL after the hash: basis exchange: basis exchange fails: no y in"), lines.get(0));
         assertTrue(lines.get(1).contains("minimality witnesses: the sign witnesses need "), lines.get(1));
-        assertTrue(lines.get(2).contains("drat proof: line ") && lines.get(2).contains("propagation steps, the verifier's limit"), lines.get(2));
-        assertTrue(lines.get(3).contains("drat proof: cannot read: the uncompressed bomb.drat.gz has more than " + VerifierLimits.MAX_PROOF_BYTES),
+        assertTrue(lines.get(2).contains("clausal proof: line ") && lines.get(2).contains("propagation steps, the verifier's limit"), lines.get(2));
+        assertTrue(lines.get(3).contains("clausal proof: cannot read: the uncompressed bomb.drat.gz has more than " + VerifierLimits.MAX_PROOF_BYTES),
                 lines.get(3));
         lines.forEach(l -> assertTrue(l.contains("REJECTED; FAIL after the hash: ") && !l.contains("after the hash: none"), l));
     }
