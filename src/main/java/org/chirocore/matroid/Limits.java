@@ -56,7 +56,8 @@ public final class Limits {
 
     /**
      * Largest proof read from a file beside a certificate, in bytes after decompression (a gzip
-     * proof can inflate a thousandfold); the verifier's own bound is the same.
+     * proof can inflate a thousandfold); the verifier's own bound is the same. The pipeline writes
+     * no certificate whose proof (DRAT, or LRAT with its hints) is larger.
      */
     public static final long PROOF_BYTES = 256L << 20;
 

@@ -136,7 +136,8 @@ public final class CertifiedReduction {
     /**
      * Certifies {@code found}, writes the certificate to {@code out} (a large proof beside it)
      * and verifies the written file. Returns {@link Verified} or {@link Unknown} (a budget ran out,
-     * or the proof lists more relations than {@link Limits#CERTIFIED_RELATIONS}; nothing written).
+     * or the proof lists more relations than {@link Limits#CERTIFIED_RELATIONS} or has more bytes
+     * than {@link Limits#PROOF_BYTES}; nothing written).
      *
      * @throws IOException when a file cannot be written
      * @throws IllegalStateException when the core turns out orientable, a witness fails its
@@ -176,6 +177,11 @@ public final class CertifiedReduction {
         if (relations > Limits.CERTIFIED_RELATIONS) {
             return new Unknown("the proof needs " + relations + " 3-term relations, more than the "
                     + Limits.CERTIFIED_RELATIONS + " a certificate may list (the verifier's limit); nothing was written");
+        }
+        long proofBytes = certificate.lrat().orElse(certificate.refutation().drat()).length();
+        if (proofBytes > Limits.PROOF_BYTES) {
+            return new Unknown("the proof has " + proofBytes + " bytes, more than the " + Limits.PROOF_BYTES
+                    + " a certificate's proof may have (the verifier's limit); nothing was written");
         }
         CertificateWriter.Written written = CertificateWriter.write(certificate, out);
         return new Verified(certificate, written, verifyWritten(out, written.proofFile(), input));
