@@ -67,6 +67,14 @@ class MutationAndFileTest {
     }
 
     @Test
+    void aTruncatedGzipProofFileIsRejectedByName() throws IOException {
+        byte[] whole = Files.readAllBytes(dir.resolve("corner.drat.gz"));
+        Files.write(dir.resolve("cut.drat.gz"), java.util.Arrays.copyOf(whole, whole.length / 2));
+        assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("cut.drat.gz"), "nonOrientability", "dratFile")),
+                CertificateVerifier.PROOF, "the proof file cut.drat.gz is not a complete gzip file");
+    }
+
+    @Test
     void aProofFileOutsideTheCertificatesDirectoryIsRefused() {
         assertRejected(verify(TestCertificates.tamper(withFile, new Json.Str("../corner.drat.gz"), "nonOrientability", "dratFile")),
                 CertificateVerifier.PROOF, "must be a plain file name beside the certificate");

@@ -1,5 +1,6 @@
 package org.chirocore.check;
 
+import java.io.EOFException;
 import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -23,6 +24,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import java.util.zip.GZIPInputStream;
+import java.util.zip.ZipException;
 
 import org.chirocore.check.ParsedCertificate.Witness;
 import org.chirocore.check.VerificationReport.Check;
@@ -359,6 +361,9 @@ public final class CertificateVerifier {
                     return outcome;
                 }
                 in.transferTo(OutputStream.nullOutputStream());
+            } catch (ZipException | EOFException e) {
+                // only decompression throws these: a truncated or corrupted .gz file
+                throw new Failure("the proof file " + Escaping.printable(name) + " is not a complete gzip file (" + e.getMessage() + ")");
             }
             String actual = HexFormat.of().formatHex(sha.digest());
             if (!actual.equals(proof.sha256())) {
