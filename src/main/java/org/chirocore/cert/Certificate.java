@@ -12,7 +12,6 @@ import org.chirocore.matroid.Minor;
 import org.chirocore.matroid.Realisation;
 import org.chirocore.orient.BasisIndex;
 import org.chirocore.orient.Chirotope;
-import org.chirocore.orient.ClauseEncoding;
 import org.chirocore.orient.Normalisation;
 import org.chirocore.orient.Refutation;
 import org.chirocore.orient.WitnessCheck;
@@ -90,13 +89,17 @@ public record Certificate(ExplicitMatroid core, Provenance provenance, Refutatio
      */
     public Certificate withLrat() {
         BasisIndex index = BasisIndex.of(core);
-        List<int[]> cnf = ClauseEncoding.cnf(index, refutation.normalised(), refutation.relations());
         try {
             return new Certificate(core, provenance, refutation, minimality, discovery,
-                    Optional.of(LratConversion.convert(index.basisCount(), cnf, refutation.drat())));
+                    Optional.of(LratConversion.convert(index.basisCount(), refutation.cnf(index), refutation.drat())));
         } catch (IllegalArgumentException e) {
             throw new IllegalStateException("The refutation's DRAT proof does not convert to LRAT: " + e.getMessage(), e);
         }
+    }
+
+    /** The proof text the certificate states: its LRAT when it has one, else the refutation's DRAT. */
+    public String proofText() {
+        return lrat.orElse(refutation.drat());
     }
 
     /** The number of witnesses of the given kind ("signs", "transported" or "matrix"). */

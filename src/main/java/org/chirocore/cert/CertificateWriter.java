@@ -66,7 +66,7 @@ public final class CertificateWriter {
 
     /** As {@link #write(Certificate, Path)}, with proofs longer than {@code inlineLimit} bytes written beside. */
     static Written write(Certificate c, Path target, int inlineLimit) throws IOException {
-        byte[] proof = proof(c).getBytes(StandardCharsets.US_ASCII);
+        byte[] proof = c.proofText().getBytes(StandardCharsets.US_ASCII);
         Optional<Path> proofFile = Optional.empty();
         if (proof.length > inlineLimit) {
             Path file = proofFile(target, c.lrat().isPresent());
@@ -77,11 +77,6 @@ public final class CertificateWriter {
         Json.Obj document = document(c, content);
         AtomicFiles.writeJson(target, document);
         return new Written(target, proofFile, sha256(content));
-    }
-
-    /** The proof text the certificate states: its LRAT when it has one, else the refutation's DRAT. */
-    private static String proof(Certificate c) {
-        return c.lrat().orElse(c.refutation().drat());
     }
 
     /** Where a proof too long to inline goes beside {@code certificate}: "c5.json" gives "c5.drat.gz" or "c5.lrat.gz". */
@@ -204,9 +199,9 @@ public final class CertificateWriter {
         String kind = c.lrat().isPresent() ? "lrat" : "drat";
         if (proofFile.isPresent()) {
             b.put(kind + "File", proofFile.get())
-                    .put(kind + "Sha256", Sha256.hex(proof(c).getBytes(StandardCharsets.US_ASCII)));
+                    .put(kind + "Sha256", Sha256.hex(c.proofText().getBytes(StandardCharsets.US_ASCII)));
         } else {
-            b.put(kind, proof(c));
+            b.put(kind, c.proofText());
         }
         return b.build();
     }
@@ -273,10 +268,10 @@ public final class CertificateWriter {
                         .put("millis", s.millis())
                         .build());
         if (c.lrat().isPresent()) {
-            String lrat = c.lrat().get();
+            StatedProof lrat = new StatedProof(true, c.lrat().get());
             run.put("lrat", Json.Obj.builder()
-                    .put("steps", lrat.lines().filter(l -> !l.contains(" d ")).count())
-                    .put("bytes", lrat.length())
+                    .put("steps", lrat.steps())
+                    .put("bytes", lrat.text().length())
                     .build());
         }
         return run.build();

@@ -126,10 +126,16 @@ public final class LratConversion {
             }
         }
         int[] distinct = Arrays.stream(lits).distinct().toArray();
+        int opposite = 0;
         for (int lit : distinct) {
-            if (Arrays.stream(distinct).anyMatch(l -> l == -lit)) {
-                throw new IllegalArgumentException("Line " + number + " of the DRAT proof is a tautology (" + lit + " and " + -lit + ").");
-            }
+            opposite = opposite == 0 && scratch[Math.abs(lit)] == -Integer.signum(lit) ? lit : opposite;
+            scratch[Math.abs(lit)] = (byte) Integer.signum(lit);
+        }
+        for (int lit : distinct) {
+            scratch[Math.abs(lit)] = 0;
+        }
+        if (opposite != 0) {
+            throw new IllegalArgumentException("Line " + number + " of the DRAT proof is a tautology (" + opposite + " and " + -opposite + ").");
         }
         return distinct;
     }

@@ -178,7 +178,7 @@ public final class CertifiedReduction {
             return new Unknown("the proof needs " + relations + " 3-term relations, more than the "
                     + Limits.CERTIFIED_RELATIONS + " a certificate may list (the verifier's limit); nothing was written");
         }
-        long proofBytes = certificate.lrat().orElse(certificate.refutation().drat()).length();
+        long proofBytes = certificate.proofText().length();
         if (proofBytes > Limits.PROOF_BYTES) {
             return new Unknown("the proof has " + proofBytes + " bytes, more than the " + Limits.PROOF_BYTES
                     + " a certificate's proof may have (the verifier's limit); nothing was written");

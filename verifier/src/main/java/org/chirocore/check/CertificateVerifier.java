@@ -132,7 +132,7 @@ public final class CertificateVerifier {
         checks.add(run(NORMALISATION, v::normalisation));
         Check relations = run(RELATIONS, v::relations);
         checks.add(relations);
-        checks.add(relations.status() == Status.PASS ? run(PROOF, v::drat)
+        checks.add(relations.status() == Status.PASS ? run(PROOF, v::proof)
                 : new Check(PROOF, Status.NOT_RUN, "not checked because a relation is invalid"));
         checks.add(run(MINIMALITY, v::minimality));
         checks.add(run(PROVENANCE, v::provenance));
@@ -318,7 +318,7 @@ public final class CertificateVerifier {
          * The proof refutes the regenerated CNF: an LRAT proof by following its hints (linear in
          * its size), a DRAT proof by unit propagation and RAT.
          */
-        String drat() throws Failure, IOException {
+        String proof() throws Failure, IOException {
             DratChecker.Outcome outcome = c.proofFile().isPresent() ? proofFile(c.proofFile().get())
                     : c.lrat().isPresent() ? LratChecker.check(cnf, new StringReader(c.lrat().get()))
                     : DratChecker.check(cnf, c.drat().get());
